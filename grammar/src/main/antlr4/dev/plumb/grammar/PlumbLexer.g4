@@ -1,0 +1,160 @@
+/*
+ * Tokens of the Plumb calc language.
+ *
+ * Two things need more than plain rules:
+ *  - A unit follows a number with no spaces inside the unit ("2 m", "1.2 kg/m^3", "15 °C").
+ *    After a NUMBER (and after the keyword `in`) the lexer looks ahead; when a unit starts
+ *    there it enters UNIT_MODE, which takes the whole unit text as one UNIT token. The exact
+ *    end of the unit (balanced parentheses, `^-1`, superscripts) is found by scanUnit().
+ *  - Line structure (statement continuation, narrative vs. trailing comments) is decided
+ *    after lexing, by the engine's token filter: COMMENT tokens become NARRATIVE when they
+ *    start a statement line, and NEWLINEs followed by a deeper-indented line are hidden.
+ */
+lexer grammar PlumbLexer;
+
+tokens { NARRATIVE }
+
+@members {
+    /** Absolute char index just past the unit that UNIT_MODE must take. */
+    private int unitEnd = -1;
+
+    /** Words that end an expression; after a number they are keywords, not units. */
+    private static final java.util.Set<String> CLAUSE_WORDS =
+        java.util.Set.of("in", "as", "when", "otherwise", "so", "within", "guess");
+
+    private static boolean isUnitStart(int c) {
+        return Character.isLetter(c) || c == '°' || c == '%';
+    }
+
+    private static boolean isSuperscript(int c) {
+        return c == '²' || c == '³' || c == '¹' || c == '⁰' || (c >= '⁴' && c <= '⁹') || c == '⁻';
+    }
+
+    private static boolean isUnitChar(int c) {
+        return isUnitStart(c) || Character.isDigit(c) || isSuperscript(c)
+            || c == '^' || c == '*' || c == '/' || c == '·' || c == '⋅' || c == '_';
+    }
+
+    /** Returns the LA offset just past the unit that starts at LA offset {@code i}. */
+    private int scanUnit(int i) {
+        int depth = 0;
+        while (true) {
+            int c = _input.LA(i);
+            if (c == '(') { depth++; i++; continue; }
+            if (c == ')') { if (depth == 0) return i; depth--; i++; continue; }
+            if (c == '-' && (_input.LA(i - 1) == '^' || (_input.LA(i - 1) == '(' && _input.LA(i - 2) == '^'))) { i++; continue; }
+            if (isUnitChar(c)) { i++; continue; }
+            return i;
+        }
+    }
+
+    /** The word (letters only) starting at LA offset i. */
+    private String wordAt(int i) {
+        StringBuilder b = new StringBuilder();
+        while (Character.isLetter(_input.LA(i)) && b.length() < 12) { b.appendCodePoint(_input.LA(i)); i++; }
+        return b.toString();
+    }
+
+    private int skipBlanks(int i) {
+        while (_input.LA(i) == ' ' || _input.LA(i) == '\t') i++;
+        return i;
+    }
+
+    /** After a number: enter UNIT_MODE when a unit follows (not a clause keyword such as `in mm`). */
+    private void unitAfterNumber() {
+        int i = skipBlanks(1);
+        if (!isUnitStart(_input.LA(i))) return;
+        String word = wordAt(i);
+        if (CLAUSE_WORDS.contains(word)) {
+            int after = i + word.length();
+            int next = _input.LA(after);
+            boolean standsAlone = !isUnitChar(next) && next != '(';
+            if (standsAlone) {
+                // `5 in in mm`: the first `in` is inches, the second the keyword.
+                if (CLAUSE_WORDS.contains(wordAt(skipBlanks(after)))) standsAlone = false;
+            }
+            if (standsAlone) {
+                boolean keyword = !word.equals("in") && !word.equals("as")
+                    || isUnitStart(_input.LA(skipBlanks(after))) && skipBlanks(after) > after;
+                if (keyword) return;
+            }
+        }
+        unitEnd = _input.index() + scanUnit(i) - 1;
+        pushMode(UNIT_MODE);
+    }
+
+    /** After the keyword `in`: the display unit follows. */
+    private void unitAfterKeyword() {
+        int i = skipBlanks(1);
+        if (i == 1 || !isUnitStart(_input.LA(i))) return;
+        unitEnd = _input.index() + scanUnit(i) - 1;
+        pushMode(UNIT_MODE);
+    }
+
+    /** Takes the rest of the unit found by scanUnit() into the current UNIT token. */
+    private void takeUnit() {
+        while (_input.index() < unitEnd) getInterpreter().consume(_input);
+        popMode();
+    }
+}
+
+TITLE       : 'title';
+AUTHOR      : 'author';
+REVIEWER    : 'reviewer';
+REVISION    : 'revision';
+SECTION     : 'section';
+INPUT       : 'input';
+CHECK       : 'check';
+USE         : 'use';
+FIND        : 'find';
+WITHIN      : 'within';
+GUESS       : 'guess';
+SO          : 'so';
+THAT        : 'that';
+CORRELATION : 'correlation';
+TABLE       : 'table';
+END         : 'end';
+WHEN        : 'when';
+OTHERWISE   : 'otherwise';
+IN          : 'in' { unitAfterKeyword(); };
+AS          : 'as';
+
+NUMBER : ( DIGITS ('.' DIGITS)? | '.' DIGITS ) EXPONENT? { unitAfterNumber(); };
+
+IDENT  : [\p{L}_] [\p{L}\p{Nd}_]*;
+
+STRING              : '"' ( '\\' ~[\r\n] | ~["\\\r\n] )* '"';
+UNTERMINATED_STRING : '"' ( '\\' ~[\r\n] | ~["\\\r\n] )*;
+
+PLUS    : '+';
+MINUS   : '-' | '−';
+STAR    : '*' | '·' | '×' | '⋅';
+SLASH   : '/';
+CARET   : '^';
+LPAREN  : '(';
+RPAREN  : ')';
+COMMA   : ',';
+COLON   : ':';
+DOTDOT  : '..';
+LE      : '<=' | '≤';
+GE      : '>=' | '≥';
+NE      : '!=' | '≠';
+EQ      : '==';
+LT      : '<';
+GT      : '>';
+ASSIGN  : '=';
+
+COMMENT : '#' ~[\r\n]*;
+NEWLINE : ( '\r'? '\n' | '\r' ) [ \t]*;
+WS      : [ \t]+ -> channel(HIDDEN);
+BOM     : '\uFEFF' -> channel(HIDDEN);
+
+/** Anything else: the parser reports it with a clear message. */
+ERROR_CHAR : .;
+
+fragment DIGITS   : [0-9]+;
+fragment EXPONENT : [eE] [+\-]? DIGITS;
+
+mode UNIT_MODE;
+UNIT_GAP : [ \t]+ -> channel(HIDDEN);
+UNIT     : . { takeUnit(); };

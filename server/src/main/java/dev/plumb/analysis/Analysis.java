@@ -1,0 +1,38 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Severity;
+import dev.plumb.syntax.LineMap;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Everything the engine found in one document, immutable.
+ *
+ * @param headers title, author, reviewer, revision as written
+ * @param scope the names the document defines and imports, with their values
+ * @param importedUses for each imported file, the names of it this document uses
+ * @param imports the files this document uses, directly
+ */
+public record Analysis(Path file, String text, LineMap lines, Map<String, String> headers, List<Row> rows,
+                       List<Diagnostic> diagnostics, Scope scope, Map<Path, Set<String>> importedUses,
+                       List<Path> imports) {
+
+    public Analysis {
+        headers = Map.copyOf(headers);
+        rows = List.copyOf(rows);
+        diagnostics = List.copyOf(diagnostics);
+        importedUses = Map.copyOf(importedUses);
+        imports = List.copyOf(imports);
+    }
+
+    public long count(Severity severity) {
+        return diagnostics.stream().filter(d -> d.severity() == severity).count();
+    }
+
+    public boolean hasErrors() {
+        return count(Severity.ERROR) > 0;
+    }
+}

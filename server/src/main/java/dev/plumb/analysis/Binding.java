@@ -1,0 +1,37 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.Unit;
+import java.nio.file.Path;
+
+/** What a name stands for in a document's scope. */
+public sealed interface Binding {
+    /** The file that defines it (null for built-ins). */
+    Path file();
+
+    /** Where it is defined (NONE for built-ins). */
+    Span span();
+
+    /** A value: an input, a derived value or a built-in constant. */
+    record ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input)
+        implements Binding {
+    }
+
+    /** A user function, with the scope of the file that defines it. */
+    record FunctionBinding(Path file, Span span, Statement.Function def, Scope scope) implements Binding {
+    }
+
+    /** A built-in function such as sqrt. */
+    record BuiltinFunction(String name, int minArgs, int maxArgs, String signature) implements Binding {
+        @Override
+        public Path file() {
+            return null;
+        }
+
+        @Override
+        public Span span() {
+            return Span.NONE;
+        }
+    }
+}

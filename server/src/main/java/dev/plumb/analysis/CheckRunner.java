@@ -1,0 +1,101 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.syntax.Comparator;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.Unit;
+import dev.plumb.units.UnitRegistry;
+import dev.plumb.units.UnitResult;
+import java.util.ArrayList;
+import java.util.List;
+
+/** Evaluates a {@code check}: every comparison of the chain must hold. */
+final class CheckRunner {
+    private final Scope scope;
+    private final Reporter reporter;
+    private final String text;
+    private final Settings settings;
+
+    CheckRunner(Scope scope, Reporter reporter, String text, Settings settings) {
+        this.scope = scope;
+        this.reporter = reporter;
+        this.text = text;
+        this.settings = settings;
+    }
+
+    Row.CheckRow run(Statement.Check c) {
+        String source = Shown.source(text, new dev.plumb.diagnostics.Span(c.operands().get(0).span().start(),
+            c.operands().get(c.operands().size() - 1).span().end()));
+        Evaluator evaluator = new Evaluator(scope, reporter, text, UnitRegistry.standard());
+        List<Value> values = new ArrayList<>();
+        for (Expr e : c.operands()) values.add(evaluator.eval(e));
+        if (values.stream().anyMatch(v -> !v.known())) {
+            return new Row.CheckRow(c.span(), source, null, "not evaluated: a value it needs is unknown", c.note());
+        }
+        for (int i = 1; i < values.size(); i++) {
+            if (!values.get(i).dimension().equals(values.get(0).dimension())) {
+                reporter.report(Code.UNIT_MISMATCH, c.span(), "this check compares " + values.get(0).dimension().describe()
+                    + " with " + values.get(i).dimension().describe() + ": both sides need the same dimension");
+                return new Row.CheckRow(c.span(), source, null, "not evaluated: the sides differ in dimension", c.note());
+            }
+        }
+        Unit unit = commonUnit(c.operands(), values.get(0));
+        List<String> failures = new ArrayList<>();
+        for (int i = 0; i < c.comparators().size(); i++) {
+            Comparator op = c.comparators().get(i);
+            if (!holds(values.get(i), op, values.get(i + 1))) {
+                failures.add(side(c.operands().get(i), values.get(i), unit) + " is not " + op.symbol() + " "
+                    + side(c.operands().get(i + 1), values.get(i + 1), unit));
+            }
+        }
+        StringBuilder shownValues = new StringBuilder();
+        for (int i = 0; i < values.size(); i++) {
+            if (i > 0) shownValues.append(" ").append(c.comparators().get(i - 1).symbol()).append(" ");
+            shownValues.append(Shown.value(values.get(i), unit, settings.significantFigures()));
+        }
+        if (failures.isEmpty()) return new Row.CheckRow(c.span(), source, true, shownValues.toString(), c.note());
+        String why = c.note() == null ? "" : " (" + c.note() + ")";
+        reporter.report(Code.CHECK_FAILED, c.span(), "check failed: " + String.join("; ", failures) + why);
+        return new Row.CheckRow(c.span(), source, false, shownValues.toString(), c.note());
+    }
+
+    private boolean holds(Value a, Comparator op, Value b) {
+        double x = a.si();
+        double y = b.si();
+        boolean equal = Math.abs(x - y) <= settings.equalityTolerance() * Math.max(Math.abs(x), Math.abs(y));
+        return switch (op) {
+            case LT -> x < y;
+            case LE -> x <= y || equal;
+            case GT -> x > y;
+            case GE -> x >= y || equal;
+            case EQ -> equal;
+            case NE -> !equal;
+        };
+    }
+
+    /** The unit both sides are shown in: the one a side was written or defined in, else SI. */
+    private Unit commonUnit(List<Expr> operands, Value first) {
+        for (Expr e : operands) {
+            Expr inner = e instanceof Expr.Unary u ? u.operand() : e;
+            if (inner instanceof Expr.Quantity q && q.unit() != null
+                && UnitRegistry.standard().resolve(q.unit().text()) instanceof UnitResult.Ok ok) {
+                return ok.unit();
+            }
+        }
+        for (Expr e : operands) {
+            if (e instanceof Expr.Reference r && scope.lookup(r.name()) instanceof Binding.ValueBinding v
+                && v.display() != null) {
+                return v.display();
+            }
+        }
+        return DisplayUnits.defaultFor(first.dimension());
+    }
+
+    private String side(Expr e, Value v, Unit unit) {
+        String shown = Shown.value(v, unit, settings.significantFigures());
+        if (e instanceof Expr.Quantity || (e instanceof Expr.Unary u && u.operand() instanceof Expr.Quantity)) return shown;
+        return Shown.source(text, e.span()) + " = " + shown;
+    }
+}

@@ -1,0 +1,219 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Ident;
+import dev.plumb.syntax.UnitText;
+import dev.plumb.units.Dimension;
+import dev.plumb.units.QuantityFormat;
+import dev.plumb.units.Unit;
+import dev.plumb.units.UnitRegistry;
+import dev.plumb.units.UnitResult;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Evaluates expressions on doubles with their dimensions checked at every operation.
+ * Each check is a small guard method; a failed guard reports once and yields
+ * {@link Value#UNKNOWN}, which keeps everything built on it quiet.
+ */
+final class Evaluator {
+    private final Scope scope;
+    private final Map<String, Value> locals;
+    private final Reporter reporter;
+    private final String text;
+    private final UnitRegistry units;
+
+    Evaluator(Scope scope, Reporter reporter, String text, UnitRegistry units) {
+        this(scope, Map.of(), reporter, text, units);
+    }
+
+    private Evaluator(Scope scope, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
+        this.scope = scope;
+        this.locals = locals;
+        this.reporter = reporter;
+        this.text = text;
+        this.units = units;
+    }
+
+    Value eval(Expr e) {
+        if (e instanceof Expr.Binary b) return binary(b);
+        if (e instanceof Expr.Reference r) return reference(r);
+        if (e instanceof Expr.Quantity q) return quantity(q);
+        if (e instanceof Expr.Call c) return call(c);
+        return unary((Expr.Unary) e);
+    }
+
+    // ---- leaves ----------------------------------------------------------------------
+
+    private Value quantity(Expr.Quantity q) {
+        if (!Double.isFinite(q.number())) {
+            reporter.report(Code.MATH_NOT_FINITE, q.span(),
+                "the number " + q.numberText() + " is too large to compute with: use a larger unit or a smaller number");
+            return Value.UNKNOWN;
+        }
+        if (q.unit() == null) return Value.number(q.number());
+        Unit unit = resolveUnit(q.unit(), true);
+        if (unit == null) return Value.UNKNOWN;
+        return new Value(unit.toSi(q.number()), unit.dimension(), unit.isOffsetScale());
+    }
+
+    /** Resolves a unit written in the source, reporting unknown ones with a fix. */
+    Unit resolveUnit(UnitText written, boolean afterNumber) {
+        UnitResult result = units.resolve(written.text());
+        if (result instanceof UnitResult.Ok ok) return ok.unit();
+        UnitResult.Error err = (UnitResult.Error) result;
+        int start = written.span().start() + err.offset();
+        int end = Math.min(written.span().end(), start + Math.max(1, err.length()));
+        String message = err.message() + Suggestions.didYouMean(err.suggestions());
+        if (afterNumber) {
+            String bad = written.text().substring(Math.min(err.offset(), written.text().length()),
+                Math.min(written.text().length(), err.offset() + Math.max(1, err.length())));
+            message += ". A unit follows a number directly (`2 m` is two metres); to multiply by a value named "
+                + bad + " write `2 * " + bad + "`";
+        }
+        reporter.report(Code.UNIT_UNKNOWN, new Span(start, end), message);
+        return null;
+    }
+
+    private Value reference(Expr.Reference r) {
+        Value local = locals.get(r.name());
+        if (local != null) return local;
+        Binding b = scope.lookup(r.name());
+        if (b instanceof Binding.ValueBinding v) return v.value();
+        if (b instanceof Binding.FunctionBinding || b instanceof Binding.BuiltinFunction) {
+            reporter.report(Code.NAME_KIND, r.span(),
+                r.name() + " is a function: call it with its arguments, e.g. " + r.name() + "(…)");
+        }
+        // An unknown name is reported once by the resolver.
+        return Value.UNKNOWN;
+    }
+
+    // ---- calls -----------------------------------------------------------------------
+
+    private Value call(Expr.Call c) {
+        String name = c.callee().text();
+        Binding b = locals.containsKey(name) ? null : scope.lookup(name);
+        if (locals.containsKey(name) || b instanceof Binding.ValueBinding) {
+            reporter.report(Code.NAME_KIND, c.callee().span(),
+                name + " is a value, not a function: write `" + name + " * (…)` to multiply");
+            return Value.UNKNOWN;
+        }
+        if (b == null) return Value.UNKNOWN;
+        List<Value> args = new ArrayList<>(c.args().size());
+        for (Expr a : c.args()) args.add(eval(a));
+        if (b instanceof Binding.BuiltinFunction f) {
+            if (!arity(c, f.minArgs(), f.maxArgs(), f.signature())) return Value.UNKNOWN;
+            if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
+            return new BuiltinCalls(reporter, text).call(f.name(), c, args);
+        }
+        Binding.FunctionBinding f = (Binding.FunctionBinding) b;
+        List<Ident> params = f.def().params();
+        String signature = name + "(" + String.join(", ", params.stream().map(Ident::text).toList()) + ")";
+        if (!arity(c, params.size(), params.size(), signature)) return Value.UNKNOWN;
+        if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
+        Map<String, Value> bound = new HashMap<>();
+        for (int i = 0; i < params.size(); i++) bound.put(params.get(i).text(), args.get(i));
+        Reporter inner = reporter.inCall(name, c.span(), f.file());
+        String bodyText = f.scope() == scope ? text : f.scope().text();
+        return new Evaluator(f.scope(), bound, inner, bodyText, units).eval(f.def().body());
+    }
+
+    private boolean arity(Expr.Call c, int min, int max, String signature) {
+        int n = c.args().size();
+        if (n >= min && n <= max) return true;
+        String wanted = min == max ? String.valueOf(min) : max == Integer.MAX_VALUE ? "at least " + min : min + " to " + max;
+        reporter.report(Code.CALL_ARITY, c.span(), c.callee().text() + " takes " + wanted + " argument"
+            + (wanted.equals("1") ? "" : "s") + " but is given " + n + ": " + signature);
+        return false;
+    }
+
+    // ---- operators -------------------------------------------------------------------
+
+    private Value unary(Expr.Unary u) {
+        Value v = eval(u.operand());
+        if (!v.known() || u.op() == Expr.Op.PLUS) return v;
+        return Value.of(-v.si(), v.dimension());
+    }
+
+    private Value binary(Expr.Binary b) {
+        Value l = eval(b.left());
+        Value r = eval(b.right());
+        if (!l.known() || !r.known()) return Value.UNKNOWN;
+        return switch (b.op()) {
+            case ADD, SUBTRACT -> addOrSubtract(b, l, r);
+            case MULTIPLY -> finite(b, l, r, new Value(l.si() * r.si(), l.dimension().times(r.dimension()), false));
+            case DIVIDE -> divide(b, l, r);
+            case POWER -> power(b, l, r);
+            default -> throw new IllegalStateException("not a binary operator: " + b.op());
+        };
+    }
+
+    private Value addOrSubtract(Expr.Binary b, Value l, Value r) {
+        boolean add = b.op() == Expr.Op.ADD;
+        if (!l.dimension().equals(r.dimension())) {
+            String message = add
+                ? "adding " + r.dimension().describe() + " to " + l.dimension().describe()
+                : "subtracting " + r.dimension().describe() + " from " + l.dimension().describe();
+            reporter.report(Code.UNIT_MISMATCH, b.span(), message
+                + ": both sides of '" + b.op().symbol() + "' need the same dimension ("
+                + Shown.source(text, b.left().span()) + " = " + Shown.value(l) + ", "
+                + Shown.source(text, b.right().span()) + " = " + Shown.value(r) + ")");
+            return Value.UNKNOWN;
+        }
+        if (add && l.absolute() && r.absolute()) {
+            reporter.report(Code.UNIT_TEMPERATURE_SUM, b.span(),
+                "adding two absolute temperatures (" + Shown.value(l, Shown.celsius(), 4) + " + "
+                    + Shown.value(r, Shown.celsius(), 4) + ") has no physical meaning: "
+                    + "add a temperature difference in K instead, or subtract to get a difference");
+            return Value.UNKNOWN;
+        }
+        double si = add ? l.si() + r.si() : l.si() - r.si();
+        boolean absolute = add ? l.absolute() || r.absolute() : l.absolute() && !r.absolute();
+        return finite(b, l, r, new Value(si, l.dimension(), absolute));
+    }
+
+    private Value divide(Expr.Binary b, Value l, Value r) {
+        if (r.si() == 0) {
+            reporter.report(Code.MATH_DIVISION_BY_ZERO, b.right().span(),
+                "division by zero: the divisor " + Shown.source(text, b.right().span()) + " is 0");
+            return Value.UNKNOWN;
+        }
+        return finite(b, l, r, new Value(l.si() / r.si(), l.dimension().divide(r.dimension()), false));
+    }
+
+    private Value power(Expr.Binary b, Value base, Value exponent) {
+        if (!exponent.dimensionless()) {
+            reporter.report(Code.UNIT_NOT_DIMENSIONLESS, b.right().span(), "the exponent of '^' must be a plain number, but "
+                + Shown.source(text, b.right().span()) + " is " + exponent.dimension().describe());
+            return Value.UNKNOWN;
+        }
+        double n = exponent.si();
+        Dimension d = Powers.raise(base.dimension(), n);
+        if (d == null) {
+            reporter.report(Code.UNIT_FRACTIONAL_POWER, b.span(), Shown.source(text, b.left().span()) + " is "
+                + base.dimension().describe() + "; raised to " + QuantityFormat.number(n, 4)
+                + " its unit would have a fractional exponent: only powers that leave whole exponents are allowed");
+            return Value.UNKNOWN;
+        }
+        double si = Math.pow(base.si(), n);
+        if (Double.isNaN(si)) {
+            reporter.report(Code.MATH_DOMAIN, b.span(), "a negative number (" + Shown.value(base)
+                + ") raised to the fractional power " + QuantityFormat.number(n, 4) + " has no real value");
+            return Value.UNKNOWN;
+        }
+        return finite(b, base, exponent, new Value(si, d, false));
+    }
+
+    /** Reports a result that overflowed although its operands were finite. */
+    private Value finite(Expr.Binary b, Value l, Value r, Value result) {
+        if (Double.isFinite(result.si())) return result;
+        reporter.report(Code.MATH_NOT_FINITE, b.span(), "the result of " + Shown.source(text, b.span())
+            + " is too large to represent (" + Shown.source(text, b.left().span()) + " = " + Shown.value(l) + ", "
+            + Shown.source(text, b.right().span()) + " = " + Shown.value(r) + ")");
+        return Value.UNKNOWN;
+    }
+}

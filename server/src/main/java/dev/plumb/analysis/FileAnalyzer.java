@@ -1,0 +1,341 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Related;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Ident;
+import dev.plumb.syntax.ParsedSource;
+import dev.plumb.syntax.SourceParser;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.Unit;
+import dev.plumb.units.UnitRegistry;
+import dev.plumb.units.UnitResult;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Analyses one document: imports, names, dependency order, evaluation, checks. One instance per
+ * run; the result is an immutable {@link Analysis}.
+ */
+final class FileAnalyzer {
+    private static final Set<String> BASES = Set.of("frontal", "wetted", "planform");
+
+    private final Workspace workspace;
+    private final Path file;
+    private final String text;
+    private final List<Path> chain;
+    private final Settings settings;
+    private final UnitRegistry units = UnitRegistry.standard();
+    private final Reporter reporter = new Reporter();
+    private final Scope scope;
+    private final Map<Path, Set<String>> importedUses = new HashMap<>();
+    private final List<Path> imports = new ArrayList<>();
+    /** Own statements that define a name, by name (the first definition wins). */
+    private final Map<String, Statement> own = new LinkedHashMap<>();
+    private final Set<Statement> duplicates = new HashSet<>();
+    private final Set<String> used = new HashSet<>();
+    private final Map<Statement, Row> rows = new HashMap<>();
+
+    FileAnalyzer(Workspace workspace, Path file, String text, List<Path> chain, Settings settings) {
+        this.workspace = workspace;
+        this.file = file;
+        this.text = text;
+        this.chain = chain;
+        this.settings = settings;
+        this.scope = new Scope(text);
+    }
+
+    Analysis run() {
+        ParsedSource parsed = SourceParser.parse(text);
+        parsed.diagnostics().forEach(reporter::add);
+        Map<String, String> headers = new LinkedHashMap<>();
+        for (Statement s : parsed.statements()) {
+            if (s instanceof Statement.Header h) headers.putIfAbsent(h.key(), h.text());
+            if (s instanceof Statement.Use u) importFile(u);
+        }
+        for (Statement s : parsed.statements()) declare(s);
+        Map<String, Set<String>> uses = resolveNames(parsed.statements());
+        DependencyOrder.Result order = DependencyOrder.of(uses);
+        Set<String> inCycle = reportCycles(order.cycles());
+        for (String name : order.order()) evaluate(own.get(name), inCycle.contains(name));
+        for (Statement s : parsed.statements()) {
+            if (duplicates.contains(s)) evaluate(s, false);
+            if (s instanceof Statement.Check c) rows.put(c, new CheckRunner(scope, reporter, text, settings).run(c));
+        }
+        reportUnusedInputs();
+        return new Analysis(file, text, parsed.lines(), headers, rowsInOrder(parsed.statements()), sorted(reporter.all()),
+            scope, importedUses, imports);
+    }
+
+    // ---- imports ---------------------------------------------------------------------
+
+    private void importFile(Statement.Use u) {
+        Path folder = file.toAbsolutePath().getParent();
+        Path target = folder.resolve(u.path()).normalize();
+        Path root = workspace.sources().workspaceRoot(file);
+        if (!target.startsWith(root)) {
+            reporter.report(Code.USE_OUTSIDE_WORKSPACE, u.pathSpan(), "\"" + u.path() + "\" leads outside the workspace ("
+                + root + ", the nearest folder holding .git or plumb.toml): copy the file into the workspace");
+            return;
+        }
+        if (chain.contains(target) || target.equals(file.toAbsolutePath().normalize())) {
+            List<String> loop = new ArrayList<>();
+            for (Path p : chain.subList(Math.max(0, chain.indexOf(target)), chain.size())) loop.add(p.getFileName().toString());
+            loop.add(file.getFileName().toString());
+            loop.add(target.getFileName().toString());
+            reporter.report(Code.USE_CYCLE, u.pathSpan(), "files use each other in a circle ("
+                + String.join(" → ", loop) + "): move the shared definitions into a file of their own");
+            return;
+        }
+        List<Path> nextChain = new ArrayList<>(chain);
+        nextChain.add(file.toAbsolutePath().normalize());
+        Workspace.Imported imported = workspace.analyzeImport(target, nextChain);
+        if (imported.analysis() == null) {
+            reporter.report(Code.USE_NOT_FOUND, u.pathSpan(), "cannot use \"" + u.path() + "\": " + imported.problem()
+                + " (looked for " + target + ")");
+            return;
+        }
+        imports.add(target);
+        Analysis a = imported.analysis();
+        long errors = a.diagnostics().stream().filter(d -> d.severity() == dev.plumb.diagnostics.Severity.ERROR).count();
+        if (errors > 0) {
+            Diagnostic first = a.diagnostics().stream()
+                .filter(d -> d.severity() == dev.plumb.diagnostics.Severity.ERROR).findFirst().orElseThrow();
+            reporter.report(Code.USE_HAS_ERRORS, u.pathSpan(), "\"" + u.path() + "\" has " + errors + " error"
+                + (errors == 1 ? "" : "s") + "; the first, on line " + a.lines().line(first.span().start()) + ": "
+                + first.message() + ". Fix them there: values that depend on them are unknown here");
+        }
+        for (var entry : a.scope().all().entrySet()) {
+            Binding existing = scope.all().get(entry.getKey());
+            if (existing == null) {
+                scope.put(entry.getKey(), entry.getValue());
+            } else if (!sameOrigin(existing, entry.getValue())) {
+                reporter.report(Code.NAME_DUPLICATE, u.pathSpan(), entry.getKey() + " is defined both in "
+                    + name(existing.file()) + " and in " + name(entry.getValue().file()) + ": rename one of them");
+            }
+        }
+    }
+
+    private static boolean sameOrigin(Binding a, Binding b) {
+        return a.file() != null && a.file().equals(b.file()) && a.span().equals(b.span());
+    }
+
+    private static String name(Path p) {
+        return p == null ? "the built-ins" : p.getFileName().toString();
+    }
+
+    // ---- names -----------------------------------------------------------------------
+
+    private void declare(Statement s) {
+        Ident name = definedName(s);
+        if (name == null) return;
+        String n = name.text();
+        if (Builtins.isBuiltin(n)) {
+            reporter.report(Code.NAME_DUPLICATE, name.span(), n + " is built in: choose another name");
+            duplicates.add(s);
+            return;
+        }
+        Binding imported = scope.all().get(n);
+        if (imported != null && !own.containsKey(n)) {
+            reporter.add(Diagnostic.of(Code.NAME_DUPLICATE, name.span(), n + " is already defined in "
+                    + name(imported.file()) + ": rename it here or there")
+                .withRelated(new Related(String.valueOf(imported.file()), imported.span(), "defined here")));
+            duplicates.add(s);
+            return;
+        }
+        Statement first = own.get(n);
+        if (first != null) {
+            Ident firstName = definedName(first);
+            reporter.add(Diagnostic.of(Code.NAME_DUPLICATE, name.span(), n + " is already defined on line "
+                    + lineOf(firstName.span()) + ": rename one of them or delete one")
+                .withRelated(new Related(file.toString(), firstName.span(), "first defined here")));
+            duplicates.add(s);
+            return;
+        }
+        own.put(n, s);
+        if (s instanceof Statement.Function f) {
+            scope.put(n, new Binding.FunctionBinding(file, f.name().span(), f, scope));
+            Set<String> seen = new HashSet<>();
+            for (Ident p : f.params()) {
+                if (!seen.add(p.text())) {
+                    reporter.report(Code.NAME_DUPLICATE, p.span(), "parameter " + p.text() + " is listed twice");
+                }
+            }
+        }
+    }
+
+    static Ident definedName(Statement s) {
+        if (s instanceof Statement.Definition d) return d.name();
+        if (s instanceof Statement.Function f) return f.name();
+        if (s instanceof Statement.Broken b) return b.name();
+        return null;
+    }
+
+    private int lineOf(Span span) {
+        return (int) text.substring(0, Math.min(span.start(), text.length())).chars().filter(c -> c == '\n').count() + 1;
+    }
+
+    /** Reports unknown names and returns, for each own definition, the own names it uses. */
+    private Map<String, Set<String>> resolveNames(List<Statement> statements) {
+        Map<String, Set<String>> uses = new LinkedHashMap<>();
+        for (String n : own.keySet()) uses.put(n, new LinkedHashSet<>());
+        for (Statement s : statements) {
+            Set<String> deps = own.get(nameOf(s)) == s ? uses.get(nameOf(s)) : new LinkedHashSet<>();
+            Set<String> params = new HashSet<>();
+            List<Expr> exprs = new ArrayList<>();
+            if (s instanceof Statement.Definition d) exprs.add(d.expr());
+            if (s instanceof Statement.Check c) exprs.addAll(c.operands());
+            if (s instanceof Statement.Function f) {
+                exprs.add(f.body());
+                f.params().forEach(p -> params.add(p.text()));
+            }
+            for (Expr e : exprs) {
+                References.each(e, (n, span) -> {
+                    if (params.contains(n)) return;
+                    used.add(n);
+                    if (own.containsKey(n)) {
+                        deps.add(n);
+                        return;
+                    }
+                    Binding b = scope.lookup(n);
+                    if (b == null) {
+                        unknownName(n, span);
+                    } else if (b.file() != null) {
+                        importedUses.computeIfAbsent(b.file(), k -> new HashSet<>()).add(n);
+                    }
+                });
+            }
+        }
+        return uses;
+    }
+
+    private static String nameOf(Statement s) {
+        Ident i = definedName(s);
+        return i == null ? "" : i.text();
+    }
+
+    private void unknownName(String n, Span span) {
+        List<String> close = Suggestions.closest(n, scope.visibleNames(), 3);
+        String message = "unknown name '" + n + "'" + Suggestions.didYouMean(close);
+        if (units.resolve(n) instanceof UnitResult.Ok) {
+            message += "; '" + n + "' is a unit: write it right after a number, e.g. `3 " + n + "`";
+        } else {
+            message += ": define it, or `use` the file that defines it";
+        }
+        reporter.report(Code.NAME_UNKNOWN, span, message);
+    }
+
+    private Set<String> reportCycles(List<List<String>> cycles) {
+        Set<String> members = new HashSet<>();
+        for (List<String> cycle : cycles) {
+            List<String> loop = new ArrayList<>(cycle);
+            loop.add(cycle.get(0));
+            for (String member : cycle) {
+                members.add(member);
+                reporter.report(Code.NAME_CYCLE, definedName(own.get(member)).span(), "circular definition: "
+                    + String.join(" → ", loop) + "; one of them must be given a value that does not depend on the others");
+            }
+        }
+        return members;
+    }
+
+    // ---- evaluation ------------------------------------------------------------------
+
+    private void evaluate(Statement s, boolean inCycle) {
+        if (s instanceof Statement.Broken b) {
+            if (!duplicates.contains(s) && b.name() != null) {
+                scope.put(b.name().text(), new Binding.ValueBinding(file, b.name().span(), Value.UNKNOWN, null, null, false));
+            }
+            rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null, null));
+            return;
+        }
+        if (s instanceof Statement.Function f) {
+            String signature = f.name().text() + "(" + String.join(", ", f.params().stream().map(Ident::text).toList()) + ")";
+            rows.put(s, new Row.FunctionRow(f.span(), signature, f.note()));
+            return;
+        }
+        if (!(s instanceof Statement.Definition d)) return;
+        Evaluator evaluator = new Evaluator(scope, reporter, text, units);
+        Value v = evaluator.eval(d.expr());
+        if (inCycle) v = Value.UNKNOWN;
+        Unit display = displayUnit(d, v, evaluator);
+        String basis = basis(d);
+        if (!duplicates.contains(s)) {
+            scope.put(d.name().text(), new Binding.ValueBinding(file, d.name().span(), v, display, basis, d.input()));
+        }
+        String shown = Shown.value(v, display, settings.significantFigures());
+        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note()));
+    }
+
+    private Unit displayUnit(Statement.Definition d, Value v, Evaluator evaluator) {
+        Unit fallback = v.known() ? DisplayUnits.defaultFor(v.dimension()) : null;
+        if (d.displayUnit() != null) {
+            Unit u = evaluator.resolveUnit(d.displayUnit(), false);
+            if (u == null || !v.known()) return fallback;
+            if (!u.dimension().equals(v.dimension())) {
+                reporter.report(Code.UNIT_MISMATCH, d.displayUnit().span(), "`in " + d.displayUnit().text() + "` shows "
+                    + u.dimension().describe() + ", but " + d.name().text() + " is " + v.dimension().describe()
+                    + ": use a unit of that dimension, such as " + unitOr(fallback));
+                return fallback;
+            }
+            return u;
+        }
+        Expr e = d.expr();
+        if (e instanceof Expr.Unary u) e = u.operand();
+        if (e instanceof Expr.Quantity q && q.unit() != null && v.known()
+            && units.resolve(q.unit().text()) instanceof UnitResult.Ok ok) {
+            return ok.unit();
+        }
+        return fallback;
+    }
+
+    private static String unitOr(Unit u) {
+        return u == null || u.symbol().isEmpty() ? "none (it is a plain number)" : u.symbol();
+    }
+
+    private String basis(Statement.Definition d) {
+        if (d.basis() == null) return null;
+        String b = d.basis().text();
+        if (BASES.contains(b)) return b;
+        reporter.report(Code.BASIS_UNKNOWN, d.basis().span(), "unknown area basis '" + b + "'"
+            + Suggestions.didYouMean(Suggestions.closest(b, BASES, 1)) + ": use frontal, wetted or planform");
+        return null;
+    }
+
+    private void reportUnusedInputs() {
+        for (Statement s : own.values()) {
+            if (s instanceof Statement.Definition d && d.input() && !used.contains(d.name().text())) {
+                reporter.report(Code.INPUT_UNUSED, d.name().span(), "input " + d.name().text()
+                    + " is not used by any value or check: use it, or remove it");
+            }
+        }
+    }
+
+    // ---- results ---------------------------------------------------------------------
+
+    private List<Row> rowsInOrder(List<Statement> statements) {
+        List<Row> out = new ArrayList<>();
+        for (Statement s : statements) {
+            if (s instanceof Statement.Section sec) out.add(new Row.SectionRow(sec.span(), sec.title()));
+            else if (s instanceof Statement.Narrative n) out.add(new Row.NarrativeRow(n.span(), n.text()));
+            else if (rows.containsKey(s)) out.add(rows.get(s));
+        }
+        return out;
+    }
+
+    private static List<Diagnostic> sorted(List<Diagnostic> all) {
+        List<Diagnostic> out = new ArrayList<>(all);
+        out.sort(java.util.Comparator.comparingInt((Diagnostic d) -> d.span().start()).thenComparing(d -> d.code().id()));
+        return out;
+    }
+}

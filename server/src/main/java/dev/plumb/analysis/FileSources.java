@@ -1,0 +1,62 @@
+package dev.plumb.analysis;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+
+/** Documents read from disk as strict UTF-8. */
+public final class FileSources implements Sources {
+
+    @Override
+    public Loaded load(Path file) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            return new Missing("no such file");
+        } catch (IOException e) {
+            return new Missing(e.getClass().getSimpleName() + ": " + e.getMessage());
+        }
+        return decode(bytes);
+    }
+
+    /** Strict UTF-8 decoding: a NUL byte or a malformed sequence means this is not a calc file. */
+    public static Loaded decode(byte[] bytes) {
+        for (int i = 0; i < bytes.length; i++) {
+            if (bytes[i] == 0) return new NotText("it holds a NUL byte, so it is binary, not a text file", i);
+        }
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+            .onMalformedInput(CodingErrorAction.REPORT)
+            .onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes);
+        CharBuffer out = CharBuffer.allocate(bytes.length + 1);
+        CoderResult result = decoder.decode(in, out, true);
+        if (result.isError()) {
+            return new NotText("it is not valid UTF-8 text; save it as UTF-8", in.position());
+        }
+        try {
+            decoder.flush(out);
+        } catch (RuntimeException e) {
+            return new NotText("it is not valid UTF-8 text; save it as UTF-8", bytes.length);
+        }
+        out.flip();
+        return new Text(out.toString());
+    }
+
+    @Override
+    public Path workspaceRoot(Path file) {
+        Path folder = file.toAbsolutePath().normalize().getParent();
+        for (Path p = folder; p != null; p = p.getParent()) {
+            if (Files.exists(p.resolve(".git")) || Files.exists(p.resolve("plumb.toml"))) return p;
+        }
+        return folder;
+    }
+
+}

@@ -1,0 +1,67 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Related;
+import dev.plumb.diagnostics.Span;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Collects the diagnostics of one document. Inside a call of a user function, findings in the
+ * function's body are reported at the outermost call (the place the reviewer is looking at),
+ * with the body as related location.
+ */
+final class Reporter {
+    private final Set<Diagnostic> diagnostics;
+    /** The reporter of the caller, or null at document level. */
+    private final Reporter caller;
+    private final String function;
+    private final Span callSpan;
+    private final Path definingFile;
+
+    Reporter() {
+        this(new LinkedHashSet<>(), null, null, null, null);
+    }
+
+    private Reporter(Set<Diagnostic> diagnostics, Reporter caller, String function, Span callSpan, Path file) {
+        this.diagnostics = diagnostics;
+        this.caller = caller;
+        this.function = function;
+        this.callSpan = callSpan;
+        this.definingFile = file;
+    }
+
+    void report(Code code, Span span, String message) {
+        if (caller == null) {
+            diagnostics.add(Diagnostic.of(code, span, message));
+            return;
+        }
+        Related inside = new Related(definingFile == null ? null : definingFile.toString(), span, "inside " + function);
+        caller.fromCall(code, callSpan, "in " + function + "(…): " + message, inside);
+    }
+
+    private void fromCall(Code code, Span span, String message, Related related) {
+        if (caller == null) {
+            diagnostics.add(Diagnostic.of(code, span, message).withRelated(related));
+            return;
+        }
+        caller.fromCall(code, callSpan, "in " + function + "(…): " + message, related);
+    }
+
+    void add(Diagnostic d) {
+        diagnostics.add(d);
+    }
+
+    /** A reporter for evaluating the body of {@code function} called at {@code at}. */
+    Reporter inCall(String function, Span at, Path definingFile) {
+        return new Reporter(diagnostics, this, function, at, definingFile);
+    }
+
+    List<Diagnostic> all() {
+        return new ArrayList<>(diagnostics);
+    }
+}

@@ -1,0 +1,40 @@
+package dev.plumb.analysis;
+
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.QuantityFormat;
+import dev.plumb.units.Unit;
+
+/** How values read in results and messages. */
+final class Shown {
+    private Shown() {
+    }
+
+    /**
+     * The value in the given unit. An offset scale (°C, °F) shows a point only for a point; a
+     * temperature difference shown in °C is a difference, without the offset.
+     */
+    static String value(Value v, Unit unit, int sig) {
+        if (!v.known()) return "?";
+        Unit u = unit == null ? DisplayUnits.defaultFor(v.dimension()) : unit;
+        if (u.absoluteTemperature() && !v.absolute() && u.isOffsetScale()) {
+            u = new Unit(u.symbol(), u.factor(), 0, u.dimension(), false);
+        }
+        return QuantityFormat.format(v.si(), u, sig);
+    }
+
+    /** The Celsius scale, to show temperature points in messages. */
+    static Unit celsius() {
+        return ((dev.plumb.units.UnitResult.Ok) dev.plumb.units.UnitRegistry.standard().resolve("°C")).unit();
+    }
+
+    static String value(Value v) {
+        return value(v, null, 4);
+    }
+
+    /** The source text of a span, shortened for messages. */
+    static String source(String text, dev.plumb.diagnostics.Span span) {
+        String s = text.substring(Math.max(0, span.start()), Math.min(text.length(), span.end()))
+            .replaceAll("\\s+", " ");
+        return s.length() > 40 ? s.substring(0, 37) + "…" : s;
+    }
+}

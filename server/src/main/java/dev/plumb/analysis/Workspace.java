@@ -1,0 +1,79 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.LineMap;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
+/**
+ * The engine's entry point: analyses documents from a {@link Sources}, caching each file's
+ * analysis for the life of this object (one command-line run). Thread-safe; never throws for
+ * anything a user can write.
+ */
+public final class Workspace {
+    private final Sources sources;
+    private final Settings settings;
+    private final Map<Path, Imported> cache = new ConcurrentHashMap<>();
+
+    public Workspace(Sources sources, Settings settings) {
+        this.sources = sources;
+        this.settings = settings;
+    }
+
+    Sources sources() {
+        return sources;
+    }
+
+    /** An analysis, or why the file could not be read (then analysis is null). */
+    record Imported(Analysis analysis, String problem) {
+    }
+
+    /** Analyses a file on disk (or wherever the sources read it from). */
+    public Analysis analyze(Path file) {
+        Path key = file.toAbsolutePath().normalize();
+        Imported result = analyzeImport(key, List.of());
+        if (result.analysis() != null) return result.analysis();
+        return failure(key, "", Code.FILE_NOT_TEXT, "cannot read this file: " + result.problem(), 0);
+    }
+
+    /** Analyses text that is not (or not yet) saved under its path, e.g. an editor buffer. */
+    public Analysis analyzeText(Path file, String text) {
+        return guarded(file.toAbsolutePath().normalize(), text, List.of());
+    }
+
+    Imported analyzeImport(Path file, List<Path> chain) {
+        Imported cached = cache.get(file);
+        if (cached != null) return cached;
+        Sources.Loaded loaded = sources.load(file);
+        Imported fresh;
+        if (loaded instanceof Sources.Text t) {
+            fresh = new Imported(guarded(file, t.text(), chain), null);
+        } else if (loaded instanceof Sources.NotText n) {
+            fresh = new Imported(failure(file, "", Code.FILE_NOT_TEXT,
+                "this is not a calc file: " + n.reason() + " (first bad byte at offset " + n.offset() + ")", 0), null);
+        } else {
+            fresh = new Imported(null, ((Sources.Missing) loaded).reason());
+        }
+        Imported raced = cache.putIfAbsent(file, fresh);
+        return raced != null ? raced : fresh;
+    }
+
+    private Analysis guarded(Path file, String text, List<Path> chain) {
+        try {
+            return new FileAnalyzer(this, file, text, chain, settings).run();
+        } catch (StackOverflowError e) {
+            return failure(file, text, Code.SYNTAX_NESTING,
+                "this document nests expressions or definitions too deeply to evaluate: give inner parts names", 0);
+        }
+    }
+
+    private static Analysis failure(Path file, String text, Code code, String message, int offset) {
+        Diagnostic d = Diagnostic.of(code, new Span(offset, offset), message);
+        return new Analysis(file, text, new LineMap(text), Map.of(), List.of(), List.of(d), new Scope(text), Map.of(),
+            List.of());
+    }
+}

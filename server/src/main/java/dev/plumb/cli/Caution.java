@@ -1,0 +1,10 @@
+package dev.plumb.cli;
+
+/** The notice every result carries: these calcs size things that can hurt people. */
+final class Caution {
+    static final String TEXT = "Plumb checks arithmetic, units and stated limits. Its results support, and never "
+        + "replace, the judgement of a licensed engineer and the codes and standards that apply locally.";
+
+    private Caution() {
+    }
+}

@@ -1,0 +1,58 @@
+package dev.plumb.cli;
+
+import dev.plumb.analysis.Batch;
+import dev.plumb.analysis.FileSources;
+import dev.plumb.analysis.Workspace;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** `plumb check PATH…`: every finding with its location, a summary, and an exit code for CI. */
+@Command(name = "check", mixinStandardHelpOptions = true,
+    description = "Check calc files and folders (all *.plumb below them). Exit 0: no errors; 1: errors or "
+        + "failed checks; 2: usage or file problems.")
+final class CheckCommand implements Callable<Integer> {
+    enum Format { text, json }
+
+    @Parameters(arity = "1..*", paramLabel = "PATH", description = "files or folders to check")
+    List<Path> paths;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    Format format;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        List<Path> files;
+        try {
+            files = PlumbFiles.expand(paths);
+        } catch (PlumbFiles.NoSuchPath e) {
+            err.println("plumb: " + e.getMessage());
+            return Main.USAGE;
+        }
+        if (files.isEmpty()) {
+            err.println("plumb: no .plumb files in " + paths);
+            return Main.USAGE;
+        }
+        Workspace workspace = new Workspace(new FileSources(), common.settings());
+        List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
+        if (format == Format.json) JsonReport.write(results, out);
+        else TextReport.write(results, out, common.style());
+        TextReport.Tally t = TextReport.Tally.of(results);
+        out.flush();
+        return t.errors() > 0 || t.checksFailed() > 0 ? Main.FINDINGS : Main.CLEAN;
+    }
+}

@@ -1,0 +1,55 @@
+package dev.plumb.cli;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Batch;
+import dev.plumb.analysis.FileSources;
+import dev.plumb.analysis.Workspace;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** `plumb eval FILE`: every value in its display unit, aligned, with the checks and findings. */
+@Command(name = "eval", mixinStandardHelpOptions = true,
+    description = "Evaluate one calc file and print every value and check. Exit codes as for check.")
+final class EvalCommand implements Callable<Integer> {
+    @Parameters(arity = "1", paramLabel = "FILE", description = "the calc file")
+    Path file;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        if (!Files.isRegularFile(file)) {
+            err.println("plumb: no such file: " + file);
+            return Main.USAGE;
+        }
+        Workspace workspace = new Workspace(new FileSources(), common.settings());
+        List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
+        Batch.Checked checked = results.get(0);
+        Analysis a = checked.analysis();
+        Style style = common.style();
+        EvalReport.write(a, out, style);
+        if (!checked.diagnostics().isEmpty()) {
+            out.println();
+            out.println(style.bold("Findings"));
+            checked.diagnostics().forEach(d -> out.println("  " + TextReport.line(checked, d, style)));
+        }
+        out.println();
+        out.println(Caution.TEXT);
+        out.flush();
+        TextReport.Tally t = TextReport.Tally.of(results);
+        return t.errors() > 0 || t.checksFailed() > 0 ? Main.FINDINGS : Main.CLEAN;
+    }
+}

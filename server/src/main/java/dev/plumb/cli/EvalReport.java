@@ -1,0 +1,52 @@
+package dev.plumb.cli;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Row;
+import java.io.PrintWriter;
+
+/** The body of `plumb eval`: header, then each section's values and checks, aligned. */
+final class EvalReport {
+    private EvalReport() {
+    }
+
+    static void write(Analysis a, PrintWriter out, Style style) {
+        String title = a.headers().getOrDefault("title", Location.path(a.file()));
+        out.println(style.bold(title));
+        for (String key : new String[] {"author", "reviewer", "revision"}) {
+            String v = a.headers().get(key);
+            if (v != null && !v.isEmpty()) out.println(key + ": " + v);
+        }
+        int nameWidth = 0;
+        int valueWidth = 0;
+        for (Row r : a.rows()) {
+            if (r instanceof Row.ValueRow v) {
+                nameWidth = Math.max(nameWidth, v.name().codePointCount(0, v.name().length()));
+                valueWidth = Math.max(valueWidth, width(v.shown()));
+            }
+        }
+        for (Row r : a.rows()) {
+            if (r instanceof Row.SectionRow s) {
+                out.println();
+                out.println(style.bold(s.title()));
+            } else if (r instanceof Row.ValueRow v) {
+                String note = v.note() == null ? "" : "  " + v.note();
+                String basis = v.basis() == null ? "" : "  [" + v.basis() + "]";
+                out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + note).stripTrailing());
+            } else if (r instanceof Row.FunctionRow f) {
+                out.println("  " + f.signature() + "  (function)" + (f.note() == null ? "" : "  " + f.note()));
+            } else if (r instanceof Row.CheckRow c) {
+                String mark = c.passed() == null ? "?" : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
+                String why = c.note() == null ? "" : "  " + c.note();
+                out.println("  " + mark + "  check " + c.source() + "   [" + c.detail() + "]" + why);
+            }
+        }
+    }
+
+    private static int width(String s) {
+        return s.codePointCount(0, s.length());
+    }
+
+    private static String pad(String s, int width) {
+        return s + " ".repeat(Math.max(0, width - width(s)));
+    }
+}

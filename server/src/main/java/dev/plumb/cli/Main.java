@@ -1,0 +1,45 @@
+package dev.plumb.cli;
+
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The `plumb` command line. */
+@Command(name = "plumb", mixinStandardHelpOptions = true, version = "plumb 0.1.0",
+    description = "Checks plain-text drag, lift and skin-friction calcs: units, limits and checks.",
+    subcommands = {CheckCommand.class, EvalCommand.class})
+public final class Main implements Runnable {
+    /** Exit codes: 0 clean, 1 errors or failed checks, 2 usage or input/output problems. */
+    static final int CLEAN = 0;
+    static final int FINDINGS = 1;
+    static final int USAGE = 2;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command: check or eval");
+    }
+
+    public static void main(String[] args) {
+        System.exit(run(args, new PrintStream(System.out, true, StandardCharsets.UTF_8),
+            new PrintStream(System.err, true, StandardCharsets.UTF_8)));
+    }
+
+    /** Runs the command line with the given streams; returns the exit code. */
+    public static int run(String[] args, PrintStream out, PrintStream err) {
+        CommandLine cli = new CommandLine(new Main());
+        cli.setOut(new java.io.PrintWriter(out, true));
+        cli.setErr(new java.io.PrintWriter(err, true));
+        cli.setExitCodeExceptionMapper(e -> USAGE);
+        cli.getCommandSpec().parser().abbreviatedOptionsAllowed(false);
+        cli.setParameterExceptionHandler((ex, a) -> {
+            err.println("plumb: " + ex.getMessage());
+            ex.getCommandLine().usage(err);
+            return USAGE;
+        });
+        return cli.execute(args);
+    }
+}

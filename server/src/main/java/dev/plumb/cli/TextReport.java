@@ -1,0 +1,64 @@
+package dev.plumb.cli;
+
+import dev.plumb.analysis.Batch;
+import dev.plumb.analysis.Row;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Severity;
+import java.io.PrintWriter;
+import java.util.List;
+
+/** `plumb check` for people: one line per finding, then a summary. */
+final class TextReport {
+    private TextReport() {
+    }
+
+    static void write(List<Batch.Checked> results, PrintWriter out, Style style) {
+        for (Batch.Checked c : results) {
+            for (Diagnostic d : c.diagnostics()) out.println(line(c, d, style));
+        }
+        Tally t = Tally.of(results);
+        String checks = t.checksFailed() == 0
+            ? style.good(t.checksPassed() + " checks passed")
+            : t.checksPassed() + " checks passed, " + style.bad(t.checksFailed() + " failed");
+        out.println(style.bold("Checked " + t.files() + " file" + (t.files() == 1 ? "" : "s") + ": ")
+            + plural(t.count(Severity.ERROR), "error") + ", " + plural(t.count(Severity.WARNING), "warning") + ", "
+            + plural(t.count(Severity.HINT) + t.count(Severity.INFO), "hint") + "; " + checks + ".");
+        out.println(Caution.TEXT);
+    }
+
+    static String line(Batch.Checked c, Diagnostic d, Style style) {
+        return Location.of(c.analysis(), d) + ": " + style.severity(d.severity()) + " " + d.code().id() + ": " + d.message();
+    }
+
+    private static String plural(long n, String word) {
+        return n + " " + word + (n == 1 ? "" : "s");
+    }
+
+    /** Totals over a run. */
+    record Tally(int files, long errors, long warnings, long hints, long infos, long checksPassed, long checksFailed) {
+        static Tally of(List<Batch.Checked> results) {
+            long[] sev = new long[Severity.values().length];
+            long passed = 0;
+            long failed = 0;
+            for (Batch.Checked c : results) {
+                for (Diagnostic d : c.diagnostics()) sev[d.severity().ordinal()]++;
+                for (Row r : c.analysis().rows()) {
+                    if (r instanceof Row.CheckRow cr && cr.passed() != null) {
+                        if (cr.passed()) passed++;
+                        else failed++;
+                    }
+                }
+            }
+            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], passed, failed);
+        }
+
+        long count(Severity s) {
+            return switch (s) {
+                case ERROR -> errors;
+                case WARNING -> warnings;
+                case INFO -> infos;
+                case HINT -> hints;
+            };
+        }
+    }
+}

@@ -1,0 +1,52 @@
+package dev.plumb.diagnostics;
+
+/**
+ * Every diagnostic code Plumb reports. The ids are stable: tools and reviewers filter on them.
+ * docs/diagnostics.md documents each one with an example; a test keeps the two in step.
+ */
+public enum Code {
+    SYNTAX_ERROR("syntax.error", Severity.ERROR),
+    SYNTAX_NESTING("syntax.nesting", Severity.ERROR),
+    FILE_NOT_TEXT("file.not-text", Severity.ERROR),
+    UNIT_UNKNOWN("unit.unknown", Severity.ERROR),
+    UNIT_MISMATCH("unit.mismatch", Severity.ERROR),
+    UNIT_NOT_DIMENSIONLESS("unit.not-dimensionless", Severity.ERROR),
+    UNIT_FRACTIONAL_POWER("unit.fractional-power", Severity.ERROR),
+    UNIT_TEMPERATURE_SUM("unit.temperature-sum", Severity.ERROR),
+    NAME_UNKNOWN("name.unknown", Severity.ERROR),
+    NAME_DUPLICATE("name.duplicate", Severity.ERROR),
+    NAME_CYCLE("name.cycle", Severity.ERROR),
+    NAME_KIND("name.kind", Severity.ERROR),
+    CALL_ARITY("call.arity", Severity.ERROR),
+    MATH_DIVISION_BY_ZERO("math.division-by-zero", Severity.ERROR),
+    MATH_DOMAIN("math.domain", Severity.ERROR),
+    MATH_NOT_FINITE("math.not-finite", Severity.ERROR),
+    CHECK_FAILED("check.failed", Severity.ERROR),
+    INPUT_UNUSED("input.unused", Severity.HINT),
+    BASIS_UNKNOWN("basis.unknown", Severity.ERROR),
+    USE_NOT_FOUND("use.not-found", Severity.ERROR),
+    USE_CYCLE("use.cycle", Severity.ERROR),
+    USE_OUTSIDE_WORKSPACE("use.outside-workspace", Severity.ERROR),
+    USE_HAS_ERRORS("use.has-errors", Severity.ERROR);
+
+    private final String id;
+    private final Severity severity;
+
+    Code(String id, Severity severity) {
+        this.id = id;
+        this.severity = severity;
+    }
+
+    public String id() {
+        return id;
+    }
+
+    public Severity severity() {
+        return severity;
+    }
+
+    @Override
+    public String toString() {
+        return id;
+    }
+}

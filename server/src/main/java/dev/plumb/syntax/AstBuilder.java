@@ -1,0 +1,227 @@
+package dev.plumb.syntax;
+
+import dev.plumb.diagnostics.Span;
+import dev.plumb.grammar.PlumbLexer;
+import dev.plumb.grammar.PlumbParser;
+import dev.plumb.grammar.PlumbParserBaseVisitor;
+import java.util.ArrayList;
+import java.util.List;
+import org.antlr.v4.runtime.ParserRuleContext;
+import org.antlr.v4.runtime.Token;
+import org.antlr.v4.runtime.tree.TerminalNode;
+
+/**
+ * Turns the parse tree into the immutable AST; nothing above the syntax layer sees ANTLR.
+ * The visit methods follow the grammar's rule order. Statements that hold a syntax error
+ * become {@link Statement.Broken}.
+ */
+final class AstBuilder extends PlumbParserBaseVisitor<Object> {
+    private final LineMap lines;
+    private final SyntaxErrors errors;
+
+    AstBuilder(LineMap lines, SyntaxErrors errors) {
+        this.lines = lines;
+        this.errors = errors;
+    }
+
+    List<Statement> document(PlumbParser.DocumentContext ctx, List<Token> tokens) {
+        List<Statement> out = new ArrayList<>();
+        for (PlumbParser.StatementContext s : ctx.statement()) {
+            int startCp = s.getStart().getStartIndex();
+            int lineEndCp = lineEnd(s.getStart().getTokenIndex(), tokens);
+            if (errors.anyWithin(startCp, lineEndCp)) {
+                out.add(broken(s, tokens));
+            } else {
+                out.add((Statement) visit(s));
+            }
+        }
+        return out;
+    }
+
+    /** Code-point index of the NEWLINE (or EOF) that ends the statement starting at a token. */
+    private static int lineEnd(int tokenIndex, List<Token> tokens) {
+        for (int i = tokenIndex; i < tokens.size(); i++) {
+            Token t = tokens.get(i);
+            boolean terminator = (t.getType() == PlumbLexer.NEWLINE && t.getChannel() == Token.DEFAULT_CHANNEL)
+                || t.getType() == Token.EOF;
+            if (terminator) return t.getStartIndex();
+        }
+        return Integer.MAX_VALUE;
+    }
+
+    private Statement broken(PlumbParser.StatementContext s, List<Token> tokens) {
+        List<Token> head = new ArrayList<>(3);
+        for (int i = s.getStart().getTokenIndex(); i < tokens.size() && head.size() < 3; i++) {
+            Token t = tokens.get(i);
+            if (t.getChannel() == Token.DEFAULT_CHANNEL) head.add(t);
+        }
+        return new Statement.Broken(span(s), StatementTokens.nameFromHead(head, lines));
+    }
+
+    // ---- statements ------------------------------------------------------------------
+
+    @Override
+    public Object visitStatement(PlumbParser.StatementContext ctx) {
+        return visit(ctx.getChild(0));
+    }
+
+    @Override
+    public Object visitHeader(PlumbParser.HeaderContext ctx) {
+        return new Statement.Header(span(ctx), ctx.key.getText(), unquote(ctx.STRING().getText()));
+    }
+
+    @Override
+    public Object visitNarrative(PlumbParser.NarrativeContext ctx) {
+        String text = ctx.NARRATIVE().getText().substring(1);
+        return new Statement.Narrative(span(ctx), text.startsWith(" ") ? text.substring(1) : text);
+    }
+
+    @Override
+    public Object visitSection(PlumbParser.SectionContext ctx) {
+        return new Statement.Section(span(ctx), unquote(ctx.STRING().getText()));
+    }
+
+    @Override
+    public Object visitUseFile(PlumbParser.UseFileContext ctx) {
+        TerminalNode path = ctx.STRING();
+        return new Statement.Use(span(ctx), unquote(path.getText()), span(path.getSymbol()));
+    }
+
+    @Override
+    public Object visitInput(PlumbParser.InputContext ctx) {
+        return definition(ctx, true, ctx.name(), ctx.expr(), ctx.tail());
+    }
+
+    @Override
+    public Object visitFunctionDef(PlumbParser.FunctionDefContext ctx) {
+        List<PlumbParser.NameContext> names = ctx.name();
+        List<Ident> params = new ArrayList<>();
+        for (int i = 1; i < names.size(); i++) params.add(ident(names.get(i)));
+        return new Statement.Function(span(ctx), ident(names.get(0)), params, expr(ctx.expr()), note(ctx.note()));
+    }
+
+    @Override
+    public Object visitDefinition(PlumbParser.DefinitionContext ctx) {
+        return definition(ctx, false, ctx.name(), ctx.expr(), ctx.tail());
+    }
+
+    private Statement definition(ParserRuleContext ctx, boolean input, PlumbParser.NameContext name,
+                                 PlumbParser.ExprContext expr, PlumbParser.TailContext tail) {
+        UnitText unit = tail.UNIT() == null ? null : unitText(tail.UNIT().getSymbol());
+        Ident basis = tail.name() == null ? null : ident(tail.name());
+        return new Statement.Definition(span(ctx), input, ident(name), expr(expr), unit, basis, note(tail.note()));
+    }
+
+    @Override
+    public Object visitCheck(PlumbParser.CheckContext ctx) {
+        List<Expr> operands = new ArrayList<>();
+        for (PlumbParser.ExprContext e : ctx.expr()) operands.add(expr(e));
+        List<Comparator> comparators = new ArrayList<>();
+        for (PlumbParser.ComparatorContext c : ctx.comparator()) comparators.add(comparator(c.getStart()));
+        return new Statement.Check(span(ctx), operands, comparators, note(ctx.note()));
+    }
+
+    private static Comparator comparator(Token t) {
+        return switch (t.getType()) {
+            case PlumbLexer.LT -> Comparator.LT;
+            case PlumbLexer.LE -> Comparator.LE;
+            case PlumbLexer.GT -> Comparator.GT;
+            case PlumbLexer.GE -> Comparator.GE;
+            case PlumbLexer.EQ -> Comparator.EQ;
+            default -> Comparator.NE;
+        };
+    }
+
+    // ---- expressions -----------------------------------------------------------------
+
+    private Expr expr(PlumbParser.ExprContext ctx) {
+        return (Expr) visit(ctx);
+    }
+
+    @Override
+    public Object visitPower(PlumbParser.PowerContext ctx) {
+        return new Expr.Binary(span(ctx), Expr.Op.POWER, expr(ctx.expr(0)), expr(ctx.expr(1)));
+    }
+
+    @Override
+    public Object visitUnary(PlumbParser.UnaryContext ctx) {
+        Expr.Op op = ctx.op.getType() == PlumbLexer.MINUS ? Expr.Op.NEGATE : Expr.Op.PLUS;
+        return new Expr.Unary(span(ctx), op, expr(ctx.expr()));
+    }
+
+    @Override
+    public Object visitMultiplicative(PlumbParser.MultiplicativeContext ctx) {
+        Expr.Op op = ctx.op.getType() == PlumbLexer.STAR ? Expr.Op.MULTIPLY : Expr.Op.DIVIDE;
+        return new Expr.Binary(span(ctx), op, expr(ctx.expr(0)), expr(ctx.expr(1)));
+    }
+
+    @Override
+    public Object visitAdditive(PlumbParser.AdditiveContext ctx) {
+        Expr.Op op = ctx.op.getType() == PlumbLexer.PLUS ? Expr.Op.ADD : Expr.Op.SUBTRACT;
+        return new Expr.Binary(span(ctx), op, expr(ctx.expr(0)), expr(ctx.expr(1)));
+    }
+
+    @Override
+    public Object visitQuantity(PlumbParser.QuantityContext ctx) {
+        String text = ctx.NUMBER().getText();
+        UnitText unit = ctx.UNIT() == null ? null : unitText(ctx.UNIT().getSymbol());
+        return new Expr.Quantity(span(ctx), Double.parseDouble(text), text, unit);
+    }
+
+    @Override
+    public Object visitCall(PlumbParser.CallContext ctx) {
+        List<Expr> args = new ArrayList<>();
+        for (PlumbParser.ExprContext e : ctx.expr()) args.add(expr(e));
+        return new Expr.Call(span(ctx), ident(ctx.name()), args);
+    }
+
+    @Override
+    public Object visitReference(PlumbParser.ReferenceContext ctx) {
+        return new Expr.Reference(span(ctx), ctx.getText());
+    }
+
+    @Override
+    public Object visitParenthesized(PlumbParser.ParenthesizedContext ctx) {
+        return visit(ctx.expr());
+    }
+
+    // ---- helpers ---------------------------------------------------------------------
+
+    private Ident ident(PlumbParser.NameContext ctx) {
+        return new Ident(ctx.getText(), span(ctx));
+    }
+
+    private UnitText unitText(Token t) {
+        return new UnitText(t.getText(), span(t));
+    }
+
+    private static String note(PlumbParser.NoteContext ctx) {
+        return ctx == null ? null : unquote(ctx.STRING().getText());
+    }
+
+    private Span span(ParserRuleContext ctx) {
+        Token stop = ctx.getStop() == null ? ctx.getStart() : ctx.getStop();
+        int start = lines.fromCodePoint(ctx.getStart().getStartIndex());
+        return new Span(start, lines.fromCodePoint(stop.getStopIndex() + 1));
+    }
+
+    private Span span(Token t) {
+        return new Span(lines.fromCodePoint(t.getStartIndex()), lines.fromCodePoint(t.getStopIndex() + 1));
+    }
+
+    static String unquote(String quoted) {
+        String body = quoted.substring(1, quoted.length() - 1);
+        if (body.indexOf('\\') < 0) return body;
+        StringBuilder b = new StringBuilder(body.length());
+        for (int i = 0; i < body.length(); i++) {
+            char c = body.charAt(i);
+            if (c == '\\' && i + 1 < body.length()) {
+                char n = body.charAt(++i);
+                b.append(n == 'n' ? '\n' : n);
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString();
+    }
+}

@@ -1,0 +1,42 @@
+package dev.plumb.syntax;
+
+import dev.plumb.diagnostics.Span;
+import java.util.List;
+
+/** Expression nodes. Parentheses leave no node: the inner expression keeps its own span. */
+public sealed interface Expr {
+    Span span();
+
+    /** A number with an optional unit written right after it: {@code 1.2 kg/m^3}. */
+    record Quantity(Span span, double number, String numberText, UnitText unit) implements Expr {
+    }
+
+    record Reference(Span span, String name) implements Expr {
+    }
+
+    record Call(Span span, Ident callee, List<Expr> args) implements Expr {
+        public Call {
+            args = List.copyOf(args);
+        }
+    }
+
+    record Unary(Span span, Op op, Expr operand) implements Expr {
+    }
+
+    record Binary(Span span, Op op, Expr left, Expr right) implements Expr {
+    }
+
+    enum Op {
+        ADD("+"), SUBTRACT("-"), MULTIPLY("*"), DIVIDE("/"), POWER("^"), NEGATE("-"), PLUS("+");
+
+        private final String symbol;
+
+        Op(String symbol) {
+            this.symbol = symbol;
+        }
+
+        public String symbol() {
+            return symbol;
+        }
+    }
+}

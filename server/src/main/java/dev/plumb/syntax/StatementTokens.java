@@ -1,0 +1,193 @@
+package dev.plumb.syntax;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.grammar.PlumbLexer;
+import java.util.ArrayList;
+import java.util.List;
+import org.antlr.v4.runtime.CommonToken;
+import org.antlr.v4.runtime.Token;
+
+/**
+ * Decides the line structure of a document on the token list, before parsing:
+ * <ul>
+ *   <li>a line indented more deeply than the line that started the statement continues it
+ *       (its NEWLINE is hidden);</li>
+ *   <li>a '#' comment that starts a statement line is NARRATIVE; after a statement it is a
+ *       code comment (hidden);</li>
+ *   <li>a statement nested too deeply or too long for the parser is dropped with a clear
+ *       error, so the parser never recurses without bound.</li>
+ * </ul>
+ */
+final class StatementTokens {
+    /** Deeper parentheses than this are an error; calcs never need a tenth of it. */
+    static final int MAX_NESTING = 100;
+    /** Longer statements than this are an error; split them into named steps. */
+    static final int MAX_TOKENS = 4000;
+
+    /** A statement removed before parsing, with the name it defined when it had one. */
+    record Dropped(Span span, Ident name) {
+    }
+
+    private final LineMap lines;
+    private final List<Diagnostic> diagnostics = new ArrayList<>();
+    private final List<Dropped> dropped = new ArrayList<>();
+
+    StatementTokens(LineMap lines) {
+        this.lines = lines;
+    }
+
+    List<Diagnostic> diagnostics() {
+        return diagnostics;
+    }
+
+    List<Dropped> dropped() {
+        return dropped;
+    }
+
+    List<Token> arrange(List<? extends Token> tokens) {
+        List<Token> out = new ArrayList<>(tokens.size());
+        boolean inStatement = false;
+        int statementIndent = leadingIndent(tokens);
+        int statementStart = 0;
+        for (int i = 0; i < tokens.size(); i++) {
+            CommonToken t = (CommonToken) tokens.get(i);
+            switch (t.getType()) {
+                case PlumbLexer.NEWLINE -> {
+                    int indent = indentOf(t.getText());
+                    int next = nextType(tokens, i);
+                    boolean blankOrEnd = next == PlumbLexer.NEWLINE || next == Token.EOF;
+                    if (inStatement && !blankOrEnd && indent > statementIndent) {
+                        t.setChannel(Token.HIDDEN_CHANNEL);
+                        out.add(t);
+                        continue;
+                    }
+                    if (inStatement) finishStatement(out, statementStart);
+                    out.add(t);
+                    inStatement = false;
+                    statementStart = out.size();
+                    if (!blankOrEnd) statementIndent = indent;
+                }
+                case PlumbLexer.COMMENT -> {
+                    if (inStatement) {
+                        t.setChannel(Token.HIDDEN_CHANNEL);
+                    } else {
+                        t.setType(PlumbLexer.NARRATIVE);
+                        inStatement = true;
+                    }
+                    out.add(t);
+                }
+                case Token.EOF -> {
+                    if (inStatement) {
+                        finishStatement(out, statementStart);
+                        out.add(finalNewline(t));
+                    }
+                    out.add(t);
+                }
+                default -> {
+                    if (t.getChannel() == Token.DEFAULT_CHANNEL) inStatement = true;
+                    out.add(t);
+                }
+            }
+        }
+        return out;
+    }
+
+    /** The parser expects every statement to end with a NEWLINE, the last one too. */
+    private static Token finalNewline(CommonToken eof) {
+        CommonToken newline = new CommonToken(eof);
+        newline.setType(PlumbLexer.NEWLINE);
+        newline.setText("");
+        newline.setChannel(Token.DEFAULT_CHANNEL);
+        return newline;
+    }
+
+    private static int leadingIndent(List<? extends Token> tokens) {
+        for (Token t : tokens) {
+            if (t.getType() == PlumbLexer.BOM) continue;
+            return t.getType() == PlumbLexer.WS ? t.getText().length() : 0;
+        }
+        return 0;
+    }
+
+    private static int indentOf(String newline) {
+        int i = 0;
+        while (i < newline.length() && (newline.charAt(i) == '\r' || newline.charAt(i) == '\n')) i++;
+        return newline.length() - i;
+    }
+
+    private static int nextType(List<? extends Token> tokens, int i) {
+        for (int j = i + 1; j < tokens.size(); j++) {
+            Token t = tokens.get(j);
+            if (t.getChannel() == Token.DEFAULT_CHANNEL || t.getType() == PlumbLexer.COMMENT) return t.getType();
+        }
+        return Token.EOF;
+    }
+
+    /** Checks the statement's size limits; an oversized statement is hidden from the parser. */
+    private void finishStatement(List<Token> out, int from) {
+        int depth = 0;
+        int maxDepth = 0;
+        int count = 0;
+        int unary = 0;
+        Token deepest = null;
+        for (int i = from; i < out.size(); i++) {
+            Token t = out.get(i);
+            if (t.getChannel() != Token.DEFAULT_CHANNEL) continue;
+            count++;
+            int type = t.getType();
+            if (type == PlumbLexer.LPAREN) depth++;
+            if (type == PlumbLexer.RPAREN) depth--;
+            // A run of signs nests like parentheses in the parser.
+            unary = (type == PlumbLexer.MINUS || type == PlumbLexer.PLUS || type == PlumbLexer.CARET) ? unary + 1 : 0;
+            if (depth + unary > maxDepth) {
+                maxDepth = depth + unary;
+                deepest = t;
+            }
+        }
+        if (maxDepth <= MAX_NESTING && count <= MAX_TOKENS) return;
+        Token first = firstDefault(out, from);
+        int start = lines.fromCodePoint(first.getStartIndex());
+        int end = lines.fromCodePoint(out.get(out.size() - 1).getStopIndex() + 1);
+        Span span = new Span(start, end);
+        String message = maxDepth > MAX_NESTING
+            ? "this expression is nested " + maxDepth + " levels deep; Plumb accepts at most " + MAX_NESTING
+                + ": give inner parts names of their own"
+            : "this statement has " + count + " tokens; Plumb accepts at most " + MAX_TOKENS
+                + ": split it into named steps";
+        Span at = deepest != null && maxDepth > MAX_NESTING
+            ? new Span(lines.fromCodePoint(deepest.getStartIndex()), lines.fromCodePoint(deepest.getStopIndex() + 1))
+            : span;
+        diagnostics.add(Diagnostic.of(Code.SYNTAX_NESTING, at, message));
+        dropped.add(new Dropped(span, definedName(out, from)));
+        for (int i = from; i < out.size(); i++) ((CommonToken) out.get(i)).setChannel(Token.HIDDEN_CHANNEL);
+    }
+
+    private static Token firstDefault(List<Token> out, int from) {
+        for (int i = from; i < out.size(); i++) {
+            if (out.get(i).getChannel() == Token.DEFAULT_CHANNEL) return out.get(i);
+        }
+        return out.get(from);
+    }
+
+    /** The name a statement defines, judged from its first tokens ({@code [input] NAME =|(}). */
+    private Ident definedName(List<Token> out, int from) {
+        List<Token> head = new ArrayList<>(3);
+        for (int i = from; i < out.size() && head.size() < 3; i++) {
+            if (out.get(i).getChannel() == Token.DEFAULT_CHANNEL) head.add(out.get(i));
+        }
+        return nameFromHead(head, lines);
+    }
+
+    static Ident nameFromHead(List<Token> head, LineMap lines) {
+        int k = !head.isEmpty() && head.get(0).getType() == PlumbLexer.INPUT ? 1 : 0;
+        if (head.size() < k + 2) return null;
+        Token name = head.get(k);
+        int after = head.get(k + 1).getType();
+        boolean nameLike = name.getType() == PlumbLexer.IDENT;
+        if (!nameLike || (after != PlumbLexer.ASSIGN && after != PlumbLexer.LPAREN)) return null;
+        Span span = new Span(lines.fromCodePoint(name.getStartIndex()), lines.fromCodePoint(name.getStopIndex() + 1));
+        return new Ident(name.getText(), span);
+    }
+}
