@@ -23,20 +23,12 @@ public final class Batch {
     public record Checked(Analysis analysis, List<Diagnostic> diagnostics) {
     }
 
-    /** Deep expressions recurse; give the analysis threads room (the limit is bounded by the parser). */
-    private static final long STACK_BYTES = 64L * 1024 * 1024;
-
     private Batch() {
     }
 
     public static List<Checked> check(Workspace workspace, List<Path> files, int threads) {
         List<Analysis> analyses = new ArrayList<>(files.size());
-        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads),
-            r -> {
-                Thread t = new Thread(null, r, "plumb-check", STACK_BYTES);
-                t.setDaemon(true);
-                return t;
-            });
+        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads), DeepStack.FACTORY);
         try {
             List<Future<Analysis>> futures = new ArrayList<>();
             for (Path f : files) futures.add(pool.submit(() -> workspace.analyze(f)));

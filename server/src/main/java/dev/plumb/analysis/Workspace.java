@@ -63,12 +63,14 @@ public final class Workspace {
     }
 
     private Analysis guarded(Path file, String text, List<Path> chain) {
-        try {
-            return new FileAnalyzer(this, file, text, chain, settings).run();
-        } catch (StackOverflowError e) {
-            return failure(file, text, Code.SYNTAX_NESTING,
-                "this document nests expressions or definitions too deeply to evaluate: give inner parts names", 0);
-        }
+        return DeepStack.call(() -> {
+            try {
+                return new FileAnalyzer(this, file, text, chain, settings).run();
+            } catch (StackOverflowError e) {
+                return failure(file, text, Code.SYNTAX_NESTING,
+                    "this document nests expressions too deeply to evaluate: give inner parts names of their own", 0);
+            }
+        });
     }
 
     private static Analysis failure(Path file, String text, Code code, String message, int offset) {

@@ -9,11 +9,13 @@ final class Location {
     private Location() {
     }
 
-    /** The path relative to the working folder when it lies below it, else as is. */
+    /** The path relative to the working folder when it is near it (at most two levels up), else absolute. */
     static String path(Path file) {
         Path cwd = Path.of("").toAbsolutePath();
         Path abs = file.toAbsolutePath().normalize();
-        return abs.startsWith(cwd) ? cwd.relativize(abs).toString() : abs.toString();
+        if (!abs.getRoot().equals(cwd.getRoot())) return abs.toString();
+        Path relative = cwd.relativize(abs);
+        return relative.startsWith(Path.of("..", "..", "..")) ? abs.toString() : relative.toString();
     }
 
     /** {@code file:line:col} with 1-based line and column (columns count characters). */

@@ -1,0 +1,119 @@
+package dev.plumb.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The command line's contract: output lines, exit codes, formats. */
+class CliTest {
+    @TempDir
+    Path dir;
+
+    private Path write(String name, String text) throws IOException {
+        Files.createDirectories(dir.resolve(".git"));
+        Path p = dir.resolve(name);
+        Files.createDirectories(p.getParent());
+        Files.writeString(p, text);
+        return p;
+    }
+
+    @Test
+    void cleanFileExitsZeroWithSummaryAndCaution() throws IOException {
+        Path f = write("ok.plumb", "input L = 2 m\nA = L^2\ncheck A < 5 m^2\n");
+        Cli run = Cli.run("check", "--no-color", f.toString());
+        assertEquals(0, run.exitCode(), run.out() + run.err());
+        assertTrue(run.out().contains("Checked 1 file: 0 errors, 0 warnings, 0 hints; 1 checks passed."), run.out());
+        assertTrue(run.out().contains("licensed engineer"));
+    }
+
+    @Test
+    void errorsGiveFileLineColumnAndExitOne() throws IOException {
+        Path f = write("bad.plumb", "input F = 3 N\ninput L = 2 m\nx = F + L\n");
+        Cli run = Cli.run("check", "--no-color", f.toString());
+        assertEquals(1, run.exitCode());
+        String first = run.out().lines().findFirst().orElseThrow();
+        assertTrue(first.matches(".*bad\\.plumb:3:5: error unit\\.mismatch: adding a length \\(m\\) to a force \\(N\\).*"), first);
+    }
+
+    @Test
+    void failedCheckExitsOne() throws IOException {
+        Path f = write("fail.plumb", "input F = 7 kN\ncheck F <= 6 kN \"anchor\"\n");
+        Cli run = Cli.run("check", "--no-color", f.toString());
+        assertEquals(1, run.exitCode());
+        assertTrue(run.out().contains("check failed: F = 7 kN is not <= 6 kN (anchor)"), run.out());
+    }
+
+    @Test
+    void foldersAreSearchedRecursively() throws IOException {
+        write("a/one.plumb", "x = 1\n");
+        write("a/b/two.plumb", "y = 2\n");
+        write("a/b/notes.txt", "not a calc\n");
+        Cli run = Cli.run("check", "--no-color", dir.resolve("a").toString());
+        assertEquals(0, run.exitCode());
+        assertTrue(run.out().contains("Checked 2 files"), run.out());
+    }
+
+    @Test
+    void usageAndMissingPathsExitTwo() {
+        assertEquals(2, Cli.run("check").exitCode());
+        assertEquals(2, Cli.run("check", dir.resolve("nope.plumb").toString()).exitCode());
+        assertEquals(2, Cli.run("frobnicate").exitCode());
+        assertEquals(2, Cli.run("check", "--format", "xml", dir.toString()).exitCode());
+        Cli missing = Cli.run("eval", dir.resolve("nope.plumb").toString());
+        assertEquals(2, missing.exitCode());
+        assertTrue(missing.err().contains("no such file"));
+    }
+
+    @Test
+    void jsonFormatIsValidJsonWithTheSameFindings() throws IOException {
+        Path f = write("j.plumb", "input F = 3 N\nx = F + 2 m\ncheck F > 5 N\n");
+        Cli run = Cli.run("check", "--format", "json", f.toString());
+        assertEquals(1, run.exitCode());
+        JsonObject root = JsonParser.parseString(run.out()).getAsJsonObject();
+        var diags = root.getAsJsonArray("files").get(0).getAsJsonObject().getAsJsonArray("diagnostics");
+        assertEquals(2, diags.size());
+        JsonObject first = diags.get(0).getAsJsonObject();
+        assertEquals("unit.mismatch", first.get("code").getAsString());
+        assertEquals(2, first.get("line").getAsInt());
+        assertEquals(5, first.get("column").getAsInt());
+        assertEquals(1, root.getAsJsonObject("summary").get("checksFailed").getAsInt());
+        assertTrue(root.get("notice").getAsString().contains("licensed engineer"));
+    }
+
+    @Test
+    void noColourUnlessAskedOrOnATerminal() throws IOException {
+        Path f = write("c.plumb", "x = 1 +\n");
+        assertFalse(Cli.run("check", f.toString()).out().contains("\u001b["), "tests do not run on a terminal");
+        assertTrue(Cli.run("check", "--color", f.toString()).out().contains("\u001b["));
+    }
+
+    @Test
+    void evalPrintsValuesInDisplayUnitsAligned() throws IOException {
+        Path f = write("e.plumb", "section \"Air\"\ninput T = 15 degC\ninput p = 101.325 kPa\n"
+            + "rho = p / (287.05 J/(kg*K) * T)\nlong_name = 2 * p in bar\n");
+        Cli run = Cli.run("eval", "--no-color", f.toString());
+        assertEquals(0, run.exitCode(), run.out());
+        // ρ = p/(R·T) = 101325 / (287.05 × 288.15) = 1.2250 kg/m³, worked by hand.
+        assertTrue(run.out().contains("  rho       = 1.225 kg/m³"), run.out());
+        assertTrue(run.out().contains("  T         = 15 °C"), run.out());
+        assertTrue(run.out().contains("  long_name = 2.027 bar"), run.out());
+    }
+
+    @Test
+    void binaryFileIsAClearError() throws IOException {
+        Path f = dir.resolve("image.plumb");
+        Files.write(f, new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, 13});
+        Cli run = Cli.run("check", "--no-color", f.toString());
+        assertEquals(1, run.exitCode());
+        assertTrue(run.out().contains("file.not-text"), run.out());
+        assertTrue(run.out().contains("NUL byte"), run.out());
+    }
+}
