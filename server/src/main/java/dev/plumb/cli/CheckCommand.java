@@ -51,8 +51,7 @@ final class CheckCommand implements Callable<Integer> {
         List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
         if (format == Format.json) JsonReport.write(results, out);
         else TextReport.write(results, out, common.style());
-        TextReport.Tally t = TextReport.Tally.of(results);
         out.flush();
-        return t.errors() > 0 || t.checksFailed() > 0 ? Main.FINDINGS : Main.CLEAN;
+        return TextReport.Tally.of(results).exitCode();
     }
 }

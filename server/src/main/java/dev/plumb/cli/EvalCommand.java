@@ -49,7 +49,6 @@ final class EvalCommand implements Callable<Integer> {
         out.println();
         out.println(Caution.TEXT);
         out.flush();
-        TextReport.Tally t = TextReport.Tally.of(results);
-        return t.errors() > 0 || t.checksFailed() > 0 ? Main.FINDINGS : Main.CLEAN;
+        return TextReport.Tally.of(results).exitCode();
     }
 }

@@ -52,6 +52,11 @@ final class TextReport {
             return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], passed, failed);
         }
 
+        /** 1 when anything needs fixing (an error or a failed check), else 0. */
+        int exitCode() {
+            return errors > 0 || checksFailed > 0 ? Main.FINDINGS : Main.CLEAN;
+        }
+
         long count(Severity s) {
             return switch (s) {
                 case ERROR -> errors;
