@@ -7,8 +7,13 @@ parser grammar PlumbParser;
 
 options { tokenVocab = PlumbLexer; }
 
-/** The token filter guarantees a NEWLINE before EOF, so each line is decided by one token. */
-document  : ( statement? NEWLINE )* EOF;
+/**
+ * The token filter guarantees a NEWLINE before EOF, so each line is decided by one token.
+ * Every line is a rule of its own: an error is recovered inside its line and can never end
+ * the document early.
+ */
+document  : line* EOF;
+line      : statement? NEWLINE;
 
 statement
     : header

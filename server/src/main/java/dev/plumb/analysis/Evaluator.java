@@ -160,8 +160,7 @@ final class Evaluator {
                 : "subtracting " + r.dimension().describe() + " from " + l.dimension().describe();
             reporter.report(Code.UNIT_MISMATCH, b.span(), message
                 + ": both sides of '" + b.op().symbol() + "' need the same dimension ("
-                + Shown.source(text, b.left().span()) + " = " + Shown.value(l) + ", "
-                + Shown.source(text, b.right().span()) + " = " + Shown.value(r) + ")");
+                + operand(b.left(), l) + ", " + operand(b.right(), r) + ")");
             return Value.UNKNOWN;
         }
         if (add && l.absolute() && r.absolute()) {
@@ -212,8 +211,22 @@ final class Evaluator {
     private Value finite(Expr.Binary b, Value l, Value r, Value result) {
         if (Double.isFinite(result.si())) return result;
         reporter.report(Code.MATH_NOT_FINITE, b.span(), "the result of " + Shown.source(text, b.span())
-            + " is too large to represent (" + Shown.source(text, b.left().span()) + " = " + Shown.value(l) + ", "
-            + Shown.source(text, b.right().span()) + " = " + Shown.value(r) + ")");
+            + " is too large to represent (" + operand(b.left(), l) + ", " + operand(b.right(), r) + ")");
         return Value.UNKNOWN;
+    }
+
+    /**
+     * An operand for a message: a literal as written; anything else as "source = value", in the
+     * unit its definition is shown in when it is a name.
+     */
+    private String operand(Expr e, Value v) {
+        String source = Shown.source(text, e.span());
+        if (e instanceof Expr.Quantity) return source;
+        Unit unit = null;
+        if (e instanceof Expr.Reference r && !locals.containsKey(r.name())
+            && scope.lookup(r.name()) instanceof Binding.ValueBinding vb) {
+            unit = vb.display();
+        }
+        return source + " = " + Shown.value(v, unit, 4);
     }
 }

@@ -283,9 +283,12 @@ final class FileAnalyzer {
             Unit u = evaluator.resolveUnit(d.displayUnit(), false);
             if (u == null || !v.known()) return fallback;
             if (!u.dimension().equals(v.dimension())) {
+                String fix = v.dimensionless()
+                    ? ": a plain number has no unit to show; drop `in " + d.displayUnit().text() + "`, or give a number"
+                        + " in the expression its unit (write `5 mm`, not `5 in mm`)"
+                    : ": use a unit of that dimension, such as " + fallback.symbol();
                 reporter.report(Code.UNIT_MISMATCH, d.displayUnit().span(), "`in " + d.displayUnit().text() + "` shows "
-                    + u.dimension().describe() + ", but " + d.name().text() + " is " + v.dimension().describe()
-                    + ": use a unit of that dimension, such as " + unitOr(fallback));
+                    + u.dimension().describe() + ", but " + d.name().text() + " is " + v.dimension().describe() + fix);
                 return fallback;
             }
             return u;
@@ -297,10 +300,6 @@ final class FileAnalyzer {
             return ok.unit();
         }
         return fallback;
-    }
-
-    private static String unitOr(Unit u) {
-        return u == null || u.symbol().isEmpty() ? "none (it is a plain number)" : u.symbol();
     }
 
     private String basis(Statement.Definition d) {

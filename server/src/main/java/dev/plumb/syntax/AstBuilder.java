@@ -26,7 +26,9 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     List<Statement> document(PlumbParser.DocumentContext ctx, List<Token> tokens) {
         List<Statement> out = new ArrayList<>();
-        for (PlumbParser.StatementContext s : ctx.statement()) {
+        for (PlumbParser.LineContext line : ctx.line()) {
+            PlumbParser.StatementContext s = line.statement();
+            if (s == null || s.getStart() == null || s.getStart().getType() == Token.EOF) continue;
             int startCp = s.getStart().getStartIndex();
             int lineEndCp = lineEnd(s.getStart().getTokenIndex(), tokens);
             if (errors.anyWithin(startCp, lineEndCp)) {

@@ -83,8 +83,13 @@ final class LineRecovery extends DefaultErrorStrategy {
 
     private static String message(Parser parser, Token t, org.antlr.v4.runtime.misc.IntervalSet expected) {
         if (t.getType() == PlumbLexer.UNTERMINATED_STRING) return unterminated();
-        if (t.getType() == PlumbLexer.ERROR_CHAR) return unexpectedCharacter(t);
         Token previous = parser.getInputStream().LT(-1);
+        if (t.getType() == PlumbLexer.ERROR_CHAR && t.getText().equals(".") && previous != null
+            && previous.getType() == PlumbLexer.UNIT) {
+            return "unexpected '.' after the unit '" + previous.getText() + "': units multiply with '*' or '·' (write `"
+                + previous.getText() + "*m`, not `" + previous.getText() + ".m`)";
+        }
+        if (t.getType() == PlumbLexer.ERROR_CHAR) return unexpectedCharacter(t);
         if (previous != null && endsOperand(previous) && startsOperand(t)) {
             return "missing operator between '" + previous.getText() + "' and '" + t.getText()
                 + "': write `" + previous.getText() + " * " + t.getText() + "` to multiply";

@@ -225,6 +225,14 @@ class ParserTest {
     }
 
     @Test
+    void junkAfterACompleteStatementCostsOnlyItsLine() {
+        ParsedSource p = SourceParser.parse("v = 3 kN.m\nw = 2 m )\ny = 2\n");
+        assertEquals(2, p.diagnostics().size(), p.diagnostics().toString());
+        assertTrue(p.diagnostics().get(0).message().contains("kN*m"), p.diagnostics().get(0).message());
+        assertTrue(p.statements().stream().anyMatch(s -> s instanceof Statement.Definition d && d.name().text().equals("y")));
+    }
+
+    @Test
     void lineStartThatCannotStartAStatement() {
         ParsedSource p = SourceParser.parse(") = 3\nz = 1\n");
         assertEquals(1, p.diagnostics().size());
