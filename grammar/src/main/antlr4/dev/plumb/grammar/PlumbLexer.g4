@@ -86,7 +86,8 @@ tokens { NARRATIVE }
     /** After the keyword `in`: the display unit follows. */
     private void unitAfterKeyword() {
         int i = skipBlanks(1);
-        if (i == 1 || !isUnitStart(_input.LA(i))) return;
+        boolean reciprocal = _input.LA(i) == '1' && _input.LA(i + 1) == '/';   // `in 1/s`
+        if (i == 1 || !(isUnitStart(_input.LA(i)) || reciprocal)) return;
         unitEnd = _input.index() + scanUnit(i) - 1;
         pushMode(UNIT_MODE);
     }

@@ -18,8 +18,13 @@ public sealed interface Binding {
         implements Binding {
     }
 
-    /** A user function, with the scope of the file that defines it. */
-    record FunctionBinding(Path file, Span span, Statement.Function def, Scope scope) implements Binding {
+    /**
+     * A user function, with the scope of the file that defines it. A circular function (one
+     * that calls itself, directly or through others) is never called: its error is reported once
+     * and its calls are unknown.
+     */
+    record FunctionBinding(Path file, Span span, Statement.Function def, Scope scope, boolean circular)
+        implements Binding {
     }
 
     /** A built-in function such as sqrt. */

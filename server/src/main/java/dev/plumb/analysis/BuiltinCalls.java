@@ -4,22 +4,24 @@ import dev.plumb.diagnostics.Code;
 import dev.plumb.syntax.Expr;
 import dev.plumb.units.Dimension;
 import java.util.List;
+import java.util.function.BiFunction;
 import java.util.function.DoubleUnaryOperator;
 
 /** Evaluates the built-in functions with their dimension rules. Arguments are known values. */
 final class BuiltinCalls {
     private final Reporter reporter;
-    private final String text;
+    /** How an argument reads in a message: as written, with its value when it is not a literal. */
+    private final BiFunction<Expr, Value, String> operand;
 
-    BuiltinCalls(Reporter reporter, String text) {
+    BuiltinCalls(Reporter reporter, BiFunction<Expr, Value, String> operand) {
         this.reporter = reporter;
-        this.text = text;
+        this.operand = operand;
     }
 
     Value call(String name, Expr.Call c, List<Value> args) {
         return switch (name) {
             case "sqrt" -> sqrt(c, args.get(0));
-            case "abs" -> new Value(Math.abs(args.get(0).si()), args.get(0).dimension(), args.get(0).absolute());
+            case "abs" -> new Value(Math.abs(args.get(0).si()), args.get(0).dimension(), args.get(0).temperature());
             case "min", "max" -> extreme(name, c, args);
             case "atan2" -> atan2(c, args.get(0), args.get(1));
             case "exp" -> plain(name, c, args.get(0), Math::exp);
@@ -44,7 +46,7 @@ final class BuiltinCalls {
         }
         if (x.si() < 0) {
             reporter.report(Code.MATH_DOMAIN, c.span(), "square root of a negative number: "
-                + Shown.source(text, c.args().get(0).span()) + " = " + Shown.value(x));
+                + operand.apply(c.args().get(0), x));
             return Value.UNKNOWN;
         }
         return Value.of(Math.sqrt(x.si()), d);
@@ -56,7 +58,7 @@ final class BuiltinCalls {
             Value v = args.get(i);
             if (!v.dimension().equals(best.dimension())) {
                 reporter.report(Code.UNIT_MISMATCH, c.args().get(i).span(), name + " compares values of one dimension, but "
-                    + Shown.source(text, c.args().get(i).span()) + " is " + v.dimension().describe()
+                    + operand.apply(c.args().get(i), v) + " is " + v.dimension().describe()
                     + " and the first argument is " + args.get(0).dimension().describe());
                 return Value.UNKNOWN;
             }
@@ -78,7 +80,7 @@ final class BuiltinCalls {
     private boolean dimensionless(String name, Expr.Call c, Value x) {
         if (x.dimensionless()) return true;
         reporter.report(Code.UNIT_NOT_DIMENSIONLESS, c.args().get(0).span(), name + " needs a dimensionless argument, but "
-            + Shown.source(text, c.args().get(0).span()) + " is " + x.dimension().describe()
+            + operand.apply(c.args().get(0), x) + " is " + x.dimension().describe()
             + ": divide by a reference value of the same dimension first");
         return false;
     }
@@ -97,7 +99,7 @@ final class BuiltinCalls {
         if (!dimensionless(name, c, x)) return Value.UNKNOWN;
         if (x.si() <= 0) {
             reporter.report(Code.MATH_DOMAIN, c.span(), name + " is defined only for positive numbers, but "
-                + Shown.source(text, c.args().get(0).span()) + " = " + Shown.value(x));
+                + operand.apply(c.args().get(0), x));
             return Value.UNKNOWN;
         }
         return Value.number(f.applyAsDouble(x.si()));
@@ -107,7 +109,7 @@ final class BuiltinCalls {
         if (!dimensionless(name, c, x)) return Value.UNKNOWN;
         if (x.si() < -1 || x.si() > 1) {
             reporter.report(Code.MATH_DOMAIN, c.span(), name + " is defined only from -1 to 1, but "
-                + Shown.source(text, c.args().get(0).span()) + " = " + Shown.value(x));
+                + operand.apply(c.args().get(0), x));
             return Value.UNKNOWN;
         }
         return Value.number(f.applyAsDouble(x.si()));

@@ -41,19 +41,31 @@ final class CheckRunner {
                 return new Row.CheckRow(c.span(), source, null, "not evaluated: the sides differ in dimension", c.note());
             }
         }
+        for (int i = 1; i < values.size(); i++) {
+            if (Temperatures.incomparable(values.get(i - 1), values.get(i))) {
+                reporter.report(Code.UNIT_MISMATCH, c.span(), "this check compares a temperature point (a reading in °C or °F)"
+                    + " with a temperature difference: write the limit as the same kind, e.g. a difference in K (`5 K`)"
+                    + " or a point in °C (`40 degC`)");
+                return new Row.CheckRow(c.span(), source, null, "not evaluated: a point is compared with a difference",
+                    c.note());
+            }
+        }
         Unit unit = commonUnit(c.operands(), values.get(0));
         List<String> failures = new ArrayList<>();
+        int digits = settings.significantFigures();
         for (int i = 0; i < c.comparators().size(); i++) {
             Comparator op = c.comparators().get(i);
             if (!holds(values.get(i), op, values.get(i + 1))) {
-                failures.add(side(c.operands().get(i), values.get(i), unit) + " is not " + op.symbol() + " "
-                    + side(c.operands().get(i + 1), values.get(i + 1), unit));
+                int apart = digitsToTellApart(values.get(i), values.get(i + 1), unit);
+                digits = Math.max(digits, apart);
+                failures.add(side(c.operands().get(i), values.get(i), unit, apart) + " is not " + op.symbol() + " "
+                    + side(c.operands().get(i + 1), values.get(i + 1), unit, apart));
             }
         }
         StringBuilder shownValues = new StringBuilder();
         for (int i = 0; i < values.size(); i++) {
             if (i > 0) shownValues.append(" ").append(c.comparators().get(i - 1).symbol()).append(" ");
-            shownValues.append(Shown.value(values.get(i), unit, settings.significantFigures()));
+            shownValues.append(Shown.value(values.get(i), unit, digits));
         }
         if (failures.isEmpty()) return new Row.CheckRow(c.span(), source, true, shownValues.toString(), c.note());
         String why = c.note() == null ? "" : " (" + c.note() + ")";
@@ -93,8 +105,15 @@ final class CheckRunner {
         return DisplayUnits.defaultFor(first.dimension());
     }
 
-    private String side(Expr e, Value v, Unit unit) {
-        String shown = Shown.value(v, unit, settings.significantFigures());
+    /** Enough significant figures that two different values do not read the same ("1 is not == 1"). */
+    private int digitsToTellApart(Value a, Value b, Unit unit) {
+        int digits = settings.significantFigures();
+        while (digits < 15 && Shown.value(a, unit, digits).equals(Shown.value(b, unit, digits))) digits++;
+        return digits;
+    }
+
+    private String side(Expr e, Value v, Unit unit, int digits) {
+        String shown = Shown.value(v, unit, digits);
         if (e instanceof Expr.Quantity || (e instanceof Expr.Unary u && u.operand() instanceof Expr.Quantity)) return shown;
         return Shown.source(text, e.span()) + " = " + shown;
     }

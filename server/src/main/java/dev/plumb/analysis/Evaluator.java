@@ -50,15 +50,21 @@ final class Evaluator {
     // ---- leaves ----------------------------------------------------------------------
 
     private Value quantity(Expr.Quantity q) {
+        return quantity(q, 1);
+    }
+
+    /** {@code sign} -1 reads {@code -15 degC} as the point 15 °C below zero, not minus the point 15 °C. */
+    private Value quantity(Expr.Quantity q, int sign) {
         if (!Double.isFinite(q.number())) {
             reporter.report(Code.MATH_NOT_FINITE, q.span(),
                 "the number " + q.numberText() + " is too large to compute with: use a larger unit or a smaller number");
             return Value.UNKNOWN;
         }
-        if (q.unit() == null) return Value.number(q.number());
+        if (q.unit() == null) return Value.number(sign * q.number());
         Unit unit = resolveUnit(q.unit(), true);
         if (unit == null) return Value.UNKNOWN;
-        return new Value(unit.toSi(q.number()), unit.dimension(), unit.isOffsetScale());
+        Value.Temperature kind = unit.isOffsetScale() ? Value.Temperature.POINT : Value.Temperature.EITHER;
+        return new Value(unit.toSi(sign * q.number()), unit.dimension(), kind);
     }
 
     /** Resolves a unit written in the source, reporting unknown ones with a fix. */
@@ -69,11 +75,12 @@ final class Evaluator {
         int start = written.span().start() + err.offset();
         int end = Math.min(written.span().end(), start + Math.max(1, err.length()));
         String message = err.message() + Suggestions.didYouMean(err.suggestions());
-        if (afterNumber) {
-            String bad = written.text().substring(Math.min(err.offset(), written.text().length()),
-                Math.min(written.text().length(), err.offset() + Math.max(1, err.length())));
+        // Only a lone word can have been meant as a value's name; then the whole word is the mistake.
+        if (afterNumber && written.text().matches("[\\p{L}_][\\p{L}\\p{Nd}_]*")) {
+            start = written.span().start();
+            end = written.span().end();
             message += ". A unit follows a number directly (`2 m` is two metres); to multiply by a value named "
-                + bad + " write `2 * " + bad + "`";
+                + written.text() + " write `2 * " + written.text() + "`";
         }
         reporter.report(Code.UNIT_UNKNOWN, new Span(start, end), message);
         return null;
@@ -108,9 +115,10 @@ final class Evaluator {
         if (b instanceof Binding.BuiltinFunction f) {
             if (!arity(c, f.minArgs(), f.maxArgs(), f.signature())) return Value.UNKNOWN;
             if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
-            return new BuiltinCalls(reporter, text).call(f.name(), c, args);
+            return new BuiltinCalls(reporter, this::operand).call(f.name(), c, args);
         }
         Binding.FunctionBinding f = (Binding.FunctionBinding) b;
+        if (f.circular()) return Value.UNKNOWN;
         List<Ident> params = f.def().params();
         String signature = name + "(" + String.join(", ", params.stream().map(Ident::text).toList()) + ")";
         if (!arity(c, params.size(), params.size(), signature)) return Value.UNKNOWN;
@@ -126,17 +134,19 @@ final class Evaluator {
         int n = c.args().size();
         if (n >= min && n <= max) return true;
         String wanted = min == max ? String.valueOf(min) : max == Integer.MAX_VALUE ? "at least " + min : min + " to " + max;
+        boolean one = min == 1 && (max == 1 || max == Integer.MAX_VALUE);
         reporter.report(Code.CALL_ARITY, c.span(), c.callee().text() + " takes " + wanted + " argument"
-            + (wanted.equals("1") ? "" : "s") + " but is given " + n + ": " + signature);
+            + (one ? "" : "s") + " but is given " + n + ": " + signature);
         return false;
     }
 
     // ---- operators -------------------------------------------------------------------
 
     private Value unary(Expr.Unary u) {
+        if (u.op() == Expr.Op.NEGATE && u.operand() instanceof Expr.Quantity q) return quantity(q, -1);
         Value v = eval(u.operand());
         if (!v.known() || u.op() == Expr.Op.PLUS) return v;
-        return Value.of(-v.si(), v.dimension());
+        return new Value(-v.si(), v.dimension(), v.difference() ? Value.Temperature.DIFFERENCE : Value.Temperature.EITHER);
     }
 
     private Value binary(Expr.Binary b) {
@@ -145,7 +155,7 @@ final class Evaluator {
         if (!l.known() || !r.known()) return Value.UNKNOWN;
         return switch (b.op()) {
             case ADD, SUBTRACT -> addOrSubtract(b, l, r);
-            case MULTIPLY -> finite(b, l, r, new Value(l.si() * r.si(), l.dimension().times(r.dimension()), false));
+            case MULTIPLY -> finite(b, l, r, Value.of(l.si() * r.si(), l.dimension().times(r.dimension())));
             case DIVIDE -> divide(b, l, r);
             case POWER -> power(b, l, r);
             default -> throw new IllegalStateException("not a binary operator: " + b.op());
@@ -163,16 +173,21 @@ final class Evaluator {
                 + operand(b.left(), l) + ", " + operand(b.right(), r) + ")");
             return Value.UNKNOWN;
         }
-        if (add && l.absolute() && r.absolute()) {
+        if (add && l.point() && r.point()) {
             reporter.report(Code.UNIT_TEMPERATURE_SUM, b.span(),
                 "adding two absolute temperatures (" + Shown.value(l, Shown.celsius(), 4) + " + "
                     + Shown.value(r, Shown.celsius(), 4) + ") has no physical meaning: "
                     + "add a temperature difference in K instead, or subtract to get a difference");
             return Value.UNKNOWN;
         }
+        if (!add && l.difference() && r.point()) {
+            reporter.report(Code.UNIT_TEMPERATURE_SUM, b.span(), "subtracting a temperature point ("
+                + Shown.value(r, Shown.celsius(), 4) + ") from a temperature difference (" + Shown.value(l)
+                + ") has no physical meaning: subtract differences from differences, or points from points");
+            return Value.UNKNOWN;
+        }
         double si = add ? l.si() + r.si() : l.si() - r.si();
-        boolean absolute = add ? l.absolute() || r.absolute() : l.absolute() && !r.absolute();
-        return finite(b, l, r, new Value(si, l.dimension(), absolute));
+        return finite(b, l, r, new Value(si, l.dimension(), Temperatures.sum(add, l, r)));
     }
 
     private Value divide(Expr.Binary b, Value l, Value r) {
@@ -181,13 +196,13 @@ final class Evaluator {
                 "division by zero: the divisor " + Shown.source(text, b.right().span()) + " is 0");
             return Value.UNKNOWN;
         }
-        return finite(b, l, r, new Value(l.si() / r.si(), l.dimension().divide(r.dimension()), false));
+        return finite(b, l, r, Value.of(l.si() / r.si(), l.dimension().divide(r.dimension())));
     }
 
     private Value power(Expr.Binary b, Value base, Value exponent) {
         if (!exponent.dimensionless()) {
             reporter.report(Code.UNIT_NOT_DIMENSIONLESS, b.right().span(), "the exponent of '^' must be a plain number, but "
-                + Shown.source(text, b.right().span()) + " is " + exponent.dimension().describe());
+                + operand(b.right(), exponent) + " is " + exponent.dimension().describe());
             return Value.UNKNOWN;
         }
         double n = exponent.si();
@@ -204,7 +219,7 @@ final class Evaluator {
                 + ") raised to the fractional power " + QuantityFormat.number(n, 4) + " has no real value");
             return Value.UNKNOWN;
         }
-        return finite(b, base, exponent, new Value(si, d, false));
+        return finite(b, base, exponent, Value.of(si, d));
     }
 
     /** Reports a result that overflowed although its operands were finite. */
@@ -219,7 +234,7 @@ final class Evaluator {
      * An operand for a message: a literal as written; anything else as "source = value", in the
      * unit its definition is shown in when it is a name.
      */
-    private String operand(Expr e, Value v) {
+    String operand(Expr e, Value v) {
         String source = Shown.source(text, e.span());
         if (e instanceof Expr.Quantity) return source;
         Unit unit = null;

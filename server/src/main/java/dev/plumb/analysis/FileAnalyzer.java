@@ -3,6 +3,7 @@ package dev.plumb.analysis;
 import dev.plumb.diagnostics.Code;
 import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Related;
+import dev.plumb.diagnostics.Severity;
 import dev.plumb.diagnostics.Span;
 import dev.plumb.syntax.Expr;
 import dev.plumb.syntax.Ident;
@@ -29,6 +30,7 @@ import java.util.Set;
  */
 final class FileAnalyzer {
     private static final Set<String> BASES = Set.of("frontal", "wetted", "planform");
+    private static final java.util.regex.Pattern WORD = java.util.regex.Pattern.compile("[\\p{L}_][\\p{L}\\p{Nd}_]*");
 
     private final Workspace workspace;
     private final Path file;
@@ -88,13 +90,14 @@ final class FileAnalyzer {
                 + root + ", the nearest folder holding .git or plumb.toml): copy the file into the workspace");
             return;
         }
-        if (chain.contains(target) || target.equals(file.toAbsolutePath().normalize())) {
-            List<String> loop = new ArrayList<>();
-            for (Path p : chain.subList(Math.max(0, chain.indexOf(target)), chain.size())) loop.add(p.getFileName().toString());
-            loop.add(file.getFileName().toString());
-            loop.add(target.getFileName().toString());
-            reporter.report(Code.USE_CYCLE, u.pathSpan(), "files use each other in a circle ("
-                + String.join(" → ", loop) + "): move the shared definitions into a file of their own");
+        Path self = file.toAbsolutePath().normalize();
+        if (chain.contains(target) || target.equals(self)) {
+            // The loop as seen from this file: this file, the target, … back to this file.
+            List<Path> loop = new ArrayList<>(chain.subList(Math.max(0, chain.indexOf(target)), chain.size()));
+            loop.add(self);
+            java.util.Collections.rotate(loop, -loop.indexOf(self));
+            imports.add(target);
+            reportUseCycle(u, loop);
             return;
         }
         List<Path> nextChain = new ArrayList<>(chain);
@@ -107,13 +110,14 @@ final class FileAnalyzer {
         }
         imports.add(target);
         Analysis a = imported.analysis();
-        long errors = a.diagnostics().stream().filter(d -> d.severity() == dev.plumb.diagnostics.Severity.ERROR).count();
-        if (errors > 0) {
-            Diagnostic first = a.diagnostics().stream()
-                .filter(d -> d.severity() == dev.plumb.diagnostics.Severity.ERROR).findFirst().orElseThrow();
-            reporter.report(Code.USE_HAS_ERRORS, u.pathSpan(), "\"" + u.path() + "\" has " + errors + " error"
-                + (errors == 1 ? "" : "s") + "; the first, on line " + a.lines().line(first.span().start()) + ": "
-                + first.message() + ". Fix them there: values that depend on them are unknown here");
+        List<Path> back = workspace.importPath(target, self);
+        if (back != null) {
+            List<Path> loop = new ArrayList<>();
+            loop.add(self);
+            loop.addAll(back.subList(0, back.size() - 1));
+            reportUseCycle(u, loop);
+        } else {
+            reportImportedErrors(u, a);
         }
         for (var entry : a.scope().all().entrySet()) {
             Binding existing = scope.all().get(entry.getKey());
@@ -124,6 +128,38 @@ final class FileAnalyzer {
                     + name(existing.file()) + " and in " + name(entry.getValue().file()) + ": rename one of them");
             }
         }
+    }
+
+    private void reportUseCycle(Statement.Use u, List<Path> loop) {
+        List<String> names = new ArrayList<>();
+        for (Path p : loop) names.add(p.getFileName().toString());
+        names.add(loop.get(0).getFileName().toString());
+        reporter.report(Code.USE_CYCLE, u.pathSpan(), "files use each other in a circle (" + String.join(" → ", names)
+            + "): move the shared definitions into a file of their own");
+    }
+
+    /**
+     * Errors in a used file leave values unknown here: an error. Failed checks there leave every
+     * value intact, so they are a warning here (the file's own check reports them as errors).
+     */
+    private void reportImportedErrors(Statement.Use u, Analysis a) {
+        List<Diagnostic> errors = a.diagnostics().stream().filter(d -> d.severity() == Severity.ERROR).toList();
+        if (errors.isEmpty()) return;
+        List<Diagnostic> blocking = errors.stream().filter(d -> d.code() != Code.CHECK_FAILED).toList();
+        Diagnostic first = blocking.isEmpty() ? errors.get(0) : blocking.get(0);
+        String where = "; the first, on line " + a.lines().line(first.span().start()) + ": " + first.message();
+        if (blocking.isEmpty()) {
+            reporter.add(new Diagnostic(Code.USE_HAS_ERRORS, Severity.WARNING, u.pathSpan(), "\"" + u.path() + "\" has "
+                + plural(errors.size(), "failing check") + where + ". Its values are computed; review the check there",
+                List.of()));
+            return;
+        }
+        reporter.report(Code.USE_HAS_ERRORS, u.pathSpan(), "\"" + u.path() + "\" has " + plural(blocking.size(), "error")
+            + where + ". Fix them there: values here that depend on them are unknown");
+    }
+
+    private static String plural(int n, String word) {
+        return n + " " + word + (n == 1 ? "" : "s");
     }
 
     private static boolean sameOrigin(Binding a, Binding b) {
@@ -164,7 +200,7 @@ final class FileAnalyzer {
         }
         own.put(n, s);
         if (s instanceof Statement.Function f) {
-            scope.put(n, new Binding.FunctionBinding(file, f.name().span(), f, scope));
+            scope.put(n, new Binding.FunctionBinding(file, f.name().span(), f, scope, false));
             Set<String> seen = new HashSet<>();
             for (Ident p : f.params()) {
                 if (!seen.add(p.text())) {
@@ -225,7 +261,9 @@ final class FileAnalyzer {
     }
 
     private void unknownName(String n, Span span) {
-        List<String> close = Suggestions.closest(n, scope.visibleNames(), 3);
+        Set<String> known = new HashSet<>(scope.visibleNames());
+        known.addAll(own.keySet());
+        List<String> close = Suggestions.closest(n, known, 3);
         String message = "unknown name '" + n + "'" + Suggestions.didYouMean(close);
         if (units.resolve(n) instanceof UnitResult.Ok) {
             message += "; '" + n + "' is a unit: write it right after a number, e.g. `3 " + n + "`";
@@ -242,8 +280,16 @@ final class FileAnalyzer {
             loop.add(cycle.get(0));
             for (String member : cycle) {
                 members.add(member);
-                reporter.report(Code.NAME_CYCLE, definedName(own.get(member)).span(), "circular definition: "
-                    + String.join(" → ", loop) + "; one of them must be given a value that does not depend on the others");
+                if (own.get(member) instanceof Statement.Function f) {
+                    scope.put(member, new Binding.FunctionBinding(file, f.name().span(), f, scope, true));
+                }
+                String message = cycle.size() == 1
+                    ? "circular definition: " + member + " uses itself; "
+                        + (own.get(member) instanceof Statement.Function ? "a function may not call itself"
+                            : "give it a value that does not depend on itself")
+                    : "circular definition: " + String.join(" → ", loop)
+                        + "; one of them must be given a value that does not depend on the others";
+                reporter.report(Code.NAME_CYCLE, definedName(own.get(member)).span(), message);
             }
         }
         return members;
@@ -312,6 +358,13 @@ final class FileAnalyzer {
     }
 
     private void reportUnusedInputs() {
+        // A line with a syntax error still mentions the names it meant to use.
+        for (Statement s : allStatements()) {
+            if (s instanceof Statement.Broken b) {
+                java.util.regex.Matcher m = WORD.matcher(text.substring(b.span().start(), b.span().end()));
+                while (m.find()) used.add(m.group());
+            }
+        }
         for (Statement s : own.values()) {
             if (s instanceof Statement.Definition d && d.input() && !used.contains(d.name().text())) {
                 reporter.report(Code.INPUT_UNUSED, d.name().span(), "input " + d.name().text()
@@ -321,6 +374,12 @@ final class FileAnalyzer {
     }
 
     // ---- results ---------------------------------------------------------------------
+
+    private List<Statement> allStatements() {
+        List<Statement> all = new ArrayList<>(own.values());
+        all.addAll(duplicates);
+        return all;
+    }
 
     private List<Row> rowsInOrder(List<Statement> statements) {
         List<Row> out = new ArrayList<>();

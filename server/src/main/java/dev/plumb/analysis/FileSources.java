@@ -47,7 +47,9 @@ public final class FileSources implements Sources {
             return new NotText("it is not valid UTF-8 text; save it as UTF-8", bytes.length);
         }
         out.flip();
-        return new Text(out.toString());
+        String text = out.toString();
+        // A byte-order mark is an encoding marker, not text: columns count from after it.
+        return new Text(text.startsWith("\uFEFF") ? text.substring(1) : text);
     }
 
     @Override

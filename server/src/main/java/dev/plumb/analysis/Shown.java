@@ -10,13 +10,13 @@ final class Shown {
     }
 
     /**
-     * The value in the given unit. An offset scale (°C, °F) shows a point only for a point; a
-     * temperature difference shown in °C is a difference, without the offset.
+     * The value in the given unit. On an offset scale (°C, °F) a temperature difference is shown
+     * as a difference, without the offset; anything else as a point.
      */
     static String value(Value v, Unit unit, int sig) {
         if (!v.known()) return "?";
         Unit u = unit == null ? DisplayUnits.defaultFor(v.dimension()) : unit;
-        if (u.absoluteTemperature() && !v.absolute() && u.isOffsetScale()) {
+        if (u.isOffsetScale() && v.difference()) {
             u = new Unit(u.symbol(), u.factor(), 0, u.dimension(), false);
         }
         return QuantityFormat.format(v.si(), u, sig);

@@ -3,20 +3,27 @@ package dev.plumb.analysis;
 import dev.plumb.units.Dimension;
 
 /**
- * A computed quantity: its SI magnitude as a double and its dimension. {@code absolute} marks a
- * point on a temperature scale (from °C or °F), which may not be added to another such point.
+ * A computed quantity: its SI magnitude as a double, its dimension, and for temperatures
+ * whether it is a point on a scale or a difference (see {@link Temperature}).
  * {@link #UNKNOWN} stands for a value that could not be computed; its error is already reported,
  * so everything built on it stays quiet.
  */
-public record Value(double si, Dimension dimension, boolean absolute) {
-    public static final Value UNKNOWN = new Value(Double.NaN, null, false);
+public record Value(double si, Dimension dimension, Temperature temperature) {
+    public static final Value UNKNOWN = new Value(Double.NaN, null, Temperature.EITHER);
+
+    /**
+     * What a temperature-dimensioned value stands for. °C and °F readings are points; the
+     * difference of two points is a difference; a value in K or °R may be either (288 K is a
+     * point, 5 K usually a difference), so it is never the cause of an error.
+     */
+    public enum Temperature { EITHER, POINT, DIFFERENCE }
 
     public static Value of(double si, Dimension dimension) {
-        return new Value(si, dimension, false);
+        return new Value(si, dimension, Temperature.EITHER);
     }
 
     public static Value number(double n) {
-        return new Value(n, Dimension.NONE, false);
+        return new Value(n, Dimension.NONE, Temperature.EITHER);
     }
 
     public boolean known() {
@@ -25,5 +32,13 @@ public record Value(double si, Dimension dimension, boolean absolute) {
 
     public boolean dimensionless() {
         return dimension != null && dimension.isDimensionless();
+    }
+
+    public boolean point() {
+        return temperature == Temperature.POINT;
+    }
+
+    public boolean difference() {
+        return temperature == Temperature.DIFFERENCE;
     }
 }

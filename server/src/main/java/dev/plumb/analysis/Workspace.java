@@ -37,7 +37,7 @@ public final class Workspace {
         Path key = file.toAbsolutePath().normalize();
         Imported result = analyzeImport(key, List.of());
         if (result.analysis() != null) return result.analysis();
-        return failure(key, "", Code.FILE_NOT_TEXT, "cannot read this file: " + result.problem(), 0);
+        return failure(key, "", Code.FILE_UNREADABLE, "cannot read this file: " + result.problem(), 0);
     }
 
     /** Analyses text that is not (or not yet) saved under its path, e.g. an editor buffer. */
@@ -60,6 +60,32 @@ public final class Workspace {
         }
         Imported raced = cache.putIfAbsent(file, fresh);
         return raced != null ? raced : fresh;
+    }
+
+    /**
+     * The files from {@code from} to {@code to} along `use` statements of analyses already made
+     * ({@code from} first, {@code to} last), or null when there is no such path.
+     */
+    List<Path> importPath(Path from, Path to) {
+        java.util.Map<Path, Path> cameFrom = new java.util.HashMap<>();
+        java.util.ArrayDeque<Path> queue = new java.util.ArrayDeque<>(List.of(from));
+        cameFrom.put(from, from);
+        while (!queue.isEmpty()) {
+            Path at = queue.poll();
+            Imported done = cache.get(at);
+            if (done == null || done.analysis() == null) continue;
+            for (Path next : done.analysis().imports()) {
+                if (cameFrom.putIfAbsent(next, at) != null) continue;
+                if (next.equals(to)) {
+                    java.util.LinkedList<Path> path = new java.util.LinkedList<>();
+                    for (Path p = to; !p.equals(from); p = cameFrom.get(p)) path.addFirst(p);
+                    path.addFirst(from);
+                    return path;
+                }
+                queue.add(next);
+            }
+        }
+        return null;
     }
 
     private Analysis guarded(Path file, String text, List<Path> chain) {

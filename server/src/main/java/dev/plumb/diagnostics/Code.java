@@ -8,6 +8,7 @@ public enum Code {
     SYNTAX_ERROR("syntax.error", Severity.ERROR),
     SYNTAX_NESTING("syntax.nesting", Severity.ERROR),
     FILE_NOT_TEXT("file.not-text", Severity.ERROR),
+    FILE_UNREADABLE("file.unreadable", Severity.ERROR),
     UNIT_UNKNOWN("unit.unknown", Severity.ERROR),
     UNIT_MISMATCH("unit.mismatch", Severity.ERROR),
     UNIT_NOT_DIMENSIONLESS("unit.not-dimensionless", Severity.ERROR),

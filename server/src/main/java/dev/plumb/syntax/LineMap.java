@@ -72,6 +72,8 @@ public final class LineMap {
     /** 1-based column in characters (code points). */
     public int column(int offset) {
         int start = lineStarts[lineIndex(offset)];
+        // A byte-order mark is an encoding marker, not a character anyone sees.
+        if (start == 0 && text.startsWith("\uFEFF") && offset > 0) start = 1;
         int end = Math.min(offset, text.length());
         return text.codePointCount(start, end) + 1;
     }

@@ -90,6 +90,11 @@ final class LineRecovery extends DefaultErrorStrategy {
                 + previous.getText() + "*m`, not `" + previous.getText() + ".m`)";
         }
         if (t.getType() == PlumbLexer.ERROR_CHAR) return unexpectedCharacter(t);
+        if (previous != null && previous.getType() == PlumbLexer.UNIT && TokenWords.isNameToken(t.getType())) {
+            return "a unit has no spaces inside: write `" + previous.getText() + "*" + t.getText()
+                + "` for a compound unit, or `" + previous.getText() + " * " + t.getText() + "` to multiply by a value named "
+                + t.getText();
+        }
         if (previous != null && endsOperand(previous) && startsOperand(t)) {
             return "missing operator between '" + previous.getText() + "' and '" + t.getText()
                 + "': write `" + previous.getText() + " * " + t.getText() + "` to multiply";
@@ -113,6 +118,7 @@ final class LineRecovery extends DefaultErrorStrategy {
             case "'" -> ": quoted text goes in double quotes \"…\"";
             case "[", "]", "{", "}" -> ": group with round brackets ( )";
             case "." -> ": numbers are written like 0.5 or .5; ranges use '..'";
+            case "²", "³", "¹", "⁻" -> ": a value's power is written with '^', e.g. `d^2` (superscripts belong to units only, `m²`)";
             default -> ": remove it or put it inside a \"quoted text\" or a '#' comment";
         };
         return "unexpected character " + TokenWords.character(text) + hint;

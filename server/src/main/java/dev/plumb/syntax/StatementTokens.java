@@ -49,6 +49,7 @@ final class StatementTokens {
     List<Token> arrange(List<? extends Token> tokens) {
         List<Token> out = new ArrayList<>(tokens.size());
         boolean inStatement = false;
+        boolean narrative = false;
         int statementIndent = leadingIndent(tokens);
         int statementStart = 0;
         for (int i = 0; i < tokens.size(); i++) {
@@ -58,7 +59,8 @@ final class StatementTokens {
                     int indent = indentOf(t.getText());
                     int next = nextType(tokens, i);
                     boolean blankOrEnd = next == PlumbLexer.NEWLINE || next == Token.EOF;
-                    if (inStatement && !blankOrEnd && indent > statementIndent) {
+                    // Narrative is prose on one line; an indented line after it starts a statement.
+                    if (inStatement && !narrative && !blankOrEnd && indent > statementIndent) {
                         t.setChannel(Token.HIDDEN_CHANNEL);
                         out.add(t);
                         continue;
@@ -66,6 +68,7 @@ final class StatementTokens {
                     if (inStatement) finishStatement(out, statementStart);
                     out.add(t);
                     inStatement = false;
+                    narrative = false;
                     statementStart = out.size();
                     if (!blankOrEnd) statementIndent = indent;
                 }
@@ -75,6 +78,7 @@ final class StatementTokens {
                     } else {
                         t.setType(PlumbLexer.NARRATIVE);
                         inStatement = true;
+                        narrative = true;
                     }
                     out.add(t);
                 }

@@ -33,7 +33,7 @@ final class DimensionNames {
         put(t, Dimension.of(2, 0, 0, 0, 0, 0, 0), "area", "m²");
         put(t, Dimension.of(3, 0, 0, 0, 0, 0, 0), "volume", "m³");
         put(t, Dimension.of(-1, 0, 0, 0, 0, 0, 0), "reciprocal length", "1/m");
-        put(t, Dimension.of(0, 0, -1, 0, 0, 0, 0), "frequency", "1/s");
+        put(t, Dimension.of(0, 0, -1, 0, 0, 0, 0), "frequency", "Hz");
         put(t, Dimension.of(1, 0, -1, 0, 0, 0, 0), "velocity", "m/s");
         put(t, Dimension.of(1, 0, -2, 0, 0, 0, 0), "acceleration", "m/s²");
         put(t, Dimension.of(1, 1, -2, 0, 0, 0, 0), "force", "N");

@@ -78,8 +78,7 @@ final class UnitSuggestions {
         }
         // A prefixed spelling costs one more edit: "mtr" more likely meant "m" than "mT".
         near.sort(Comparator
-                .comparingInt((String s) -> distance(s.toLowerCase(Locale.ROOT), lower)
-                        + (unprefixed.contains(s) ? 0 : 1))
+                .comparingInt((String s) -> distance(s, unknown) + (unprefixed.contains(s) ? 0 : 1))
                 .thenComparing(s -> sameFirstLetter(s, unknown) ? 0 : 1)
                 .thenComparingInt(s -> distance(s, unknown))
                 .thenComparingInt(String::length)

@@ -32,7 +32,8 @@ import java.util.stream.Collectors;
  * <ul>
  *   <li>An annotation line starts with {@code #} in column 0, so the engine reads it as
  *       narrative. Then come the marks, one or more spaces, the code, and optionally
- *       {@code : fragment}; the fragment must occur in the message.</li>
+ *       {@code : fragment}; the fragment must occur in the message. A fragment may skip
+ *       part of the message with {@code " ... "}: its parts must then occur in this order.</li>
  *   <li>The marks point at the nearest line above that is not itself an annotation. Columns are
  *       characters (code points) counted from the start of the line, the {@code #} being column 0;
  *       the helper converts them to the engine's UTF-16 offsets.</li>
@@ -69,10 +70,21 @@ final class Fixture {
     record Expected(int line, String source, Code code, int start, int end, boolean loose, String fragment) {
         boolean matches(Diagnostic d) {
             if (d.code() != code || d.severity() != code.severity()) return false;
-            if (!d.message().contains(fragment)) return false;
+            if (!containsInOrder(d.message(), fragment)) return false;
             if (d.span().start() != start) return false;
             return loose ? d.span().end() == start || d.span().end() == end : d.span().end() == end;
         }
+    }
+
+    /** Whether the message holds the fragment's parts, separated by " ... ", in this order. */
+    static boolean containsInOrder(String message, String fragment) {
+        int from = 0;
+        for (String part : fragment.split(" \\.\\.\\. ", -1)) {
+            int at = message.indexOf(part, from);
+            if (at < 0) return false;
+            from = at + part.length();
+        }
+        return true;
     }
 
     /** Analyses a fixture as one unsaved document and checks its annotations. */
@@ -94,6 +106,15 @@ final class Fixture {
 
     static Analysis analyze(String text) {
         return new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(FILE, text);
+    }
+
+    /** The result row of a defined value, by name. */
+    static Row.ValueRow value(Analysis a, String name) {
+        return a.rows().stream()
+            .filter(r -> r instanceof Row.ValueRow v && v.name().equals(name))
+            .map(r -> (Row.ValueRow) r)
+            .findFirst()
+            .orElseThrow(() -> new AssertionError("no value row " + name));
     }
 
     static String resource(String name) {

@@ -153,6 +153,27 @@ class ParserTest {
     }
 
     @Test
+    void narrativeNeverContinuesOntoAnIndentedLine() {
+        List<Statement> s = statements("# Prose about the mast\n    z = 1\n");
+        assertEquals(2, s.size());
+        assertInstanceOf(Statement.Narrative.class, s.get(0));
+        assertEquals("z", ((Statement.Definition) s.get(1)).name().text());
+    }
+
+    @Test
+    void reciprocalDisplayUnit() {
+        var d = (Statement.Definition) one("f = n / t in 1/s");
+        assertEquals("1/s", d.displayUnit().text());
+    }
+
+    @Test
+    void spaceInsideAUnitIsExplained() {
+        ParsedSource p = SourceParser.parse("y = 2 kg m\n");
+        assertEquals(1, p.diagnostics().size());
+        assertTrue(p.diagnostics().get(0).message().contains("`kg*m` for a compound unit"), p.diagnostics().get(0).message());
+    }
+
+    @Test
     void softKeywordsAreNamesOutsideStatementStart() {
         var d = (Statement.Definition) one("table = section + end");
         assertEquals("table", d.name().text());

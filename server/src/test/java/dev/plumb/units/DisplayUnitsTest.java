@@ -6,7 +6,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Default display units are the coherent SI units (factor 1) named in the SI Brochure, 9th
- * edition (BIPM, 2019), Tables 2, 4 and 5, from memory; frequency is shown as 1/s.
+ * edition (BIPM, 2019), Tables 2, 4 and 5, from memory; frequency is shown in hertz (SI Brochure Table 4: Hz = s⁻¹, from memory).
  */
 class DisplayUnitsTest {
 
@@ -20,7 +20,7 @@ class DisplayUnitsTest {
         check(Dimension.of(-1, 1, -2, 0, 0, 0, 0), "Pa");
         check(Dimension.of(2, 1, -2, 0, 0, 0, 0), "J");
         check(Dimension.of(2, 1, -3, 0, 0, 0, 0), "W");
-        check(Dimension.of(0, 0, -1, 0, 0, 0, 0), "1/s");
+        check(Dimension.of(0, 0, -1, 0, 0, 0, 0), "Hz");
         check(Dimension.of(3, 0, 0, 0, 0, 0, 0), "m³");
         check(Dimension.of(1, 0, -1, 0, 0, 0, 0), "m/s");
         check(Dimension.of(1, 0, -2, 0, 0, 0, 0), "m/s²");

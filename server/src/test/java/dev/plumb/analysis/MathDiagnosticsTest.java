@@ -1,0 +1,37 @@
+package dev.plumb.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+
+import org.junit.jupiter.api.Test;
+
+/** math.*: division by zero, values outside a function's domain, overflow. */
+class MathDiagnosticsTest {
+
+    @Test
+    void divisionByZeroNamesTheDivisor() {
+        Analysis a = Fixture.checkResource("math.division-by-zero.plumb");
+        assertFalse(Fixture.value(a, "V").value().known());
+        assertEquals("?", Fixture.value(a, "V").shown());
+    }
+
+    @Test
+    void valuesOutsideAFunctionsDomain() {
+        Fixture.checkResource("math.domain.plumb");
+    }
+
+    @Test
+    void overflowNamesTheOperands() {
+        Fixture.checkResource("math.not-finite.plumb");
+    }
+
+    @Test
+    void largeButFiniteValuesAreFine() {
+        Analysis a = Fixture.check("""
+            input a = 1e150 m
+            A = a * a
+            check A > 1e299 m^2
+            """);
+        assertEquals(1e300, Fixture.value(a, "A").value().si(), 1e285);
+    }
+}

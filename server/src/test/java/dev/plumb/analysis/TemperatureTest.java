@@ -1,0 +1,83 @@
+package dev.plumb.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Temperature points and differences. The conversions are definitions of the scales:
+ * T/K = t/°C + 273.15 (NIST SP 811 (2008), section 4.2.1.1, from memory); a difference of
+ * 1 °C equals a difference of 1 K (same section).
+ */
+class TemperatureTest {
+
+    private static Analysis analyze(String text) {
+        return Fixture.analyze(text);
+    }
+
+    private static List<Code> codes(Analysis a) {
+        return a.diagnostics().stream().map(Diagnostic::code).toList();
+    }
+
+    @Test
+    void negativeCelsiusReadingIsAPointBelowZero() {
+        Analysis a = analyze("input T = -5 degC\nx = T + 10 K in degC\n");
+        assertEquals(List.of(), codes(a));
+        assertEquals(268.15, Fixture.value(a, "T").value().si(), 1e-9);
+        assertEquals("5 °C", Fixture.value(a, "x").shown());
+    }
+
+    @Test
+    void differenceOfTwoPointsIsADifference() {
+        Analysis a = analyze("input T1 = 20 degC\ninput T2 = 25 degC\nd = T2 - T1\ne = d in degC\n");
+        assertEquals(List.of(), codes(a));
+        assertEquals(5.0, Fixture.value(a, "d").value().si(), 1e-12);
+        assertEquals("5 °C", Fixture.value(a, "e").shown(), "a difference shown in °C has no offset");
+    }
+
+    @Test
+    void checkThatComparesAPointWithADifferenceIsRefused() {
+        Analysis a = analyze("input T1 = 20 degC\ninput T2 = 25 degC\nd = T2 - T1\ncheck d < 1 degC\n");
+        assertEquals(List.of(Code.UNIT_MISMATCH), codes(a));
+        assertTrue(a.diagnostics().get(0).message().contains("temperature point"));
+        Row.CheckRow check = (Row.CheckRow) a.rows().get(a.rows().size() - 1);
+        assertNull(check.passed());
+    }
+
+    @Test
+    void kelvinValuesMayBePointsOrDifferences() {
+        // 288.15 K is 15 °C; 5 K added to a °C reading is a difference; neither is an error.
+        Analysis a = analyze("input T = 288.15 K\nshown = T in degC\ninput t = 15 degC\nu = t + 5 K in degC\n"
+            + "check T == t\ncheck u > 300 K - 10 K\n");
+        assertEquals(List.of(), codes(a));
+        assertEquals("15 °C", Fixture.value(a, "shown").shown());
+        assertEquals("20 °C", Fixture.value(a, "u").shown());
+    }
+
+    @Test
+    void subtractingAPointFromADifferenceIsRefused() {
+        Analysis a = analyze("input T1 = 20 degC\ninput T2 = 25 degC\nd = T2 - T1\nx = d - T1\n");
+        assertEquals(List.of(Code.UNIT_TEMPERATURE_SUM), codes(a));
+    }
+
+    @Test
+    void fahrenheitPointsConvert() {
+        // 68 °F = 20 °C = 293.15 K, by the definition t/°F = 1.8 t/°C + 32.
+        Analysis a = analyze("input T = 68 degF\nc = T in degC\n");
+        assertEquals(293.15, Fixture.value(a, "T").value().si(), 1e-9);
+        assertEquals("20 °C", Fixture.value(a, "c").shown());
+    }
+
+    @Test
+    void aMissingFileIsUnreadableNotBinary() {
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyze(Path.of("/nonexistent/plumb/x.plumb"));
+        assertEquals(List.of(Code.FILE_UNREADABLE), codes(a));
+        assertTrue(a.diagnostics().get(0).message().contains("no such file"));
+    }
+}
