@@ -38,7 +38,8 @@ final class DimensionNames {
         put(t, Dimension.of(1, 0, -2, 0, 0, 0, 0), "acceleration", "m/s²");
         put(t, Dimension.of(1, 1, -2, 0, 0, 0, 0), "force", "N");
         put(t, Dimension.of(-1, 1, -2, 0, 0, 0, 0), "pressure", "Pa");
-        put(t, Dimension.of(2, 1, -2, 0, 0, 0, 0), "energy", "J");
+        // In drag work this dimension is mostly an overturning or bending moment, so N·m.
+        put(t, Dimension.of(2, 1, -2, 0, 0, 0, 0), "moment or energy", "N·m");
         put(t, Dimension.of(2, 1, -3, 0, 0, 0, 0), "power", "W");
         put(t, Dimension.of(-3, 1, 0, 0, 0, 0, 0), "density", "kg/m³");
         put(t, Dimension.of(-1, 1, -1, 0, 0, 0, 0), "dynamic viscosity", "Pa·s");

@@ -18,7 +18,7 @@ class DisplayUnitsTest {
         check(Dimension.TEMPERATURE, "K");
         check(Dimension.of(1, 1, -2, 0, 0, 0, 0), "N");
         check(Dimension.of(-1, 1, -2, 0, 0, 0, 0), "Pa");
-        check(Dimension.of(2, 1, -2, 0, 0, 0, 0), "J");
+        check(Dimension.of(2, 1, -2, 0, 0, 0, 0), "N·m");
         check(Dimension.of(2, 1, -3, 0, 0, 0, 0), "W");
         check(Dimension.of(0, 0, -1, 0, 0, 0, 0), "Hz");
         check(Dimension.of(3, 0, 0, 0, 0, 0, 0), "m³");
