@@ -83,11 +83,12 @@ tokens { NARRATIVE }
         pushMode(UNIT_MODE);
     }
 
-    /** After the keyword `in`: the display unit follows. */
+    /** After the keyword `in` (a display unit) or a '[' (a table column's unit): a unit follows. */
     private void unitAfterKeyword() {
         int i = skipBlanks(1);
         boolean reciprocal = _input.LA(i) == '1' && _input.LA(i + 1) == '/';   // `in 1/s`
-        if (i == 1 || !(isUnitStart(_input.LA(i)) || reciprocal)) return;
+        boolean needsGap = getText().equals("in");
+        if ((needsGap && i == 1) || !(isUnitStart(_input.LA(i)) || reciprocal)) return;
         unitEnd = _input.index() + scanUnit(i) - 1;
         pushMode(UNIT_MODE);
     }
@@ -117,6 +118,13 @@ TABLE       : 'table';
 END         : 'end';
 WHEN        : 'when';
 OTHERWISE   : 'otherwise';
+SOURCE      : 'source';
+FAMILY      : 'family';
+BASIS       : 'basis';
+VALID       : 'valid';
+REGIME      : 'regime';
+ACCURACY    : 'accuracy';
+INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';
 
@@ -134,9 +142,12 @@ SLASH   : '/';
 CARET   : '^';
 LPAREN  : '(';
 RPAREN  : ')';
+LBRACK  : '[' { unitAfterKeyword(); };
+RBRACK  : ']';
 COMMA   : ',';
 COLON   : ':';
 DOTDOT  : '..';
+DOT     : '.';
 LE      : '<=' | '≤';
 GE      : '>=' | '≥';
 NE      : '!=' | '≠';

@@ -24,6 +24,9 @@ statement
     | functionDef
     | definition
     | check
+    | correlationHead
+    | tableHead
+    | blockLine
     ;
 
 header      : key=( TITLE | AUTHOR | REVIEWER | REVISION ) STRING;
@@ -35,6 +38,30 @@ definition  : name ASSIGN expr tail;
 functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN expr note?;
 check       : CHECK expr ( comparator expr )+ note?;
 
+/*
+ * Correlation and table blocks. The parser reads their lines one by one; the engine groups
+ * them into blocks, so a missing `end` or a stray line costs only a clear message.
+ */
+correlationHead : CORRELATION name LPAREN param ( COMMA param )* RPAREN;
+tableHead       : TABLE name LPAREN param RPAREN;
+param           : name ( COLON name )?;
+
+blockLine
+    : SOURCE STRING                                         # sourceLine
+    | FAMILY name                                           # familyLine
+    | BASIS name                                            # basisLine
+    | VALID expr ( comparator expr )+                       # validLine
+    | REGIME name                                           # regimeLine
+    | ACCURACY expr                                         # accuracyLine
+    | INTERPOLATE name                                      # interpolateLine
+    | ASSIGN expr ( WHEN expr ( comparator expr )+ | OTHERWISE )?  # pieceLine
+    | column column+                                        # columnsLine
+    | signedNumber+                                         # rowLine
+    | END                                                   # endLine
+    ;
+column          : name ( LBRACK UNIT RBRACK )?;
+signedNumber    : MINUS? NUMBER;
+
 tail        : ( IN UNIT )? ( AS name )? note?;
 note        : STRING;
 comparator  : LT | LE | GT | GE | EQ | NE;
@@ -45,7 +72,7 @@ expr
     | expr op=( STAR | SLASH ) expr                         # multiplicative
     | expr op=( PLUS | MINUS ) expr                         # additive
     | NUMBER UNIT?                                          # quantity
-    | name LPAREN ( expr ( COMMA expr )* )? RPAREN          # call
+    | name ( DOT name )? LPAREN ( expr ( COMMA expr )* )? RPAREN   # call
     | name                                                  # reference
     | LPAREN expr RPAREN                                    # parenthesized
     ;
@@ -54,4 +81,5 @@ expr
 name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
+    | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
     ;

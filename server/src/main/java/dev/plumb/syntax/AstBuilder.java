@@ -24,8 +24,9 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         this.errors = errors;
     }
 
-    List<Statement> document(PlumbParser.DocumentContext ctx, List<Token> tokens) {
-        List<Statement> out = new ArrayList<>();
+    /** The document's lines in order: statements, and block lines for {@link BlockGrouper}. */
+    List<Object> document(PlumbParser.DocumentContext ctx, List<Token> tokens) {
+        List<Object> out = new ArrayList<>();
         for (PlumbParser.LineContext line : ctx.line()) {
             PlumbParser.StatementContext s = line.statement();
             if (s == null || s.getStart() == null || s.getStart().getType() == Token.EOF) continue;
@@ -34,7 +35,7 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             if (errors.anyWithin(startCp, lineEndCp)) {
                 out.add(broken(s, tokens));
             } else {
-                out.add((Statement) visit(s));
+                out.add(visit(s));
             }
         }
         return out;
@@ -116,11 +117,104 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     @Override
     public Object visitCheck(PlumbParser.CheckContext ctx) {
+        Statement.Bound chain = bound(ctx, ctx.expr(), ctx.comparator());
+        return new Statement.Check(span(ctx), chain.operands(), chain.comparators(), note(ctx.note()));
+    }
+
+    private Statement.Bound bound(ParserRuleContext ctx, List<PlumbParser.ExprContext> exprs,
+                                  List<PlumbParser.ComparatorContext> ops) {
         List<Expr> operands = new ArrayList<>();
-        for (PlumbParser.ExprContext e : ctx.expr()) operands.add(expr(e));
+        for (PlumbParser.ExprContext e : exprs) operands.add(expr(e));
         List<Comparator> comparators = new ArrayList<>();
-        for (PlumbParser.ComparatorContext c : ctx.comparator()) comparators.add(comparator(c.getStart()));
-        return new Statement.Check(span(ctx), operands, comparators, note(ctx.note()));
+        for (PlumbParser.ComparatorContext c : ops) comparators.add(comparator(c.getStart()));
+        Span span = Span.cover(operands.get(0).span(), operands.get(operands.size() - 1).span());
+        return new Statement.Bound(span, operands, comparators);
+    }
+
+    // ---- correlation and table blocks ------------------------------------------------
+
+    @Override
+    public Object visitCorrelationHead(PlumbParser.CorrelationHeadContext ctx) {
+        List<Statement.Param> params = new ArrayList<>();
+        for (PlumbParser.ParamContext p : ctx.param()) params.add(param(p));
+        return new BlockLine.CorrelationHead(span(ctx), ident(ctx.name()), params);
+    }
+
+    @Override
+    public Object visitTableHead(PlumbParser.TableHeadContext ctx) {
+        return new BlockLine.TableHead(span(ctx), ident(ctx.name()), param(ctx.param()));
+    }
+
+    private Statement.Param param(PlumbParser.ParamContext ctx) {
+        List<PlumbParser.NameContext> names = ctx.name();
+        return new Statement.Param(ident(names.get(0)), names.size() > 1 ? ident(names.get(1)) : null);
+    }
+
+    @Override
+    public Object visitSourceLine(PlumbParser.SourceLineContext ctx) {
+        return new BlockLine.Property(span(ctx), "source", unquote(ctx.STRING().getText()), null);
+    }
+
+    @Override
+    public Object visitFamilyLine(PlumbParser.FamilyLineContext ctx) {
+        return new BlockLine.Property(span(ctx), "family", null, ident(ctx.name()));
+    }
+
+    @Override
+    public Object visitBasisLine(PlumbParser.BasisLineContext ctx) {
+        return new BlockLine.Property(span(ctx), "basis", null, ident(ctx.name()));
+    }
+
+    @Override
+    public Object visitRegimeLine(PlumbParser.RegimeLineContext ctx) {
+        return new BlockLine.Property(span(ctx), "regime", null, ident(ctx.name()));
+    }
+
+    @Override
+    public Object visitInterpolateLine(PlumbParser.InterpolateLineContext ctx) {
+        return new BlockLine.Property(span(ctx), "interpolate", null, ident(ctx.name()));
+    }
+
+    @Override
+    public Object visitValidLine(PlumbParser.ValidLineContext ctx) {
+        return new BlockLine.Valid(span(ctx), bound(ctx, ctx.expr(), ctx.comparator()));
+    }
+
+    @Override
+    public Object visitAccuracyLine(PlumbParser.AccuracyLineContext ctx) {
+        return new BlockLine.Accuracy(span(ctx), expr(ctx.expr()));
+    }
+
+    @Override
+    public Object visitPieceLine(PlumbParser.PieceLineContext ctx) {
+        List<PlumbParser.ExprContext> exprs = ctx.expr();
+        Statement.Bound when = ctx.WHEN() == null ? null : bound(ctx, exprs.subList(1, exprs.size()), ctx.comparator());
+        Statement.Piece piece = new Statement.Piece(span(ctx), expr(exprs.get(0)), when, ctx.OTHERWISE() != null);
+        return new BlockLine.Piece(span(ctx), piece);
+    }
+
+    @Override
+    public Object visitColumnsLine(PlumbParser.ColumnsLineContext ctx) {
+        List<Statement.Column> columns = new ArrayList<>();
+        for (PlumbParser.ColumnContext c : ctx.column()) {
+            columns.add(new Statement.Column(ident(c.name()), c.UNIT() == null ? null : unitText(c.UNIT().getSymbol())));
+        }
+        return new BlockLine.Columns(span(ctx), columns);
+    }
+
+    @Override
+    public Object visitRowLine(PlumbParser.RowLineContext ctx) {
+        List<Double> numbers = new ArrayList<>();
+        for (PlumbParser.SignedNumberContext n : ctx.signedNumber()) {
+            double v = Double.parseDouble(n.NUMBER().getText());
+            numbers.add(n.MINUS() == null ? v : -v);
+        }
+        return new BlockLine.Row(span(ctx), new Statement.Row(span(ctx), numbers));
+    }
+
+    @Override
+    public Object visitEndLine(PlumbParser.EndLineContext ctx) {
+        return new BlockLine.End(span(ctx));
     }
 
     private static Comparator comparator(Token t) {
@@ -174,7 +268,14 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     public Object visitCall(PlumbParser.CallContext ctx) {
         List<Expr> args = new ArrayList<>();
         for (PlumbParser.ExprContext e : ctx.expr()) args.add(expr(e));
-        return new Expr.Call(span(ctx), ident(ctx.name()), args);
+        // `table.column(x)` names one column of a table: the callee is the dotted name.
+        List<PlumbParser.NameContext> names = ctx.name();
+        Ident callee = ident(names.get(0));
+        if (names.size() > 1) {
+            Ident column = ident(names.get(1));
+            callee = new Ident(callee.text() + "." + column.text(), Span.cover(callee.span(), column.span()));
+        }
+        return new Expr.Call(span(ctx), callee, args);
     }
 
     @Override

@@ -53,6 +53,13 @@ final class LineRecovery extends DefaultErrorStrategy {
         return super.singleTokenDeletion(parser);
     }
 
+    /** Never conjure a line break: the rest of this line would be read as a new statement. */
+    @Override
+    protected boolean singleTokenInsertion(Parser parser) {
+        if (getExpectedTokens(parser).contains(PlumbLexer.NEWLINE)) return false;
+        return super.singleTokenInsertion(parser);
+    }
+
     @Override
     protected void reportNoViableAlternative(Parser parser, NoViableAltException e) {
         report(parser, e.getOffendingToken(), e.getExpectedTokens());
@@ -84,7 +91,7 @@ final class LineRecovery extends DefaultErrorStrategy {
     private static String message(Parser parser, Token t, org.antlr.v4.runtime.misc.IntervalSet expected) {
         if (t.getType() == PlumbLexer.UNTERMINATED_STRING) return unterminated();
         Token previous = parser.getInputStream().LT(-1);
-        if (t.getType() == PlumbLexer.ERROR_CHAR && t.getText().equals(".") && previous != null
+        if (".".equals(t.getText()) && previous != null
             && previous.getType() == PlumbLexer.UNIT) {
             return "unexpected '.' after the unit '" + previous.getText() + "': units multiply with '*' or '·' (write `"
                 + previous.getText() + "*m`, not `" + previous.getText() + ".m`)";

@@ -38,7 +38,9 @@ public final class SourceParser {
         List<Statement> statements;
         try {
             PlumbParser.DocumentContext tree = parser.document();
-            statements = new ArrayList<>(new AstBuilder(lines, errors).document(tree, tokens));
+            BlockGrouper blocks = new BlockGrouper();
+            statements = new ArrayList<>(blocks.group(new AstBuilder(lines, errors).document(tree, tokens)));
+            errors.diagnostics().addAll(blocks.diagnostics());
         } catch (StackOverflowError e) {
             // The token filter bounds nesting, so this is a last line of defence only.
             statements = new ArrayList<>();

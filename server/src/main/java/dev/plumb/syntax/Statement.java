@@ -42,6 +42,58 @@ public sealed interface Statement {
     }
 
     /**
+     * {@code correlation NAME(PARAMS) … end}: a published formula with what a reviewer needs to
+     * trust it. Optional parts are null when absent; {@code pieces} has one entry for a single
+     * {@code = EXPR}.
+     */
+    record Correlation(Span span, Ident name, List<Param> params, String title, String source, Ident family,
+                       Ident basis, List<Bound> valid, Ident regime, Expr accuracy, List<Piece> pieces)
+        implements Statement {
+        public Correlation {
+            params = List.copyOf(params);
+            valid = List.copyOf(valid);
+            pieces = List.copyOf(pieces);
+        }
+    }
+
+    /** {@code table NAME(X) … end}: columns of data; each output column is a function. */
+    record Table(Span span, Ident name, Param param, String title, String source, Ident family, List<Bound> valid,
+                 Ident interpolate, List<Column> columns, List<Row> rows) implements Statement {
+        public Table {
+            valid = List.copyOf(valid);
+            columns = List.copyOf(columns);
+            rows = List.copyOf(rows);
+        }
+    }
+
+    /** A parameter, with the dimension it must have when one is declared ({@code T: temperature}). */
+    record Param(Ident name, Ident dimension) {
+    }
+
+    /** A chained comparison: {@code valid 0 < Re <= 800}, or a piece's {@code when} condition. */
+    record Bound(Span span, List<Expr> operands, List<Comparator> comparators) {
+        public Bound {
+            operands = List.copyOf(operands);
+            comparators = List.copyOf(comparators);
+        }
+    }
+
+    /** {@code = EXPR [when CONDITION | otherwise]}; condition is null for otherwise or a lone formula. */
+    record Piece(Span span, Expr expr, Bound condition, boolean otherwise) {
+    }
+
+    /** A table column: its name and the unit of its numbers (null: plain numbers). */
+    record Column(Ident name, UnitText unit) {
+    }
+
+    /** A row of a table, the numbers as written. */
+    record Row(Span span, List<Double> numbers) {
+        public Row {
+            numbers = List.copyOf(numbers);
+        }
+    }
+
+    /**
      * A statement with a syntax error. Its name, when it had one, still counts as defined so that
      * later uses do not add "unknown name" noise to the syntax error already reported.
      */

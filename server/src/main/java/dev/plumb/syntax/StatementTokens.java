@@ -13,7 +13,8 @@ import org.antlr.v4.runtime.Token;
  * Decides the line structure of a document on the token list, before parsing:
  * <ul>
  *   <li>a line indented more deeply than the line that started the statement continues it
- *       (its NEWLINE is hidden);</li>
+ *       (its NEWLINE is hidden); inside a {@code correlation} or {@code table} block the inner
+ *       lines are statements of their own, and only lines deeper than them continue;</li>
  *   <li>a '#' comment that starts a statement line is NARRATIVE; after a statement it is a
  *       code comment (hidden);</li>
  *   <li>a statement nested too deeply or too long for the parser is dropped with a clear
@@ -52,6 +53,9 @@ final class StatementTokens {
         boolean narrative = false;
         int statementIndent = leadingIndent(tokens);
         int statementStart = 0;
+        // Block state: opened by a `correlation NAME(` or `table NAME(` line, closed by `end`.
+        boolean inBlock = false;
+        int blockIndent = -1;
         for (int i = 0; i < tokens.size(); i++) {
             CommonToken t = (CommonToken) tokens.get(i);
             switch (t.getType()) {
@@ -59,18 +63,33 @@ final class StatementTokens {
                     int indent = indentOf(t.getText());
                     int next = nextType(tokens, i);
                     boolean blankOrEnd = next == PlumbLexer.NEWLINE || next == Token.EOF;
-                    // Narrative is prose on one line; an indented line after it starts a statement.
-                    if (inStatement && !narrative && !blankOrEnd && indent > statementIndent) {
+                    // Narrative is prose on one line, and a block's head line never continues:
+                    // the indented lines after either start statements of their own.
+                    boolean head = inStatement && opensBlock(headTypes(out, statementStart));
+                    if (inStatement && !narrative && !head && !blankOrEnd && indent > statementIndent) {
                         t.setChannel(Token.HIDDEN_CHANNEL);
                         out.add(t);
                         continue;
                     }
-                    if (inStatement) finishStatement(out, statementStart);
+                    if (inStatement) {
+                        finishStatement(out, statementStart);
+                        List<Integer> first = headTypes(out, statementStart);
+                        if (head) {
+                            inBlock = true;
+                            blockIndent = -1;
+                        } else if (first.size() == 1 && first.get(0) == PlumbLexer.END) {
+                            inBlock = false;
+                        }
+                    }
                     out.add(t);
                     inStatement = false;
                     narrative = false;
                     statementStart = out.size();
-                    if (!blankOrEnd) statementIndent = indent;
+                    if (!blankOrEnd) {
+                        // Inside a block every line at the inner depth (or shallower) starts a statement.
+                        if (inBlock && blockIndent < 0) blockIndent = indent;
+                        statementIndent = inBlock ? Math.min(indent, blockIndent) : indent;
+                    }
                 }
                 case PlumbLexer.COMMENT -> {
                     if (inStatement) {
@@ -96,6 +115,21 @@ final class StatementTokens {
             }
         }
         return out;
+    }
+
+    /** The types of a statement's first default-channel tokens (at most three). */
+    private static List<Integer> headTypes(List<Token> out, int from) {
+        List<Integer> types = new ArrayList<>(3);
+        for (int i = from; i < out.size() && types.size() < 3; i++) {
+            if (out.get(i).getChannel() == Token.DEFAULT_CHANNEL) types.add(out.get(i).getType());
+        }
+        return types;
+    }
+
+    /** {@code correlation NAME(} or {@code table NAME(}: the keyword used as a keyword. */
+    private static boolean opensBlock(List<Integer> head) {
+        return head.size() == 3 && (head.get(0) == PlumbLexer.CORRELATION || head.get(0) == PlumbLexer.TABLE)
+            && TokenWords.isNameToken(head.get(1)) && head.get(2) == PlumbLexer.LPAREN;
     }
 
     /** The parser expects every statement to end with a NEWLINE, the last one too. */

@@ -57,7 +57,7 @@ final class TokenWords {
     }
 
     static boolean isNameToken(int type) {
-        return type == PlumbLexer.IDENT || (type >= PlumbLexer.TITLE && type <= PlumbLexer.OTHERWISE);
+        return type == PlumbLexer.IDENT || (type >= PlumbLexer.TITLE && type <= PlumbLexer.INTERPOLATE);
     }
 
     private static String word(int type) {
