@@ -27,7 +27,7 @@ class LayeringTest {
         "diagnostics", List.of(),
         "syntax", List.of("dev.plumb.diagnostics", "dev.plumb.grammar", "org.antlr.v4.runtime"),
         "units", List.of("dev.plumb.diagnostics", "javax.measure", "tech.units.indriya", "systems.uom"),
-        "analysis", List.of("dev.plumb.diagnostics", "dev.plumb.syntax", "dev.plumb.units"),
+        "analysis", List.of("dev.plumb.diagnostics", "dev.plumb.syntax", "dev.plumb.units", "org.apache.commons.math3"),
         "cli", List.of("dev.plumb.diagnostics", "dev.plumb.analysis", "dev.plumb.syntax", "dev.plumb.units",
             "picocli", "com.google.gson"));
 

@@ -13,8 +13,21 @@ public sealed interface Binding {
     /** Where it is defined (NONE for built-ins). */
     Span span();
 
-    /** A value: an input, a derived value or a built-in constant. */
-    record ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input)
+    /** A value: an input, a derived value or a built-in constant; origin is set for a correlation's result. */
+    record ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input, Origin origin)
+        implements Binding {
+    }
+
+    /** A correlation, with the scope of the file that defines it. */
+    record CorrelationBinding(Path file, Span span, Statement.Correlation def, Scope scope, boolean circular)
+        implements Binding {
+    }
+
+    /**
+     * One output column of a table: {@code name} is "table.column" (or the table's own name when it
+     * has a single output column).
+     */
+    record TableBinding(Path file, Span span, String name, Statement.Table def, TableData data, Scope scope)
         implements Binding {
     }
 

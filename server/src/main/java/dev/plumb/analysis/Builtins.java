@@ -38,7 +38,7 @@ final class Builtins {
     }
 
     private static void constant(String name, double si, Dimension d) {
-        ALL.put(name, new Binding.ValueBinding(null, Span.NONE, Value.of(si, d), DisplayUnits.defaultFor(d), null, false));
+        ALL.put(name, new Binding.ValueBinding(null, Span.NONE, Value.of(si, d), DisplayUnits.defaultFor(d), null, false, null));
     }
 
     private static void function(String name, int min, int max, String signature) {

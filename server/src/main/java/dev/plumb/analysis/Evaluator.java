@@ -31,7 +31,7 @@ final class Evaluator {
         this(scope, Map.of(), reporter, text, units);
     }
 
-    private Evaluator(Scope scope, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
+    Evaluator(Scope scope, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
         this.scope = scope;
         this.locals = locals;
         this.reporter = reporter;
@@ -91,7 +91,7 @@ final class Evaluator {
         if (local != null) return local;
         Binding b = scope.lookup(r.name());
         if (b instanceof Binding.ValueBinding v) return v.value();
-        if (b instanceof Binding.FunctionBinding || b instanceof Binding.BuiltinFunction) {
+        if (!(b instanceof Binding.ValueBinding) && b != null) {
             reporter.report(Code.NAME_KIND, r.span(),
                 r.name() + " is a function: call it with its arguments, e.g. " + r.name() + "(…)");
         }
@@ -116,6 +116,19 @@ final class Evaluator {
             if (!arity(c, f.minArgs(), f.maxArgs(), f.signature())) return Value.UNKNOWN;
             if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
             return new BuiltinCalls(reporter, this::operand).call(f.name(), c, args);
+        }
+        if (b instanceof Binding.CorrelationBinding cb) {
+            List<dev.plumb.syntax.Statement.Param> params = cb.def().params();
+            String signature = name + "(" + String.join(", ", params.stream().map(p -> p.name().text()).toList()) + ")";
+            if (!arity(c, params.size(), params.size(), signature)) return Value.UNKNOWN;
+            if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
+            return new CorrelationCall(scope, reporter, this::operand, units).correlation(c, cb, args);
+        }
+        if (b instanceof Binding.TableBinding tb) {
+            String signature = name + "(" + tb.def().param().name().text() + ")";
+            if (!arity(c, 1, 1, signature)) return Value.UNKNOWN;
+            if (!args.get(0).known()) return Value.UNKNOWN;
+            return new CorrelationCall(scope, reporter, this::operand, units).table(c, tb, args);
         }
         Binding.FunctionBinding f = (Binding.FunctionBinding) b;
         if (f.circular()) return Value.UNKNOWN;

@@ -29,7 +29,6 @@ import java.util.Set;
  * run; the result is an immutable {@link Analysis}.
  */
 final class FileAnalyzer {
-    private static final Set<String> BASES = Set.of("frontal", "wetted", "planform");
     private static final java.util.regex.Pattern WORD = java.util.regex.Pattern.compile("[\\p{L}_][\\p{L}\\p{Nd}_]*");
 
     private final Workspace workspace;
@@ -54,7 +53,7 @@ final class FileAnalyzer {
         this.text = text;
         this.chain = chain;
         this.settings = settings;
-        this.scope = new Scope(text);
+        this.scope = new Scope(text, workspace.library());
     }
 
     Analysis run() {
@@ -199,6 +198,19 @@ final class FileAnalyzer {
             return;
         }
         own.put(n, s);
+        if (s instanceof Statement.Correlation c) {
+            scope.put(n, new Binding.CorrelationBinding(file, c.name().span(), c, scope, false));
+            new BlockChecks(reporter, units).correlation(c);
+        }
+        if (s instanceof Statement.Table t) {
+            for (Binding.TableBinding column : new BlockChecks(reporter, units).table(t, file, scope)) {
+                if (!column.name().equals(n) && (own.containsKey(column.name()) || scope.all().containsKey(column.name()))) {
+                    reporter.report(Code.NAME_DUPLICATE, t.name().span(), column.name() + " is already defined");
+                    continue;
+                }
+                scope.put(column.name(), column);
+            }
+        }
         if (s instanceof Statement.Function f) {
             scope.put(n, new Binding.FunctionBinding(file, f.name().span(), f, scope, false));
             Set<String> seen = new HashSet<>();
@@ -213,6 +225,8 @@ final class FileAnalyzer {
     static Ident definedName(Statement s) {
         if (s instanceof Statement.Definition d) return d.name();
         if (s instanceof Statement.Function f) return f.name();
+        if (s instanceof Statement.Correlation c) return c.name();
+        if (s instanceof Statement.Table t) return t.name();
         if (s instanceof Statement.Broken b) return b.name();
         return null;
     }
@@ -234,6 +248,19 @@ final class FileAnalyzer {
             if (s instanceof Statement.Function f) {
                 exprs.add(f.body());
                 f.params().forEach(p -> params.add(p.text()));
+            }
+            if (s instanceof Statement.Correlation c) {
+                c.params().forEach(p -> params.add(p.name().text()));
+                for (Statement.Piece piece : c.pieces()) {
+                    exprs.add(piece.expr());
+                    if (piece.condition() != null) exprs.addAll(piece.condition().operands());
+                }
+                c.valid().forEach(b -> exprs.addAll(b.operands()));
+                if (c.accuracy() != null) exprs.add(c.accuracy());
+            }
+            if (s instanceof Statement.Table t) {
+                params.add(t.param().name().text());
+                t.valid().forEach(b -> exprs.addAll(b.operands()));
             }
             for (Expr e : exprs) {
                 References.each(e, (n, span) -> {
@@ -283,10 +310,13 @@ final class FileAnalyzer {
                 if (own.get(member) instanceof Statement.Function f) {
                     scope.put(member, new Binding.FunctionBinding(file, f.name().span(), f, scope, true));
                 }
+                if (own.get(member) instanceof Statement.Correlation c) {
+                    scope.put(member, new Binding.CorrelationBinding(file, c.name().span(), c, scope, true));
+                }
                 String message = cycle.size() == 1
                     ? "circular definition: " + member + " uses itself; "
-                        + (own.get(member) instanceof Statement.Function ? "a function may not call itself"
-                            : "give it a value that does not depend on itself")
+                        + (own.get(member) instanceof Statement.Definition ? "give it a value that does not depend on itself"
+                            : "a function or correlation may not call itself")
                     : "circular definition: " + String.join(" → ", loop)
                         + "; one of them must be given a value that does not depend on the others";
                 reporter.report(Code.NAME_CYCLE, definedName(own.get(member)).span(), message);
@@ -300,14 +330,27 @@ final class FileAnalyzer {
     private void evaluate(Statement s, boolean inCycle) {
         if (s instanceof Statement.Broken b) {
             if (!duplicates.contains(s) && b.name() != null) {
-                scope.put(b.name().text(), new Binding.ValueBinding(file, b.name().span(), Value.UNKNOWN, null, null, false));
+                scope.put(b.name().text(), new Binding.ValueBinding(file, b.name().span(), Value.UNKNOWN, null, null, false, null));
             }
-            rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null, null));
+            rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null,
+                null, null));
             return;
         }
         if (s instanceof Statement.Function f) {
             String signature = f.name().text() + "(" + String.join(", ", f.params().stream().map(Ident::text).toList()) + ")";
-            rows.put(s, new Row.FunctionRow(f.span(), signature, f.note()));
+            rows.put(s, new Row.FunctionRow(f.span(), signature, "function", f.note()));
+            return;
+        }
+        if (s instanceof Statement.Correlation c) {
+            String signature = c.name().text() + "(" + String.join(", ", c.params().stream().map(p -> p.name().text())
+                .toList()) + ")";
+            rows.put(s, new Row.FunctionRow(c.span(), signature, "correlation", c.title()));
+            new BlockChecks(reporter, units).accuracy(c, scope, text);
+            return;
+        }
+        if (s instanceof Statement.Table t) {
+            String signature = t.name().text() + "(" + t.param().name().text() + ")";
+            rows.put(s, new Row.FunctionRow(t.span(), signature, "table", t.title()));
             return;
         }
         if (!(s instanceof Statement.Definition d)) return;
@@ -316,11 +359,12 @@ final class FileAnalyzer {
         if (inCycle) v = Value.UNKNOWN;
         Unit display = displayUnit(d, v, evaluator);
         String basis = basis(d);
+        Origin origin = BlockChecks.origin(d.expr(), scope, units);
         if (!duplicates.contains(s)) {
-            scope.put(d.name().text(), new Binding.ValueBinding(file, d.name().span(), v, display, basis, d.input()));
+            scope.put(d.name().text(), new Binding.ValueBinding(file, d.name().span(), v, display, basis, d.input(), origin));
         }
         String shown = Shown.value(v, display, settings.significantFigures());
-        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note()));
+        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note(), origin));
     }
 
     private Unit displayUnit(Statement.Definition d, Value v, Evaluator evaluator) {
@@ -351,9 +395,9 @@ final class FileAnalyzer {
     private String basis(Statement.Definition d) {
         if (d.basis() == null) return null;
         String b = d.basis().text();
-        if (BASES.contains(b)) return b;
+        if (BlockChecks.BASES.contains(b)) return b;
         reporter.report(Code.BASIS_UNKNOWN, d.basis().span(), "unknown area basis '" + b + "'"
-            + Suggestions.didYouMean(Suggestions.closest(b, BASES, 1)) + ": use frontal, wetted or planform");
+            + Suggestions.didYouMean(Suggestions.closest(b, BlockChecks.BASES, 1)) + ": use frontal, wetted or planform");
         return null;
     }
 

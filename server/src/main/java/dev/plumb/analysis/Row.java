@@ -16,11 +16,12 @@ public sealed interface Row {
      * A defined value. {@code shown} is the value in its display unit ("1.204 kg/m³"), "?" when
      * it could not be computed.
      */
-    record ValueRow(Span span, String name, boolean input, Value value, String shown, String basis, String note)
-        implements Row {
+    record ValueRow(Span span, String name, boolean input, Value value, String shown, String basis, String note,
+                    Origin origin) implements Row {
     }
 
-    record FunctionRow(Span span, String signature, String note) implements Row {
+    /** A function, correlation or table column; kind is "function", "correlation" or "table". */
+    record FunctionRow(Span span, String signature, String kind, String note) implements Row {
     }
 
     /** A check; {@code passed} is null when it could not be evaluated. */

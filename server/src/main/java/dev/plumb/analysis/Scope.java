@@ -11,9 +11,16 @@ import java.util.Map;
 public final class Scope {
     private final Map<String, Binding> names = new HashMap<>();
     private final String text;
+    /** The standard library (or, while it loads, its files read so before); null for none. */
+    private final Scope library;
 
     Scope(String text) {
+        this(text, null);
+    }
+
+    Scope(String text, Scope library) {
         this.text = text;
+        this.library = library;
     }
 
     /** The source text of the document this scope belongs to (for messages about its functions). */
@@ -21,9 +28,17 @@ public final class Scope {
         return text;
     }
 
+    /** A document's own and imported names first (they shadow the library), then the library, then built-ins. */
     public Binding lookup(String name) {
         Binding own = names.get(name);
-        return own != null ? own : Builtins.lookup(name);
+        if (own != null) return own;
+        Binding fromLibrary = library == null ? null : library.lookup(name);
+        return fromLibrary != null ? fromLibrary : Builtins.lookup(name);
+    }
+
+    /** True when the name comes from the standard library (not defined or imported here). */
+    boolean fromLibrary(String name) {
+        return !names.containsKey(name) && library != null && library.lookup(name) != null;
     }
 
     void put(String name, Binding binding) {
@@ -37,6 +52,7 @@ public final class Scope {
     /** Every name a document can use, for suggestions. */
     public Collection<String> visibleNames() {
         var all = new java.util.TreeSet<>(names.keySet());
+        if (library != null) all.addAll(library.visibleNames());
         all.addAll(Builtins.names());
         return all;
     }

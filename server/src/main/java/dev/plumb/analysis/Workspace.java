@@ -18,10 +18,21 @@ public final class Workspace {
     private final Sources sources;
     private final Settings settings;
     private final Map<Path, Imported> cache = new ConcurrentHashMap<>();
+    /** The names every document sees besides its own and built-ins: the standard library. */
+    private final Scope library;
 
     public Workspace(Sources sources, Settings settings) {
+        this(sources, settings, Stdlib.get().scope());
+    }
+
+    Workspace(Sources sources, Settings settings, Scope library) {
         this.sources = sources;
         this.settings = settings;
+        this.library = library;
+    }
+
+    Scope library() {
+        return library;
     }
 
     Sources sources() {

@@ -33,7 +33,7 @@ final class EvalReport {
                 String basis = v.basis() == null ? "" : "  [" + v.basis() + "]";
                 out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + note).stripTrailing());
             } else if (r instanceof Row.FunctionRow f) {
-                out.println("  " + f.signature() + "  (function)" + (f.note() == null ? "" : "  " + f.note()));
+                out.println("  " + f.signature() + "  (" + f.kind() + ")" + (f.note() == null ? "" : "  " + f.note()));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "?" : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();

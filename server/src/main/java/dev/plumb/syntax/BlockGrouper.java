@@ -191,8 +191,8 @@ final class BlockGrouper {
         } else {
             checkRows(head, columns, rows);
         }
-        return new Statement.Table(span, head.name(), head.param(), meta.title, meta.source, meta.family, meta.valid,
-            meta.interpolate, columns == null ? List.of() : columns, rows);
+        return new Statement.Table(span, head.name(), head.param(), meta.title, meta.source, meta.family, meta.basis,
+            meta.valid, meta.accuracy, meta.interpolate, columns == null ? List.of() : columns, rows);
     }
 
     private void checkRows(BlockLine.TableHead head, List<Statement.Column> columns, List<Statement.Row> rows) {

@@ -57,8 +57,9 @@ public sealed interface Statement {
     }
 
     /** {@code table NAME(X) … end}: columns of data; each output column is a function. */
-    record Table(Span span, Ident name, Param param, String title, String source, Ident family, List<Bound> valid,
-                 Ident interpolate, List<Column> columns, List<Row> rows) implements Statement {
+    record Table(Span span, Ident name, Param param, String title, String source, Ident family, Ident basis,
+                 List<Bound> valid, Expr accuracy, Ident interpolate, List<Column> columns, List<Row> rows)
+        implements Statement {
         public Table {
             valid = List.copyOf(valid);
             columns = List.copyOf(columns);

@@ -87,8 +87,9 @@ final class StatementTokens {
                     statementStart = out.size();
                     if (!blankOrEnd) {
                         // Inside a block every line at the inner depth (or shallower) starts a statement.
-                        if (inBlock && blockIndent < 0) blockIndent = indent;
-                        statementIndent = inBlock ? Math.min(indent, blockIndent) : indent;
+                        // Comment lines say nothing about the block's depth.
+                        if (inBlock && blockIndent < 0 && next != PlumbLexer.COMMENT) blockIndent = indent;
+                        statementIndent = inBlock && blockIndent >= 0 ? Math.min(indent, blockIndent) : indent;
                     }
                 }
                 case PlumbLexer.COMMENT -> {

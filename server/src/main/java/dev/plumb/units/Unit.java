@@ -17,6 +17,9 @@ import java.util.Objects;
 public record Unit(String symbol, double factor, double offset, Dimension dimension,
                    boolean absoluteTemperature) {
 
+    /** A plain number: no unit, factor 1. */
+    public static final Unit PLAIN_NUMBER = new Unit("", 1, 0, Dimension.NONE, false);
+
     public Unit {
         Objects.requireNonNull(symbol, "symbol");
         Objects.requireNonNull(dimension, "dimension");

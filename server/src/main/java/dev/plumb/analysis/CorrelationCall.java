@@ -1,0 +1,203 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.Dimension;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.UnitRegistry;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.BiFunction;
+
+/**
+ * Calls a correlation or reads a table column, with the checks a reviewer needs at every call:
+ * parameter dimensions, the {@code valid} range (with the library's alternatives that do cover
+ * the value), the boundary-layer regime, and which piece of a piecewise formula applies.
+ */
+final class CorrelationCall {
+    private final Scope caller;
+    private final Reporter reporter;
+    private final BiFunction<Expr, Value, String> operand;
+    private final UnitRegistry units;
+
+    CorrelationCall(Scope caller, Reporter reporter, BiFunction<Expr, Value, String> operand, UnitRegistry units) {
+        this.caller = caller;
+        this.reporter = reporter;
+        this.operand = operand;
+        this.units = units;
+    }
+
+    Value correlation(Expr.Call c, Binding.CorrelationBinding b, List<Value> args) {
+        Statement.Correlation def = b.def();
+        String name = def.name().text();
+        if (b.circular() || !dimensionsFit(c, name, def.params(), args)) return Value.UNKNOWN;
+        Map<String, Value> params = RangeCheck.bind(def.params(), args);
+        Reporter inner = reporter.inCall(name, c.span(), b.file());
+        Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
+        Set<String> names = params.keySet();
+        for (Statement.Bound bound : def.valid()) {
+            String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
+            if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), name + " is " + why + alternatives(b, args));
+        }
+        regime(c, b, params, args);
+        for (Statement.Piece piece : def.pieces()) {
+            if (piece.otherwise() || piece.condition() == null) return inside.eval(piece.expr());
+            List<Value> sides = piece.condition().operands().stream().map(inside::eval).toList();
+            if (sides.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
+            boolean holds = true;
+            for (int i = 0; i < piece.condition().comparators().size(); i++) {
+                holds &= sides.get(i).dimension().equals(sides.get(i + 1).dimension())
+                    && RangeCheck.holds(sides.get(i).si(), piece.condition().comparators().get(i), sides.get(i + 1).si());
+            }
+            if (holds) return inside.eval(piece.expr());
+        }
+        reporter.report(Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
+            + ": every `when` condition is false; add a last line `= … otherwise` to " + name);
+        return Value.UNKNOWN;
+    }
+
+    Value table(Expr.Call c, Binding.TableBinding t, List<Value> args) {
+        Statement.Table def = t.def();
+        if (!dimensionsFit(c, t.name(), List.of(def.param()), args)) return Value.UNKNOWN;
+        TableData data = t.data();
+        Value x = args.get(0);
+        if (!x.dimension().equals(data.argument)) {
+            reporter.report(Code.UNIT_MISMATCH, c.args().get(0).span(), t.name() + " reads its table by "
+                + data.argument.describe() + ", but " + operand.apply(c.args().get(0), x) + " is " + x.dimension().describe());
+            return Value.UNKNOWN;
+        }
+        String param = def.param().name().text();
+        if (!data.covers(x.si())) {
+            String lo = Shown.value(Value.of(data.first(), data.argument), data.argumentUnit, 4);
+            String hi = Shown.value(Value.of(data.last(), data.argument), data.argumentUnit, 4);
+            boolean above = x.si() > data.last();
+            Value limit = Value.of(above ? data.last() : data.first(), data.argument);
+            reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " reads its table from " + lo + " to " + hi + ", but "
+                + param + " = " + Shown.value(x, data.argumentUnit, 4) + " here: "
+                + RangeCheck.distance(x, limit, above, data.argumentUnit, above ? "the last row" : "the first row")
+                + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows"
+                + alternatives(t, args));
+        }
+        Map<String, Value> params = Map.of(param, x);
+        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCall(t.name(), c.span(), t.file()),
+            t.scope().text(), units);
+        for (Statement.Bound bound : def.valid()) {
+            String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
+            if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " is " + why + alternatives(t, args));
+        }
+        double v = data.at(x.si());
+        if (Double.isNaN(v)) {
+            reporter.report(Code.MATH_DOMAIN, c.span(), t.name() + " interpolates log–log, so it needs a positive "
+                + param + ", but " + operand.apply(c.args().get(0), x) + " is not");
+            return Value.UNKNOWN;
+        }
+        return Value.of(v, data.result);
+    }
+
+    private boolean dimensionsFit(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {
+        for (int i = 0; i < params.size(); i++) {
+            Statement.Param p = params.get(i);
+            Dimension wanted = p.dimension() == null ? null : ParameterDimensions.of(p.dimension().text());
+            if (wanted == null || wanted.equals(args.get(i).dimension())) continue;
+            reporter.report(Code.UNIT_MISMATCH, c.args().get(i).span(), name + " takes " + p.name().text() + " as "
+                + wanted.describe() + ", but " + operand.apply(c.args().get(i), args.get(i)) + " is "
+                + args.get(i).dimension().describe());
+            return false;
+        }
+        return true;
+    }
+
+    /** Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below. */
+    private void regime(Expr.Call c, Binding.CorrelationBinding b, Map<String, Value> params, List<Value> args) {
+        Statement.Correlation def = b.def();
+        if (def.regime() == null) return;
+        String reName = def.params().stream().map(p -> p.name().text()).filter(n -> n.startsWith("Re")).findFirst()
+            .orElse(null);
+        if (reName == null || !(caller.lookup("Re_crit") instanceof Binding.ValueBinding crit)
+            || !crit.value().known() || !crit.value().dimensionless()) {
+            return;
+        }
+        double re = params.get(reName).si();
+        double reCrit = crit.value().si();
+        boolean laminar = def.regime().text().equals("laminar");
+        if (laminar ? re <= reCrit : re >= reCrit) return;
+        String name = def.name().text();
+        String shownRe = Shown.value(params.get(reName), DisplayUnits.defaultFor(Dimension.NONE), 4);
+        String shownCrit = Shown.value(crit.value(), DisplayUnits.defaultFor(Dimension.NONE), 4);
+        String message = laminar
+            ? name + " assumes a laminar boundary layer, but " + reName + " = " + shownRe + " is above the critical "
+                + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely transitional or turbulent there"
+            : name + " assumes a turbulent boundary layer, but " + reName + " = " + shownRe + " is below the critical "
+                + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely laminar there";
+        List<String> better = new ArrayList<>();
+        for (Binding other : familyMembers(b)) {
+            if (other instanceof Binding.CorrelationBinding oc && covers(oc, args)
+                && (oc.def().regime() == null || !oc.def().regime().text().equals(def.regime().text()))) {
+                better.add(oc.def().name().text());
+            }
+        }
+        String fix = better.isEmpty() ? "; use a correlation for that regime"
+            : "; use " + (laminar ? "a mixed-flow or turbulent" : "a laminar or mixed-flow") + " correlation: "
+                + String.join(", ", better);
+        reporter.report(Code.RANGE_REGIME, c.span(), message + fix);
+    }
+
+    /** "; within range: a, b" — the library's members of the same family that cover these arguments. */
+    private String alternatives(Binding self, List<Value> args) {
+        String family = Stdlib.familyOf(self);
+        if (family == null) return "";
+        List<String> names = new ArrayList<>();
+        for (Binding other : familyMembers(self)) {
+            boolean fits = other instanceof Binding.CorrelationBinding oc ? covers(oc, args)
+                : other instanceof Binding.TableBinding ot && covers(ot, args);
+            if (fits) names.add(nameOf(other));
+        }
+        return names.isEmpty() ? "; no standard-library correlation of family " + family + " covers it"
+            : "; within range: " + String.join(", ", names);
+    }
+
+    private static List<Binding> familyMembers(Binding self) {
+        String family = Stdlib.familyOf(self);
+        Stdlib library = Stdlib.ready();
+        if (family == null || library == null) return List.of();
+        List<Binding> out = new ArrayList<>();
+        for (Binding b : library.family(family)) {
+            if (!nameOf(b).equals(nameOf(self))) out.add(b);
+        }
+        return out;
+    }
+
+    private static String nameOf(Binding b) {
+        return b instanceof Binding.CorrelationBinding c ? c.def().name().text() : ((Binding.TableBinding) b).name();
+    }
+
+    private boolean covers(Binding.CorrelationBinding other, List<Value> args) {
+        List<Statement.Param> params = other.def().params();
+        if (other.circular() || params.size() != args.size()) return false;
+        for (int i = 0; i < params.size(); i++) {
+            Statement.Param p = params.get(i);
+            Dimension wanted = p.dimension() == null ? null : ParameterDimensions.of(p.dimension().text());
+            if (wanted != null && !wanted.equals(args.get(i).dimension())) return false;
+        }
+        Evaluator silent = new Evaluator(other.scope(), RangeCheck.bind(params, args), new Reporter(),
+            other.scope().text(), units);
+        return RangeCheck.within(other.def().valid(), silent);
+    }
+
+    private boolean covers(Binding.TableBinding other, List<Value> args) {
+        if (args.size() != 1 || !args.get(0).dimension().equals(other.data().argument)) return false;
+        if (!other.data().covers(args.get(0).si())) return false;
+        Evaluator silent = new Evaluator(other.scope(), Map.of(other.def().param().name().text(), args.get(0)),
+            new Reporter(), other.scope().text(), units);
+        return RangeCheck.within(other.def().valid(), silent);
+    }
+
+    private static String arguments(Statement.Correlation def, List<Value> args) {
+        List<String> parts = new ArrayList<>();
+        for (int i = 0; i < args.size(); i++) parts.add(def.params().get(i).name().text() + " = " + Shown.value(args.get(i)));
+        return String.join(", ", parts);
+    }
+}
