@@ -2,7 +2,10 @@ package dev.plumb.cli;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
+import dev.plumb.units.QuantityFormat;
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 
 /** The body of `plumb eval`: header, then each section's values and checks, aligned. */
 final class EvalReport {
@@ -30,7 +33,7 @@ final class EvalReport {
                 out.println(style.bold(s.title()));
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
-                String basis = v.basis() == null ? "" : "  [" + v.basis() + "]";
+                String basis = tag(v);
                 out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + note).stripTrailing());
             } else if (r instanceof Row.FunctionRow f) {
                 out.println("  " + f.signature() + "  (" + f.kind() + ")" + (f.note() == null ? "" : "  " + f.note()));
@@ -40,6 +43,16 @@ final class EvalReport {
                 out.println("  " + mark + "  check " + c.source() + "   [" + c.detail() + "]" + why);
             }
         }
+    }
+
+    /** "[frontal]" for a tagged area; "[cd_x: frontal basis, ±5 %]" for a correlation's result. */
+    private static String tag(Row.ValueRow v) {
+        if (v.basis() != null) return "  [" + v.basis() + "]";
+        if (v.origin() == null) return "";
+        List<String> parts = new ArrayList<>();
+        if (v.origin().basis() != null) parts.add(v.origin().basis() + " basis");
+        if (v.origin().accuracy() != null) parts.add("±" + QuantityFormat.number(v.origin().accuracy() * 100, 3) + " %");
+        return "  [" + v.origin().correlation() + (parts.isEmpty() ? "" : ": " + String.join(", ", parts)) + "]";
     }
 
     private static int width(String s) {
