@@ -41,6 +41,11 @@ public final class CheckBenchmark {
 
         System.out.printf("Plumb check benchmark — %d cores, %s %s%n", cores, System.getProperty("java.vm.name"),
             System.getProperty("java.version"));
+        long libraryStart = System.nanoTime();
+        dev.plumb.analysis.Stdlib library = dev.plumb.analysis.Stdlib.get();
+        System.out.printf("standard library: %d entries in %d files, read and checked in %.0f ms (once per process;"
+                + " first use %.0f ms)%n", library.entries().size(), library.files().size(), library.loadNanos() / 1e6,
+            (System.nanoTime() - libraryStart) / 1e6);
         report("samples (" + samples.size() + " files), in process", () -> Batch.check(fresh(), samples, cores));
         report("generated " + lines + "-line document, in process", () -> Batch.check(fresh(), List.of(big), 1));
         Path jar = root.resolve("server/target/plumb.jar");
