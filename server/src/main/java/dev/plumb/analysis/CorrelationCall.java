@@ -35,7 +35,7 @@ final class CorrelationCall {
         String name = def.name().text();
         if (b.circular() || !dimensionsFit(c, name, def.params(), args)) return Value.UNKNOWN;
         Map<String, Value> params = RangeCheck.bind(def.params(), args);
-        Reporter inner = reporter.inCall(name, c.span(), b.file());
+        Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
         Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
         Set<String> names = params.keySet();
         for (Statement.Bound bound : def.valid()) {
@@ -82,7 +82,7 @@ final class CorrelationCall {
                 + alternatives(t, args));
         }
         Map<String, Value> params = Map.of(param, x);
-        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCall(t.name(), c.span(), t.file()),
+        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCorrelation(t.name(), c.span(), t.file()),
             t.scope().text(), units);
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());

@@ -22,20 +22,28 @@ final class Reporter {
     private final String function;
     private final Span callSpan;
     private final Path definingFile;
+    /**
+     * Inside a correlation's formula the range warnings of the correlations it calls stay quiet:
+     * the outer correlation's own range is what the reviewer is told about.
+     */
+    private final boolean quietRanges;
 
     Reporter() {
-        this(new LinkedHashSet<>(), null, null, null, null);
+        this(new LinkedHashSet<>(), null, null, null, null, false);
     }
 
-    private Reporter(Set<Diagnostic> diagnostics, Reporter caller, String function, Span callSpan, Path file) {
+    private Reporter(Set<Diagnostic> diagnostics, Reporter caller, String function, Span callSpan, Path file,
+                     boolean quietRanges) {
         this.diagnostics = diagnostics;
         this.caller = caller;
         this.function = function;
         this.callSpan = callSpan;
         this.definingFile = file;
+        this.quietRanges = quietRanges;
     }
 
     void report(Code code, Span span, String message) {
+        if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME)) return;
         if (caller == null) {
             diagnostics.add(Diagnostic.of(code, span, message));
             return;
@@ -58,7 +66,12 @@ final class Reporter {
 
     /** A reporter for evaluating the body of {@code function} called at {@code at}. */
     Reporter inCall(String function, Span at, Path definingFile) {
-        return new Reporter(diagnostics, this, function, at, definingFile);
+        return new Reporter(diagnostics, this, function, at, definingFile, quietRanges);
+    }
+
+    /** As {@link #inCall}, for a correlation's formula: nested range warnings stay quiet. */
+    Reporter inCorrelation(String correlation, Span at, Path definingFile) {
+        return new Reporter(diagnostics, this, correlation, at, definingFile, true);
     }
 
     List<Diagnostic> all() {

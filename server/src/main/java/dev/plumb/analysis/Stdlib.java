@@ -1,5 +1,6 @@
 package dev.plumb.analysis;
 
+import dev.plumb.syntax.Statement;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -69,10 +70,26 @@ public final class Stdlib {
                 if (!(r instanceof Row.FunctionRow f) || f.kind().equals("function")) continue;
                 String name = f.signature().substring(0, f.signature().indexOf('('));
                 Binding b = scope.lookup(name);
-                if (b != null) out.put(name, b);
+                if (b != null) {
+                    out.put(name, b);
+                } else if (f.kind().equals("table")) {
+                    // A table with several output columns is called by column: water.rho, water.mu.
+                    List<Statement.Column> columns = tableNamed(a, name).columns();
+                    for (Statement.Column column : columns.subList(1, columns.size())) {
+                        Binding col = scope.lookup(name + "." + column.name().text());
+                        if (col != null) out.put(name + "." + column.name().text(), col);
+                    }
+                }
             }
         }
         return out;
+    }
+
+    private Statement.Table tableNamed(Analysis a, String name) {
+        for (Binding b : a.scope().all().values()) {
+            if (b instanceof Binding.TableBinding t && t.def().name().text().equals(name)) return t.def();
+        }
+        throw new IllegalStateException("no table " + name);
     }
 
     /** The library's correlations and table columns of a family, to offer where one is out of range. */
