@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Row;
 import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Severity;
 import java.util.ArrayList;
@@ -28,8 +29,13 @@ class PropertiesTest {
 
     @Test
     void aDocumentMayShadowReCrit() {
-        Analysis a = StdlibCheck.analyze("Re_crit = 3e5\nx = Re_crit\n");
+        Analysis a = StdlibCheck.analyze("Re_crit = 3e5\nx = 2 * Re_crit\n");
         assertTrue(Warnings.errors(a.diagnostics()).isEmpty(), () -> "" + a.diagnostics());
+        double x = a.rows().stream()
+            .filter(r -> r instanceof Row.ValueRow v && v.name().equals("x"))
+            .mapToDouble(r -> ((Row.ValueRow) r).value().si())
+            .findFirst().orElseThrow();
+        assertEquals(6e5, x, 0.0);
     }
 
     // ---------------------------------------------------------------- air density
@@ -114,9 +120,13 @@ class PropertiesTest {
     @Test
     void airViscosityAtTheSutherlandReferencePoint() {
         // US Standard Atmosphere 1976, eq. 51: μ = β T^1.5/(T + S), β = 1.458e-6 kg/(m·s·K^½),
-        // S = 110.4 K. At 273.15 K that is 1.7161e-5 Pa·s; White's μ_ref is 1.716e-5 Pa·s.
+        // S = 110.4 K. At 273.15 K that is 1.71608e-5 Pa·s (White's Table 1-2: 1.716e-5 Pa·s).
         double expected = 1.458e-6 * Math.pow(273.15, 1.5) / (273.15 + 110.4);
-        assertEquals(expected, StdlibCheck.si("air_viscosity(0 degC)"), expected * 1e-4);
+        assertEquals(expected, StdlibCheck.si("air_viscosity(0 degC)"), expected * 1e-5);
+        assertEquals(1.716e-5, StdlibCheck.si("air_viscosity(0 degC)"), 1e-4 * 1.716e-5);
+        // And the same law away from the reference point: 1976 form evaluated here at 1500 K.
+        double hot = 1.458e-6 * Math.pow(1500, 1.5) / (1500 + 110.4);
+        assertEquals(hot, StdlibCheck.si("air_viscosity(1500 K)"), hot * 1e-5);
     }
 
     @Test
