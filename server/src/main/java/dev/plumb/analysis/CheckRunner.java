@@ -74,17 +74,7 @@ final class CheckRunner {
     }
 
     private boolean holds(Value a, Comparator op, Value b) {
-        double x = a.si();
-        double y = b.si();
-        boolean equal = Math.abs(x - y) <= settings.equalityTolerance() * Math.max(Math.abs(x), Math.abs(y));
-        return switch (op) {
-            case LT -> x < y;
-            case LE -> x <= y || equal;
-            case GT -> x > y;
-            case GE -> x >= y || equal;
-            case EQ -> equal;
-            case NE -> !equal;
-        };
+        return RangeCheck.holds(a.si(), op, b.si(), settings.equalityTolerance());
     }
 
     /** The unit both sides are shown in: the one a side was written or defined in, else SI. */

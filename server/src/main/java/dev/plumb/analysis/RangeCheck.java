@@ -21,9 +21,14 @@ final class RangeCheck {
     private RangeCheck() {
     }
 
-    /** Whether a comparison holds; {@code <=}, {@code >=} and {@code ==} allow a relative 1e-9 for rounding. */
+    /** Whether a range comparison holds; {@code <=}, {@code >=} and {@code ==} allow a relative 1e-9 for rounding. */
     static boolean holds(double x, Comparator op, double y) {
-        boolean equal = Math.abs(x - y) <= 1e-9 * Math.max(Math.abs(x), Math.abs(y));
+        return holds(x, op, y, 1e-9);
+    }
+
+    /** Whether a comparison holds, with "equal" meaning within a relative tolerance. */
+    static boolean holds(double x, Comparator op, double y, double tolerance) {
+        boolean equal = Math.abs(x - y) <= tolerance * Math.max(Math.abs(x), Math.abs(y));
         return switch (op) {
             case LT -> x < y;
             case LE -> x <= y || equal;

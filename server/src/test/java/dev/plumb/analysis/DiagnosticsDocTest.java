@@ -29,24 +29,10 @@ class DiagnosticsDocTest {
     record Section(String heading, String body) {
     }
 
-    static Path repoRoot() {
-        String configured = System.getProperty("plumb.repo.root");
-        if (configured != null && !configured.isBlank() && !configured.contains("${")) {
-            Path p = Path.of(configured);
-            if (isRoot(p)) return p;
-        }
-        for (Path p = Path.of("").toAbsolutePath(); p != null; p = p.getParent()) {
-            if (isRoot(p)) return p;
-        }
-        throw new IllegalStateException("cannot find the repository root (a folder with pom.xml and grammar/)");
-    }
 
-    private static boolean isRoot(Path p) {
-        return Files.isRegularFile(p.resolve("pom.xml")) && Files.isDirectory(p.resolve("grammar"));
-    }
 
     private static Map<String, Section> sections() throws IOException {
-        String page = Files.readString(repoRoot().resolve("docs/diagnostics.md"), StandardCharsets.UTF_8);
+        String page = Files.readString(dev.plumb.RepoRoot.get().resolve("docs/diagnostics.md"), StandardCharsets.UTF_8);
         Map<String, Section> out = new LinkedHashMap<>();
         String[] parts = page.split("(?m)^## ");
         for (int i = 1; i < parts.length; i++) {

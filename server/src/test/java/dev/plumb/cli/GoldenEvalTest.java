@@ -22,7 +22,7 @@ class GoldenEvalTest {
 
     @TestFactory
     Stream<DynamicTest> everySampleMatchesItsGolden() throws IOException {
-        Path root = Cli.repoRoot();
+        Path root = dev.plumb.RepoRoot.get();
         Path samples = root.resolve("samples");
         Path golden = root.resolve("server/src/test/resources/golden");
         List<Path> files;

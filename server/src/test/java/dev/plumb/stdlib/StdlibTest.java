@@ -28,7 +28,7 @@ class StdlibTest {
 
     @Test
     void everyFileIsListedAndChecksClean() throws IOException {
-        Path folder = repoRoot().resolve("server/src/main/resources/stdlib");
+        Path folder = dev.plumb.RepoRoot.get().resolve("server/src/main/resources/stdlib");
         List<String> onDisk;
         try (Stream<Path> files = Files.list(folder)) {
             onDisk = files.map(p -> p.getFileName().toString()).filter(n -> n.endsWith(".plumb")).sorted().toList();
@@ -59,7 +59,7 @@ class StdlibTest {
 
     @Test
     void readmeListsTheLibrary() throws IOException {
-        Path readme = repoRoot().resolve("README.md");
+        Path readme = dev.plumb.RepoRoot.get().resolve("README.md");
         String text = Files.readString(readme, StandardCharsets.UTF_8);
         int from = text.indexOf(BEGIN);
         int to = text.indexOf(END);
@@ -72,14 +72,5 @@ class StdlibTest {
             return;
         }
         assertEquals(table, current, "the README's standard-library table is stale: refresh with -Dupdate.golden=true");
-    }
-
-    static Path repoRoot() {
-        String prop = System.getProperty("plumb.repo.root");
-        if (prop != null && !prop.isBlank() && Files.isDirectory(Path.of(prop, "samples"))) return Path.of(prop);
-        for (Path p = Path.of("").toAbsolutePath(); p != null; p = p.getParent()) {
-            if (Files.isDirectory(p.resolve("samples")) && Files.isDirectory(p.resolve("grammar"))) return p;
-        }
-        throw new IllegalStateException("cannot find the repository root");
     }
 }
