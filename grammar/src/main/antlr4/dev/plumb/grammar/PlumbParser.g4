@@ -24,6 +24,7 @@ statement
     | functionDef
     | definition
     | check
+    | find
     | correlationHead
     | tableHead
     | blockLine
@@ -37,6 +38,7 @@ input       : INPUT name ASSIGN expr tail;
 definition  : name ASSIGN expr tail;
 functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN expr note?;
 check       : CHECK expr ( comparator expr )+ note?;
+find        : FIND name ( WITHIN expr DOTDOT expr | GUESS expr ) SO THAT expr ASSIGN expr tail;
 
 /*
  * Correlation and table blocks. The parser reads their lines one by one; the engine groups

@@ -46,6 +46,8 @@ final class FileAnalyzer {
     private final Set<Statement> duplicates = new HashSet<>();
     private final Set<String> used = new HashSet<>();
     private final Map<Statement, Row> rows = new HashMap<>();
+    /** For each `find`, the definitions re-evaluated with each trial value, in order. */
+    private final Map<String, List<Statement.Definition>> dependents = new HashMap<>();
 
     FileAnalyzer(Workspace workspace, Path file, String text, List<Path> chain, Settings settings) {
         this.workspace = workspace;
@@ -66,7 +68,15 @@ final class FileAnalyzer {
         }
         for (Statement s : parsed.statements()) declare(s);
         Map<String, Set<String>> uses = resolveNames(parsed.statements());
+        Map<String, Set<String>> solvedWith = FindDependents.adjust(own, uses);
         DependencyOrder.Result order = DependencyOrder.of(uses);
+        for (var entry : solvedWith.entrySet()) {
+            List<Statement.Definition> inOrder = new ArrayList<>();
+            for (String n : order.order()) {
+                if (entry.getValue().contains(n) && own.get(n) instanceof Statement.Definition d) inOrder.add(d);
+            }
+            dependents.put(entry.getKey(), inOrder);
+        }
         Set<String> inCycle = reportCycles(order.cycles());
         for (String name : order.order()) evaluate(own.get(name), inCycle.contains(name));
         for (Statement s : parsed.statements()) {
@@ -227,6 +237,7 @@ final class FileAnalyzer {
         if (s instanceof Statement.Function f) return f.name();
         if (s instanceof Statement.Correlation c) return c.name();
         if (s instanceof Statement.Table t) return t.name();
+        if (s instanceof Statement.Find f) return f.name();
         if (s instanceof Statement.Broken b) return b.name();
         return null;
     }
@@ -261,6 +272,14 @@ final class FileAnalyzer {
             if (s instanceof Statement.Table t) {
                 params.add(t.param().name().text());
                 t.valid().forEach(b -> exprs.addAll(b.operands()));
+            }
+            if (s instanceof Statement.Find f) {
+                // The unknown is not a dependency of its own equation.
+                params.add(f.name().text());
+                used.add(f.name().text());
+                for (Expr e : new Expr[] {f.low(), f.high(), f.guess(), f.lhs(), f.rhs()}) {
+                    if (e != null) exprs.add(e);
+                }
             }
             for (Expr e : exprs) {
                 References.each(e, (n, span) -> {
@@ -333,7 +352,7 @@ final class FileAnalyzer {
                 scope.put(b.name().text(), new Binding.ValueBinding(file, b.name().span(), Value.UNKNOWN, null, null, false, null));
             }
             rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null,
-                null, null));
+                null, null, null));
             return;
         }
         if (s instanceof Statement.Function f) {
@@ -353,6 +372,10 @@ final class FileAnalyzer {
             rows.put(s, new Row.FunctionRow(t.span(), signature, "table", t.title()));
             return;
         }
+        if (s instanceof Statement.Find f) {
+            evaluateFind(f, inCycle);
+            return;
+        }
         if (!(s instanceof Statement.Definition d)) return;
         Evaluator evaluator = new Evaluator(scope, reporter, text, units);
         Value v = evaluator.eval(d.expr());
@@ -364,7 +387,43 @@ final class FileAnalyzer {
             scope.put(d.name().text(), new Binding.ValueBinding(file, d.name().span(), v, display, basis, d.input(), origin));
         }
         String shown = Shown.value(v, display, settings.significantFigures());
-        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note(), origin));
+        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note(), origin, null));
+    }
+
+    private void evaluateFind(Statement.Find f, boolean inCycle) {
+        String name = f.name().text();
+        if (inCycle || duplicates.contains(f)) {
+            rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null));
+            return;
+        }
+        FindRunner.Outcome outcome = new FindRunner(scope, reporter, text, file, units)
+            .run(f, dependents.getOrDefault(name, List.of()));
+        Value v = outcome.value();
+        Evaluator evaluator = new Evaluator(scope, reporter, text, units);
+        Unit display = v.known() ? displayUnit(f, v, evaluator) : null;
+        String basis = basisOf(f.basis());
+        scope.put(name, new Binding.ValueBinding(file, f.name().span(), v, display, basis, false, null));
+        String shown = Shown.value(v, display, settings.significantFigures());
+        rows.put(f, new Row.ValueRow(f.span(), name, false, v, shown, basis, f.note(), null, outcome.solution()));
+    }
+
+    private Unit displayUnit(Statement.Find f, Value v, Evaluator evaluator) {
+        if (f.displayUnit() != null) {
+            Unit u = evaluator.resolveUnit(f.displayUnit(), false);
+            if (u != null && u.dimension().equals(v.dimension())) return u;
+            if (u != null) {
+                reporter.report(Code.UNIT_MISMATCH, f.displayUnit().span(), "`in " + f.displayUnit().text() + "` shows "
+                    + u.dimension().describe() + ", but " + f.name().text() + " is " + v.dimension().describe());
+            }
+            return DisplayUnits.defaultFor(v.dimension());
+        }
+        Expr end = f.low() != null ? f.low() : f.guess();
+        if (end instanceof Expr.Unary u) end = u.operand();
+        if (end instanceof Expr.Quantity q && q.unit() != null && units.resolve(q.unit().text()) instanceof UnitResult.Ok ok
+            && ok.unit().dimension().equals(v.dimension())) {
+            return ok.unit();
+        }
+        return DisplayUnits.defaultFor(v.dimension());
     }
 
     private Unit displayUnit(Statement.Definition d, Value v, Evaluator evaluator) {
@@ -393,10 +452,14 @@ final class FileAnalyzer {
     }
 
     private String basis(Statement.Definition d) {
-        if (d.basis() == null) return null;
-        String b = d.basis().text();
+        return basisOf(d.basis());
+    }
+
+    private String basisOf(Ident word) {
+        if (word == null) return null;
+        String b = word.text();
         if (BlockChecks.BASES.contains(b)) return b;
-        reporter.report(Code.BASIS_UNKNOWN, d.basis().span(), "unknown area basis '" + b + "'"
+        reporter.report(Code.BASIS_UNKNOWN, word.span(), "unknown area basis '" + b + "'"
             + Suggestions.didYouMean(Suggestions.closest(b, BlockChecks.BASES, 1)) + ": use frontal, wetted or planform");
         return null;
     }

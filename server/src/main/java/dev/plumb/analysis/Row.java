@@ -17,7 +17,7 @@ public sealed interface Row {
      * it could not be computed.
      */
     record ValueRow(Span span, String name, boolean input, Value value, String shown, String basis, String note,
-                    Origin origin) implements Row {
+                    Origin origin, Solution solution) implements Row {
     }
 
     /** A function, correlation or table column; kind is "function", "correlation" or "table". */

@@ -24,6 +24,10 @@ final class EvalCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
+    @picocli.CommandLine.Option(names = "--steps",
+        description = "also print each `find`'s iterations: trial value, residual and bracket (SI)")
+    boolean steps;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -40,7 +44,7 @@ final class EvalCommand implements Callable<Integer> {
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();
         Style style = common.style();
-        EvalReport.write(a, out, style);
+        EvalReport.write(a, out, style, steps);
         if (!checked.diagnostics().isEmpty()) {
             out.println();
             out.println(style.bold("Findings"));

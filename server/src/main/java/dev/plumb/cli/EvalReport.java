@@ -2,7 +2,10 @@ package dev.plumb.cli;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
+import dev.plumb.analysis.Solution;
+import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.QuantityFormat;
+import dev.plumb.units.Unit;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
@@ -12,7 +15,7 @@ final class EvalReport {
     private EvalReport() {
     }
 
-    static void write(Analysis a, PrintWriter out, Style style) {
+    static void write(Analysis a, PrintWriter out, Style style, boolean steps) {
         String title = a.headers().getOrDefault("title", Location.path(a.file()));
         out.println(style.bold(title));
         for (String key : new String[] {"author", "reviewer", "revision"}) {
@@ -34,7 +37,9 @@ final class EvalReport {
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v);
-                out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + note).stripTrailing());
+                out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + solved(v) + note)
+                    .stripTrailing());
+                if (steps && v.solution() != null) writeSteps(out, v.solution());
             } else if (r instanceof Row.FunctionRow f) {
                 out.println("  " + f.signature() + "  (" + f.kind() + ")" + (f.note() == null ? "" : "  " + f.note()));
             } else if (r instanceof Row.CheckRow c) {
@@ -42,6 +47,24 @@ final class EvalReport {
                 String why = c.note() == null ? "" : "  " + c.note();
                 out.println("  " + mark + "  check " + c.source() + "   [" + c.detail() + "]" + why);
             }
+        }
+    }
+
+    /** For a solved `find`: how many evaluations and the residual left at the root. */
+    private static String solved(Row.ValueRow v) {
+        if (v.solution() == null) return "";
+        Unit unit = DisplayUnits.defaultFor(v.solution().residualDimension());
+        return "  [solved: " + v.solution().iterations() + " iterations, residual "
+            + QuantityFormat.format(v.solution().residual(), unit, 2) + "]";
+    }
+
+    /** The refinement's record: each trial, its residual and the bracket after it (SI). */
+    private static void writeSteps(PrintWriter out, Solution s) {
+        Unit unit = DisplayUnits.defaultFor(s.residualDimension());
+        for (Solution.Step step : s.steps()) {
+            out.printf("      %3d  x = %-14s residual = %-14s bracket %s .. %s%n", step.n(), QuantityFormat.number(step.x(), 10),
+                QuantityFormat.format(step.residual(), unit, 3), QuantityFormat.number(step.low(), 10),
+                QuantityFormat.number(step.high(), 10));
         }
     }
 

@@ -131,6 +131,23 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         return new Statement.Bound(span, operands, comparators);
     }
 
+    @Override
+    public Object visitFind(PlumbParser.FindContext ctx) {
+        List<PlumbParser.ExprContext> e = ctx.expr();
+        boolean bracket = ctx.WITHIN() != null;
+        Expr low = bracket ? expr(e.get(0)) : null;
+        Expr high = bracket ? expr(e.get(1)) : null;
+        Expr guess = bracket ? null : expr(e.get(0));
+        int k = bracket ? 2 : 1;
+        Expr lhs = expr(e.get(k));
+        Expr rhs = expr(e.get(k + 1));
+        PlumbParser.TailContext tail = ctx.tail();
+        UnitText unit = tail.UNIT() == null ? null : unitText(tail.UNIT().getSymbol());
+        Ident basis = tail.name() == null ? null : ident(tail.name());
+        return new Statement.Find(span(ctx), ident(ctx.name()), low, high, guess, lhs, rhs,
+            Span.cover(lhs.span(), rhs.span()), unit, basis, note(tail.note()));
+    }
+
     // ---- correlation and table blocks ------------------------------------------------
 
     @Override

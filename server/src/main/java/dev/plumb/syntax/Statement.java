@@ -42,6 +42,14 @@ public sealed interface Statement {
     }
 
     /**
+     * {@code find NAME within LOW .. HIGH so that LHS = RHS} (or {@code guess START} instead of the
+     * bracket): NAME is the value that makes both sides equal. low/high or guess is null.
+     */
+    record Find(Span span, Ident name, Expr low, Expr high, Expr guess, Expr lhs, Expr rhs, Span equation,
+                UnitText displayUnit, Ident basis, String note) implements Statement {
+    }
+
+    /**
      * {@code correlation NAME(PARAMS) … end}: a published formula with what a reviewer needs to
      * trust it. Optional parts are null when absent; {@code pieces} has one entry for a single
      * {@code = EXPR}.

@@ -1,0 +1,81 @@
+package dev.plumb.analysis;
+
+import dev.plumb.syntax.Statement;
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * For each {@code find NAME …}: the definitions its equation reaches that depend on NAME
+ * themselves (a Reynolds number from the unknown speed, a drag coefficient from that Reynolds
+ * number …). They are re-evaluated for every trial value, so the solve must come before them,
+ * and after everything else they use: the find's dependencies are adjusted to say exactly that.
+ */
+final class FindDependents {
+    private FindDependents() {
+    }
+
+    /** Adjusts {@code uses} in place and returns, for each find, the names re-evaluated with it. */
+    static Map<String, Set<String>> adjust(Map<String, Statement> own, Map<String, Set<String>> uses) {
+        Map<String, Set<String>> out = new LinkedHashMap<>();
+        Map<String, Set<String>> usedBy = reverse(uses);
+        for (var entry : own.entrySet()) {
+            if (!(entry.getValue() instanceof Statement.Find f)) continue;
+            String unknown = entry.getKey();
+            Set<String> dependsOnUnknown = closure(unknown, usedBy);
+            Set<String> fromEquation = new LinkedHashSet<>();
+            References.each(f.lhs(), (n, span) -> fromEquation.add(n));
+            References.each(f.rhs(), (n, span) -> fromEquation.add(n));
+            Set<String> reached = new LinkedHashSet<>();
+            for (String n : fromEquation) {
+                if (uses.containsKey(n)) reached.addAll(closureFrom(n, uses));
+            }
+            Set<String> dependents = new LinkedHashSet<>();
+            for (String n : reached) {
+                if (dependsOnUnknown.contains(n) && own.get(n) instanceof Statement.Definition) dependents.add(n);
+            }
+            Set<String> adjusted = new LinkedHashSet<>(uses.get(unknown));
+            for (String d : dependents) adjusted.addAll(uses.get(d));
+            adjusted.removeAll(dependents);
+            adjusted.remove(unknown);
+            uses.put(unknown, adjusted);
+            out.put(unknown, dependents);
+        }
+        return out;
+    }
+
+    private static Map<String, Set<String>> reverse(Map<String, Set<String>> uses) {
+        Map<String, Set<String>> usedBy = new HashMap<>();
+        uses.forEach((n, deps) -> deps.forEach(d -> usedBy.computeIfAbsent(d, k -> new HashSet<>()).add(n)));
+        return usedBy;
+    }
+
+    /** Every name that (transitively) uses {@code start}, not counting start itself. */
+    private static Set<String> closure(String start, Map<String, Set<String>> edges) {
+        Set<String> seen = new HashSet<>();
+        Deque<String> todo = new ArrayDeque<>(edges.getOrDefault(start, Set.of()));
+        while (!todo.isEmpty()) {
+            String n = todo.poll();
+            if (seen.add(n)) todo.addAll(edges.getOrDefault(n, Set.of()));
+        }
+        return seen;
+    }
+
+    /** {@code start} and everything it (transitively) uses. */
+    private static Set<String> closureFrom(String start, Map<String, Set<String>> uses) {
+        Set<String> seen = new LinkedHashSet<>();
+        Deque<String> todo = new ArrayDeque<>(List.of(start));
+        while (!todo.isEmpty()) {
+            String n = todo.poll();
+            if (seen.add(n)) todo.addAll(uses.getOrDefault(n, Set.of()));
+        }
+        return seen;
+    }
+
+}

@@ -1,0 +1,195 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.Dimension;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.Unit;
+import dev.plumb.units.UnitRegistry;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+
+/**
+ * Solves one {@code find}: NAME is given trial values; the definitions that depend on it (and
+ * that the equation uses) are re-evaluated for each trial, quietly; the residual LHS − RHS goes
+ * to {@link RootFinder}. At the root everything is evaluated once more for real, so range
+ * warnings speak of the solution, never of an intermediate trial, and errors in the equation
+ * are reported once.
+ */
+final class FindRunner {
+    /** What solving gave: the value (UNKNOWN on failure) and, when solved, how. */
+    record Outcome(Value value, Solution solution) {
+    }
+
+    private final Scope scope;
+    private final Reporter reporter;
+    private final String text;
+    private final Path file;
+    private final UnitRegistry units;
+
+    FindRunner(Scope scope, Reporter reporter, String text, Path file, UnitRegistry units) {
+        this.scope = scope;
+        this.reporter = reporter;
+        this.text = text;
+        this.file = file;
+        this.units = units;
+    }
+
+    /** @param dependents the definitions that depend on NAME and feed the equation, in evaluation order */
+    Outcome run(Statement.Find f, List<Statement.Definition> dependents) {
+        Evaluator real = new Evaluator(scope, reporter, text, units);
+        String name = f.name().text();
+        Dimension dim;
+        DoubleUnaryOperator residual;
+        RootFinder.Result result;
+        if (f.guess() != null) {
+            Value guess = real.eval(f.guess());
+            if (!guess.known()) return failed(name);
+            dim = guess.dimension();
+            residual = residual(name, dim, dependents, f);
+            result = RootFinder.fromGuess(residual, guess.si());
+        } else {
+            Value low = real.eval(f.low());
+            Value high = real.eval(f.high());
+            if (!low.known() || !high.known()) return failed(name);
+            if (!low.dimension().equals(high.dimension())) {
+                reporter.report(Code.UNIT_MISMATCH, Span.cover(f.low().span(), f.high().span()), "the bracket's ends differ "
+                    + "in dimension: " + Shown.value(low) + " is " + low.dimension().describe() + ", "
+                    + Shown.value(high) + " is " + high.dimension().describe());
+                return failed(name);
+            }
+            dim = low.dimension();
+            residual = residual(name, dim, dependents, f);
+            result = RootFinder.within(residual, low.si(), high.si());
+        }
+        Unit unit = unitOf(f, dim);
+        double at = result.status() == RootFinder.Status.SOLVED ? result.root() : result.low();
+        Value[] sides = finalSides(name, dim, at, dependents, f);
+        if (sides == null) return failed(name);
+        switch (result.status()) {
+            case NO_VALUE -> {
+                return failed(name);
+            }
+            case NO_ROOT -> {
+                reportNoRoot(f, result, dim, unit, sides[0].dimension());
+                return failed(name);
+            }
+            case NOT_CONVERGED -> {
+                String last = Double.isFinite(result.residual())
+                    ? "; the residual there is still " + showResidual(result.residual(), sides[0].dimension(),
+                        DisplayUnits.defaultFor(sides[0].dimension()))
+                    : "";
+                reporter.report(Code.SOLVE_NOT_CONVERGED, f.name().span(), "no root of " + name + " after "
+                    + result.iterations() + " evaluations: the bracket closed in on " + show(result.low(), dim, unit)
+                    + " .. " + show(result.high(), dim, unit) + last + ". The two sides may jump there (a pole or a step) "
+                    + "rather than cross: check the equation, or move the bracket away from that point");
+                return failed(name);
+            }
+            default -> {
+            }
+        }
+        if (result.brackets().size() > 1) reportMultiple(f, result, dim, unit);
+        Value root = Value.of(result.root(), dim);
+        bind(name, root, unit);
+        List<Solution.Step> steps = new ArrayList<>();
+        for (RootFinder.Iterate it : result.record()) {
+            steps.add(new Solution.Step(it.n(), it.x(), it.residual(), it.low(), it.high()));
+        }
+        return new Outcome(root, new Solution(result.residual(), sides[0].dimension(), steps));
+    }
+
+    /** The residual LHS − RHS for a trial value of NAME (SI); NaN where it cannot be computed. */
+    private DoubleUnaryOperator residual(String name, Dimension dim, List<Statement.Definition> dependents,
+                                         Statement.Find f) {
+        return x -> {
+            Value[] sides = evaluateAt(name, Value.of(x, dim), dependents, new Reporter(), f);
+            if (sides == null || !sides[0].dimension().equals(sides[1].dimension())) return Double.NaN;
+            return sides[0].si() - sides[1].si();
+        };
+    }
+
+    /** Binds NAME, re-evaluates its dependents, and evaluates both sides of the equation. */
+    private Value[] evaluateAt(String name, Value x, List<Statement.Definition> dependents, Reporter r, Statement.Find f) {
+        bind(name, x, null);
+        Evaluator e = new Evaluator(scope, r, text, units);
+        for (Statement.Definition d : dependents) bind(d.name().text(), e.eval(d.expr()), null);
+        Value lhs = e.eval(f.lhs());
+        Value rhs = e.eval(f.rhs());
+        return lhs.known() && rhs.known() ? new Value[] {lhs, rhs} : null;
+    }
+
+    /** Once, for real, at the root (or the bracket's middle when there is none): reports the equation's own findings. */
+    private Value[] finalSides(String name, Dimension dim, double at, List<Statement.Definition> dependents,
+                               Statement.Find f) {
+        bind(name, Value.of(at, dim), null);
+        Evaluator quiet = new Evaluator(scope, new Reporter(), text, units);
+        for (Statement.Definition d : dependents) bind(d.name().text(), quiet.eval(d.expr()), null);
+        Evaluator real = new Evaluator(scope, reporter, text, units);
+        Value lhs = real.eval(f.lhs());
+        Value rhs = real.eval(f.rhs());
+        if (!lhs.known() || !rhs.known()) return null;
+        if (!lhs.dimension().equals(rhs.dimension())) {
+            reporter.report(Code.UNIT_MISMATCH, f.equation(), "the two sides of the equation differ in dimension: "
+                + Shown.source(text, f.lhs().span()) + " is " + lhs.dimension().describe() + ", "
+                + Shown.source(text, f.rhs().span()) + " is " + rhs.dimension().describe());
+            return null;
+        }
+        return new Value[] {lhs, rhs};
+    }
+
+    private void bind(String name, Value v, Unit unit) {
+        scope.put(name, new Binding.ValueBinding(file, Span.NONE, v, unit, null, false, null));
+    }
+
+    private Outcome failed(String name) {
+        bind(name, Value.UNKNOWN, null);
+        return new Outcome(Value.UNKNOWN, null);
+    }
+
+    private void reportNoRoot(Statement.Find f, RootFinder.Result r, Dimension dim, Unit unit, Dimension residualDim) {
+        Unit ru = DisplayUnits.defaultFor(residualDim);
+        String ends = "LHS − RHS is " + showResidual(r.fLow(), residualDim, ru) + " at " + show(r.low(), dim, unit) + " and "
+            + showResidual(r.fHigh(), residualDim, ru) + " at " + show(r.high(), dim, unit);
+        String fix = r.wider() != null
+            ? "; a wider search finds a sign change between " + show(r.wider()[0], dim, unit) + " and "
+                + show(r.wider()[1], dim, unit) + ": widen the bracket to include it"
+            : "; no sign change either in a range a thousand times wider: check the equation";
+        String where = f.guess() != null ? " searching outward from the guess" : " in the bracket";
+        reporter.report(Code.SOLVE_NO_ROOT, f.name().span(), "no root of " + f.name().text() + where
+            + ": the two sides do not cross (" + ends + ")" + fix);
+    }
+
+    private void reportMultiple(Statement.Find f, RootFinder.Result r, Dimension dim, Unit unit) {
+        List<String> all = new ArrayList<>();
+        for (double[] b : r.brackets()) all.add(show(b[0], dim, unit) + " .. " + show(b[1], dim, unit));
+        reporter.report(Code.SOLVE_MULTIPLE_ROOTS, f.name().span(), f.name().text() + " has " + r.brackets().size()
+            + " roots in the bracket, between " + String.join("; ", all) + "; the first, "
+            + show(r.root(), dim, unit) + ", is taken: narrow the bracket to choose another");
+    }
+
+    private Unit unitOf(Statement.Find f, Dimension dim) {
+        if (f.displayUnit() != null && units.resolve(f.displayUnit().text()) instanceof dev.plumb.units.UnitResult.Ok ok
+            && ok.unit().dimension().equals(dim)) {
+            return ok.unit();
+        }
+        Expr end = f.low() != null ? f.low() : f.guess();
+        if (end instanceof Expr.Unary u) end = u.operand();
+        if (end instanceof Expr.Quantity q && q.unit() != null
+            && units.resolve(q.unit().text()) instanceof dev.plumb.units.UnitResult.Ok ok) {
+            return ok.unit();
+        }
+        return DisplayUnits.defaultFor(dim);
+    }
+
+    private static String show(double si, Dimension dim, Unit unit) {
+        return Shown.value(Value.of(si, dim), unit, 4);
+    }
+
+    private static String showResidual(double si, Dimension dim, Unit unit) {
+        return Double.isFinite(si) ? Shown.value(Value.of(si, dim), unit, 4) : "not computable";
+    }
+}
