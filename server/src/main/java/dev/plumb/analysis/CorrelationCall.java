@@ -43,8 +43,9 @@ final class CorrelationCall {
             if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), name + " is " + why + alternatives(b, args));
         }
         regime(c, b, params, args);
+        String basis = def.basis() == null ? null : def.basis().text();
         for (Statement.Piece piece : def.pieces()) {
-            if (piece.otherwise() || piece.condition() == null) return inside.eval(piece.expr());
+            if (piece.otherwise() || piece.condition() == null) return noted(inside.eval(piece.expr()), basis, name);
             List<Value> sides = piece.condition().operands().stream().map(inside::eval).toList();
             if (sides.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
             boolean holds = true;
@@ -52,7 +53,7 @@ final class CorrelationCall {
                 holds &= sides.get(i).dimension().equals(sides.get(i + 1).dimension())
                     && RangeCheck.holds(sides.get(i).si(), piece.condition().comparators().get(i), sides.get(i + 1).si());
             }
-            if (holds) return inside.eval(piece.expr());
+            if (holds) return noted(inside.eval(piece.expr()), basis, name);
         }
         reporter.report(Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
             + ": every `when` condition is false; add a last line `= … otherwise` to " + name);
@@ -94,7 +95,12 @@ final class CorrelationCall {
                 + param + ", but " + operand.apply(c.args().get(0), x) + " is not");
             return Value.UNKNOWN;
         }
-        return Value.of(v, data.result);
+        return noted(Value.of(v, data.result), def.basis() == null ? null : def.basis().text(), t.name());
+    }
+
+    /** A correlation's result carries its basis: a coefficient's, or a tagged area's. */
+    private static Value noted(Value v, String basis, String name) {
+        return v.known() ? v.noted(BasisRules.result(v, basis, name)) : v;
     }
 
     private boolean dimensionsFit(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {

@@ -26,6 +26,7 @@ final class Evaluator {
     private final Reporter reporter;
     private final String text;
     private final UnitRegistry units;
+    private final BasisRules basis;
 
     Evaluator(Scope scope, Reporter reporter, String text, UnitRegistry units) {
         this(scope, Map.of(), reporter, text, units);
@@ -37,6 +38,7 @@ final class Evaluator {
         this.reporter = reporter;
         this.text = text;
         this.units = units;
+        this.basis = new BasisRules(reporter, text);
     }
 
     Value eval(Expr e) {
@@ -60,11 +62,15 @@ final class Evaluator {
                 "the number " + q.numberText() + " is too large to compute with: use a larger unit or a smaller number");
             return Value.UNKNOWN;
         }
-        if (q.unit() == null) return Value.number(sign * q.number());
+        if (q.unit() == null) {
+            Value n = Value.number(sign * q.number());
+            return n.noted(BasisRules.quantity(n, q));
+        }
         Unit unit = resolveUnit(q.unit(), true);
         if (unit == null) return Value.UNKNOWN;
         Value.Temperature kind = unit.isOffsetScale() ? Value.Temperature.POINT : Value.Temperature.EITHER;
-        return new Value(unit.toSi(sign * q.number()), unit.dimension(), kind);
+        Value v = new Value(unit.toSi(sign * q.number()), unit.dimension(), kind);
+        return v.noted(BasisRules.quantity(v, q));
     }
 
     /** Resolves a unit written in the source, reporting unknown ones with a fix. */
@@ -88,9 +94,11 @@ final class Evaluator {
 
     private Value reference(Expr.Reference r) {
         Value local = locals.get(r.name());
-        if (local != null) return local;
+        if (local != null) return local.known() ? local.noted(BasisRules.reference(r.name(), local)) : local;
         Binding b = scope.lookup(r.name());
-        if (b instanceof Binding.ValueBinding v) return v.value();
+        if (b instanceof Binding.ValueBinding v) {
+            return v.value().known() ? v.value().noted(BasisRules.reference(r.name(), v.value())) : v.value();
+        }
         if (!(b instanceof Binding.ValueBinding) && b != null) {
             reporter.report(Code.NAME_KIND, r.span(),
                 r.name() + " is a function: call it with its arguments, e.g. " + r.name() + "(…)");
@@ -111,7 +119,10 @@ final class Evaluator {
         }
         if (b == null) return Value.UNKNOWN;
         List<Value> args = new ArrayList<>(c.args().size());
+        boolean saved = insideProduct;
+        insideProduct = false;
         for (Expr a : c.args()) args.add(eval(a));
+        insideProduct = saved;
         if (b instanceof Binding.BuiltinFunction f) {
             if (!arity(c, f.minArgs(), f.maxArgs(), f.signature())) return Value.UNKNOWN;
             if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
@@ -159,16 +170,34 @@ final class Evaluator {
         if (u.op() == Expr.Op.NEGATE && u.operand() instanceof Expr.Quantity q) return quantity(q, -1);
         Value v = eval(u.operand());
         if (!v.known() || u.op() == Expr.Op.PLUS) return v;
-        return new Value(-v.si(), v.dimension(), v.difference() ? Value.Temperature.DIFFERENCE : Value.Temperature.EITHER);
+        return new Value(-v.si(), v.dimension(), v.difference() ? Value.Temperature.DIFFERENCE : Value.Temperature.EITHER,
+            BasisRules.negate(v));
     }
 
+    /** True while evaluating the factors of a product: only its top is judged as a whole. */
+    private boolean insideProduct;
+
     private Value binary(Expr.Binary b) {
+        boolean product = b.op() == Expr.Op.MULTIPLY || b.op() == Expr.Op.DIVIDE;
+        boolean top = product && !insideProduct;
+        boolean saved = insideProduct;
+        insideProduct = product;
         Value l = eval(b.left());
         Value r = eval(b.right());
+        insideProduct = saved;
         if (!l.known() || !r.known()) return Value.UNKNOWN;
+        Value v = operate(b, l, r);
+        if (top && v.known()) basis.wholeProduct(b, v);
+        return v;
+    }
+
+    private Value operate(Expr.Binary b, Value l, Value r) {
         return switch (b.op()) {
             case ADD, SUBTRACT -> addOrSubtract(b, l, r);
-            case MULTIPLY -> finite(b, l, r, Value.of(l.si() * r.si(), l.dimension().times(r.dimension())));
+            case MULTIPLY -> {
+                Dimension d = l.dimension().times(r.dimension());
+                yield finite(b, l, r, Value.of(l.si() * r.si(), d).noted(basis.multiply(b, l, r, d)));
+            }
             case DIVIDE -> divide(b, l, r);
             case POWER -> power(b, l, r);
             default -> throw new IllegalStateException("not a binary operator: " + b.op());
@@ -200,7 +229,7 @@ final class Evaluator {
             return Value.UNKNOWN;
         }
         double si = add ? l.si() + r.si() : l.si() - r.si();
-        return finite(b, l, r, new Value(si, l.dimension(), Temperatures.sum(add, l, r)));
+        return finite(b, l, r, new Value(si, l.dimension(), Temperatures.sum(add, l, r), BasisRules.sum(l, r)));
     }
 
     private Value divide(Expr.Binary b, Value l, Value r) {
@@ -209,7 +238,8 @@ final class Evaluator {
                 "division by zero: the divisor " + Shown.source(text, b.right().span()) + " is 0");
             return Value.UNKNOWN;
         }
-        return finite(b, l, r, Value.of(l.si() / r.si(), l.dimension().divide(r.dimension())));
+        Dimension d = l.dimension().divide(r.dimension());
+        return finite(b, l, r, Value.of(l.si() / r.si(), d).noted(basis.divide(l, r, d)));
     }
 
     private Value power(Expr.Binary b, Value base, Value exponent) {
@@ -232,7 +262,7 @@ final class Evaluator {
                 + ") raised to the fractional power " + QuantityFormat.number(n, 4) + " has no real value");
             return Value.UNKNOWN;
         }
-        return finite(b, base, exponent, Value.of(si, d));
+        return finite(b, base, exponent, Value.of(si, d).noted(BasisRules.power(base, n)));
     }
 
     /** Reports a result that overflowed although its operands were finite. */

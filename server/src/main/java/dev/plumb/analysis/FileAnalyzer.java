@@ -382,6 +382,14 @@ final class FileAnalyzer {
         if (inCycle) v = Value.UNKNOWN;
         Unit display = displayUnit(d, v, evaluator);
         String basis = basis(d);
+        if (basis != null && v.known()) {
+            if (v.dimension().equals(BasisRules.AREA)) {
+                v = v.noted(BasisRules.tagged(v, basis, d.name().text()));
+            } else {
+                reporter.report(Code.BASIS_AREA, d.basis().span(), "`as " + basis + "` tags areas, but " + d.name().text()
+                    + " is " + v.dimension().describe() + ": remove the tag");
+            }
+        }
         Origin origin = BlockChecks.origin(d.expr(), scope, units);
         if (!duplicates.contains(s)) {
             scope.put(d.name().text(), new Binding.ValueBinding(file, d.name().span(), v, display, basis, d.input(), origin));

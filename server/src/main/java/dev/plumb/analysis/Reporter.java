@@ -3,6 +3,7 @@ package dev.plumb.analysis;
 import dev.plumb.diagnostics.Code;
 import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Related;
+import dev.plumb.diagnostics.Severity;
 import dev.plumb.diagnostics.Span;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -43,21 +44,25 @@ final class Reporter {
     }
 
     void report(Code code, Span span, String message) {
+        report(code, code.severity(), span, message);
+    }
+
+    void report(Code code, Severity severity, Span span, String message) {
         if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME)) return;
         if (caller == null) {
-            diagnostics.add(Diagnostic.of(code, span, message));
+            diagnostics.add(new Diagnostic(code, severity, span, message, List.of()));
             return;
         }
         Related inside = new Related(definingFile == null ? null : definingFile.toString(), span, "inside " + function);
-        caller.fromCall(code, callSpan, "in " + function + "(…): " + message, inside);
+        caller.fromCall(code, severity, callSpan, "in " + function + "(…): " + message, inside);
     }
 
-    private void fromCall(Code code, Span span, String message, Related related) {
+    private void fromCall(Code code, Severity severity, Span span, String message, Related related) {
         if (caller == null) {
-            diagnostics.add(Diagnostic.of(code, span, message).withRelated(related));
+            diagnostics.add(new Diagnostic(code, severity, span, message, List.of(related)));
             return;
         }
-        caller.fromCall(code, callSpan, "in " + function + "(…): " + message, related);
+        caller.fromCall(code, severity, callSpan, "in " + function + "(…): " + message, related);
     }
 
     void add(Diagnostic d) {

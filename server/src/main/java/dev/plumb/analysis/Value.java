@@ -8,8 +8,17 @@ import dev.plumb.units.Dimension;
  * {@link #UNKNOWN} stands for a value that could not be computed; its error is already reported,
  * so everything built on it stays quiet.
  */
-public record Value(double si, Dimension dimension, Temperature temperature) {
+public record Value(double si, Dimension dimension, Temperature temperature, BasisNotes notes) {
     public static final Value UNKNOWN = new Value(Double.NaN, null, Temperature.EITHER);
+
+    public Value(double si, Dimension dimension, Temperature temperature) {
+        this(si, dimension, temperature, BasisNotes.NONE);
+    }
+
+    /** The same quantity with other basis notes. */
+    Value noted(BasisNotes n) {
+        return new Value(si, dimension, temperature, n == null ? BasisNotes.NONE : n);
+    }
 
     /**
      * What a temperature-dimensioned value stands for. °C and °F readings are points; the

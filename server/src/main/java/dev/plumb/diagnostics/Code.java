@@ -31,6 +31,7 @@ public enum Code {
     SOLVE_MULTIPLE_ROOTS("solve.multiple-roots", Severity.WARNING),
     INPUT_UNUSED("input.unused", Severity.HINT),
     BASIS_UNKNOWN("basis.unknown", Severity.ERROR),
+    BASIS_AREA("basis.area", Severity.WARNING),
     BLOCK_INVALID("block.invalid", Severity.ERROR),
     USE_NOT_FOUND("use.not-found", Severity.ERROR),
     USE_CYCLE("use.cycle", Severity.ERROR),

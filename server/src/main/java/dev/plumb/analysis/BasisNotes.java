@@ -1,0 +1,52 @@
+package dev.plumb.analysis;
+
+/**
+ * What a value knows about reference areas, for the basis check (docs/language.md, "Area
+ * basis"): the tag and shape of an area it is or holds as a factor, the basis of a coefficient
+ * it is or holds as a factor, and the shape of a product of lengths.
+ *
+ * @param area an area this value is, or holds as a factor (a force Cd·A·q holds A); null for none
+ * @param coefficient a coefficient with a basis this value is, or holds as a factor; null for none
+ * @param shape the canonical product of the lengths and numbers among this value's factors (π·d·L in
+ *     ½·ρ·V²·Cd·π·d·L); null when it is not a product
+ * @param pure true when the value is nothing but that product of lengths and numbers
+ */
+record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure) {
+    static final BasisNotes NONE = new BasisNotes(null, null, null, true);
+
+    BasisNotes(Area area, Coefficient coefficient, Shape shape) {
+        this(area, coefficient, shape, true);
+    }
+
+    /** @param tag frontal, wetted or planform, or null; @param label how the message names it */
+    record Area(String tag, Shape.Kind kind, String label) {
+    }
+
+    /** @param name the value's name where it is used; @param origin the correlation it came from */
+    record Coefficient(String basis, String name, String origin) {
+        String label() {
+            return origin == null || origin.equals(name) ? name : name + " (from " + origin + ")";
+        }
+    }
+
+    BasisNotes withArea(Area a) {
+        return new BasisNotes(a, coefficient, shape, pure);
+    }
+
+    BasisNotes withCoefficient(Coefficient c) {
+        return new BasisNotes(area, c, shape, pure);
+    }
+
+    BasisNotes withShape(Shape s) {
+        return new BasisNotes(area, coefficient, s, pure);
+    }
+
+    /** A factor that is not a length or a number: it joins products without adding to their shape. */
+    static BasisNotes impure(Shape shape) {
+        return new BasisNotes(null, null, shape, false);
+    }
+
+    boolean empty() {
+        return area == null && coefficient == null && shape == null;
+    }
+}

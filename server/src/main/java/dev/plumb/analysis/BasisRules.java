@@ -1,0 +1,207 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Severity;
+import dev.plumb.syntax.Expr;
+import dev.plumb.units.Dimension;
+
+/**
+ * Carries area tags, coefficient bases and shapes through arithmetic, and warns where a
+ * coefficient meets an area of another basis (docs/language.md, "Area basis"):
+ * <ul>
+ *   <li>a dimensionless factor keeps an area's tag; a sum of areas of one tag keeps it; a product
+ *       of lengths is an untagged area whose shape (π·d·L, π·d²/4 …) is known; anything else
+ *       drops it;</li>
+ *   <li>a product that holds an area (a force Cd·A·q) carries it along, so the check fires
+ *       wherever coefficient and area meet, in any order and through intermediate names.</li>
+ * </ul>
+ */
+final class BasisRules {
+    static final Dimension AREA = Dimension.of(2, 0, 0, 0, 0, 0, 0);
+
+    private final Reporter reporter;
+    private final String text;
+
+    BasisRules(Reporter reporter, String text) {
+        this.reporter = reporter;
+        this.text = text;
+    }
+
+    /** A number written in the source: a plain number or a length starts a shape. */
+    static BasisNotes quantity(Value v, Expr.Quantity q) {
+        if (v.dimension().isDimensionless()) return BasisNotes.NONE.withShape(Shape.number(v.si()));
+        if (v.dimension().equals(Dimension.LENGTH)) return BasisNotes.NONE.withShape(Shape.length("#" + q.span().start()));
+        return BasisNotes.impure(Shape.number(1));
+    }
+
+    /** A value used by name: a length is a symbol of shapes; notes are relabelled with the name. */
+    static BasisNotes reference(String name, Value v) {
+        BasisNotes n = v.notes() == null ? BasisNotes.NONE : v.notes();
+        Shape shape = n.shape();
+        boolean pure = n.pure();
+        if (shape == null && v.dimension().equals(Dimension.LENGTH)) {
+            shape = Shape.length(name);
+            pure = true;
+        } else if (shape == null && v.dimension().isDimensionless() && n.coefficient() == null) {
+            shape = Shape.number(v.si());
+            pure = true;
+        } else if (shape == null || n.coefficient() != null) {
+            // A named quantity of its own (a density, a coefficient) joins products as one factor.
+            shape = Shape.number(1);
+            pure = false;
+        }
+        BasisNotes.Area area = n.area() == null ? null : new BasisNotes.Area(n.area().tag(), n.area().kind(), name);
+        BasisNotes.Coefficient c = n.coefficient() == null ? null
+            : new BasisNotes.Coefficient(n.coefficient().basis(), name, n.coefficient().origin());
+        return new BasisNotes(area, c, shape, pure);
+    }
+
+    /** The result of a correlation or table with a basis: a coefficient, or a tagged area. */
+    static BasisNotes result(Value v, String basis, String correlation) {
+        if (basis == null || !v.known()) return BasisNotes.NONE;
+        if (v.dimension().isDimensionless()) {
+            return BasisNotes.NONE.withCoefficient(new BasisNotes.Coefficient(basis, correlation, correlation));
+        }
+        if (v.dimension().equals(AREA)) return BasisNotes.NONE.withArea(new BasisNotes.Area(basis, null, correlation));
+        return BasisNotes.NONE;
+    }
+
+    /** An `as TAG` on a definition. */
+    static BasisNotes tagged(Value v, String tag, String name) {
+        BasisNotes n = v.notes() == null ? BasisNotes.NONE : v.notes();
+        Shape.Kind kind = n.shape() == null ? null : n.shape().kind();
+        return n.withArea(new BasisNotes.Area(tag, kind, name));
+    }
+
+    BasisNotes multiply(Expr.Binary b, Value l, Value r, Dimension result) {
+        BasisNotes ln = notes(l);
+        BasisNotes rn = notes(r);
+        Shape shape = ln.shape() != null && rn.shape() != null ? ln.shape().times(rn.shape(), 1) : null;
+        boolean pure = ln.pure() && rn.pure();
+        BasisNotes.Area area;
+        if (result.equals(AREA) && pure) {
+            area = scaledArea(ln, rn, l, r, shape, b);
+        } else {
+            area = ln.area() != null && rn.area() == null ? ln.area() : rn.area() != null && ln.area() == null ? rn.area() : null;
+        }
+        BasisNotes.Coefficient c = ln.coefficient() != null && rn.coefficient() == null ? ln.coefficient()
+            : rn.coefficient() != null && ln.coefficient() == null ? rn.coefficient() : null;
+        if (ln.coefficient() != null && rn.area() != null) check(ln.coefficient(), rn.area(), b);
+        if (rn.coefficient() != null && ln.area() != null) check(rn.coefficient(), ln.area(), b);
+        return new BasisNotes(area, c, shape, pure);
+    }
+
+    /**
+     * A force written out (½·ρ·V²·Cd·π·d·L): at the top of the product, the lengths among its
+     * factors are the area. Called once per whole product, so π·d²/4 is judged after the /4.
+     */
+    void wholeProduct(Expr.Binary b, Value v) {
+        BasisNotes n = notes(v);
+        if (n.coefficient() == null || n.area() != null || n.pure() || n.shape() == null || !areaLike(n.shape())) return;
+        Shape.Kind kind = n.shape().kind();
+        if (kind == null) kind = new Shape(n.shape().factor() * 2, n.shape().lengths()).kind(); // the ½ of ½·ρ·V²
+        if (kind == null) return;
+        check(n.coefficient(), new BasisNotes.Area(null, kind, "the area in " + Shown.source(text, b.span())), b);
+    }
+
+    private static boolean areaLike(Shape s) {
+        return s.lengths().values().stream().mapToInt(Integer::intValue).sum() == 2;
+    }
+
+    /** An area times a plain number keeps its tag; lengths times lengths make an untagged area. */
+    private BasisNotes.Area scaledArea(BasisNotes ln, BasisNotes rn, Value l, Value r, Shape shape, Expr.Binary b) {
+        Shape.Kind kind = shape == null ? null : shape.kind();
+        if (ln.area() != null && rn.area() == null && r.dimensionless()) {
+            return new BasisNotes.Area(ln.area().tag(), kind, Shown.source(text, b.span()));
+        }
+        if (rn.area() != null && ln.area() == null && l.dimensionless()) {
+            return new BasisNotes.Area(rn.area().tag(), kind, Shown.source(text, b.span()));
+        }
+        if (ln.area() == null && rn.area() == null) return new BasisNotes.Area(null, kind, Shown.source(text, b.span()));
+        return null;
+    }
+
+    BasisNotes divide(Value l, Value r, Dimension result) {
+        BasisNotes ln = notes(l);
+        BasisNotes rn = notes(r);
+        Shape shape = ln.shape() != null && rn.shape() != null ? ln.shape().times(rn.shape(), -1) : null;
+        boolean plainDivisor = rn.area() == null && rn.coefficient() == null;
+        BasisNotes.Area area = ln.area() != null && plainDivisor && (!result.equals(AREA) || r.dimensionless())
+            ? new BasisNotes.Area(ln.area().tag(), shape == null ? ln.area().kind() : shape.kind(), ln.area().label())
+            : null;
+        if (area == null && result.equals(AREA) && ln.area() == null && shape != null && ln.pure() && rn.pure()) {
+            area = new BasisNotes.Area(null, shape.kind(), null);
+        }
+        BasisNotes.Coefficient c = ln.coefficient() != null && plainDivisor ? ln.coefficient() : null;
+        return new BasisNotes(area, c, shape, ln.pure() && rn.pure());
+    }
+
+    static BasisNotes sum(Value l, Value r) {
+        BasisNotes ln = notes(l);
+        BasisNotes rn = notes(r);
+        BasisNotes.Area area = ln.area() != null && rn.area() != null && ln.area().tag() != null
+            && ln.area().tag().equals(rn.area().tag()) ? new BasisNotes.Area(ln.area().tag(), null, null) : null;
+        BasisNotes.Coefficient c = ln.coefficient() != null && rn.coefficient() != null
+            && ln.coefficient().basis().equals(rn.coefficient().basis()) ? ln.coefficient() : null;
+        return new BasisNotes(area, c, null);
+    }
+
+    static BasisNotes power(Value base, double n) {
+        BasisNotes bn = notes(base);
+        boolean whole = n == Math.rint(n) && Math.abs(n) <= 8;
+        return new BasisNotes(null, null, bn.shape() != null && whole ? bn.shape().pow((int) n) : null, bn.pure());
+    }
+
+    static BasisNotes negate(Value v) {
+        BasisNotes n = notes(v);
+        return n.withShape(n.shape() == null ? null : n.shape().negate());
+    }
+
+    private static BasisNotes notes(Value v) {
+        return v.notes() == null ? BasisNotes.NONE : v.notes();
+    }
+
+    /** Where a coefficient meets an area: the check itself. */
+    private void check(BasisNotes.Coefficient c, BasisNotes.Area a, Expr.Binary b) {
+        String area = a.label() == null ? "the area" : a.label();
+        if (a.tag() != null) {
+            if (a.tag().equals(c.basis())) return;
+            warn(b, c.label() + " is referenced to " + c.basis() + " area, but " + area + " is tagged " + a.tag()
+                + ": use the " + c.basis() + " area" + what(c.basis()), Severity.WARNING);
+            return;
+        }
+        if (a.kind() == null) return;
+        Shape.Kind k = a.kind();
+        boolean wettedShape = k == Shape.Kind.LATERAL_SURFACE || k == Shape.Kind.SPHERE_SURFACE || k == Shape.Kind.BOTH_FACES;
+        if (!c.basis().equals("wetted") && wettedShape) {
+            warn(b, c.label() + " is referenced to " + c.basis() + " area, but " + area + " has the shape of " + k.words
+                + ", a wetted area: " + frontalFix(k), Severity.WARNING);
+        } else if (c.basis().equals("wetted") && k == Shape.Kind.CIRCLE) {
+            warn(b, c.label() + " is referenced to wetted area, but " + area + " has the shape of " + k.words
+                + ", a frontal area: use the surface the flow runs over", Severity.WARNING);
+        } else if (c.basis().equals("wetted") && k == Shape.Kind.RECTANGLE) {
+            warn(b, c.label() + " is referenced to wetted area, and " + area + " is one rectangle: if the flow wets "
+                + "both faces of a plate, the wetted area is 2·b·L", Severity.HINT);
+        }
+    }
+
+    private static String frontalFix(Shape.Kind k) {
+        return switch (k) {
+            case LATERAL_SURFACE -> "for a cylinder in cross-flow use the projected area d·L";
+            case SPHERE_SURFACE -> "for a sphere use the frontal area π·d²/4";
+            default -> "the frontal area of a plate is one face, b·h";
+        };
+    }
+
+    private static String what(String basis) {
+        return switch (basis) {
+            case "frontal" -> " (the area projected on a plane normal to the flow)";
+            case "wetted" -> " (the surface the flow runs over)";
+            default -> " (the plan area of the wing or plate)";
+        };
+    }
+
+    private void warn(Expr.Binary b, String message, Severity severity) {
+        reporter.report(Code.BASIS_AREA, severity, b.span(), message);
+    }
+}

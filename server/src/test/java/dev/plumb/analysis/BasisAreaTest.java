@@ -1,0 +1,106 @@
+package dev.plumb.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Severity;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Right and wrong pairings of coefficients and reference areas. Which area belongs to which
+ * coefficient is common practice: bluff-body drag coefficients are referred to the frontal
+ * (projected) area — π·d²/4 for a sphere, d·L for a cylinder in cross-flow — skin-friction
+ * coefficients to the wetted area, and wing coefficients to the planform area.
+ */
+class BasisAreaTest {
+    private static final String AIR = "input rho = 1.2 kg/m^3\ninput V = 20 m/s\nq = 0.5 * rho * V^2\n"
+        + "input d = 0.3 m\ninput L = 2 m\ninput b = 1.5 m\ninput h = 0.8 m\n";
+
+    static Stream<Arguments> pairings() {
+        return Stream.of(
+            // name, the calc after AIR, expected severity (null: no finding), message fragment
+            Arguments.of("sphere with its frontal area",
+                "Cd = cd_sphere(1e4)\nA = pi * d^2 / 4\nF = Cd * A * q\n", null, null),
+            Arguments.of("sphere with its surface",
+                "Cd = cd_sphere(1e4)\nA = pi * d^2\nF = Cd * A * q\n", Severity.WARNING,
+                "Cd (from cd_sphere) is referenced to frontal area, but A has the shape of the surface of a sphere (π·d²), "
+                    + "a wetted area: for a sphere use the frontal area π·d²/4"),
+            Arguments.of("sphere with the library's frontal area",
+                "Cd = cd_sphere(1e4)\nA = sphere_frontal_area(d)\nF = Cd * A * q\n", null, null),
+            Arguments.of("sphere with the library's surface area",
+                "Cd = cd_sphere(1e4)\nA = sphere_surface_area(d)\nF = Cd * A * q\n", Severity.WARNING,
+                "Cd (from cd_sphere) is referenced to frontal area, but A is tagged wetted: use the frontal area"),
+            Arguments.of("cylinder in cross-flow with d·L",
+                "Cd = cd_cylinder(1e5)\nA = d * L\nF = Cd * A * q\n", null, null),
+            Arguments.of("cylinder in cross-flow with its lateral surface",
+                "Cd = cd_cylinder(1e5)\nA_side = pi * d * L\nF = Cd * A_side * q\n", Severity.WARNING,
+                "A_side has the shape of the lateral surface of a cylinder (π·d·L), a wetted area: for a cylinder in "
+                    + "cross-flow use the projected area d·L"),
+            Arguments.of("lateral surface through names and in another order",
+                "Cd = cd_cylinder(1e5)\ncirc = pi * d\nA_side = L * circ\nF = q * A_side * Cd\n", Severity.WARNING,
+                "A_side has the shape of the lateral surface of a cylinder"),
+            Arguments.of("dynamic pressure written out",
+                "Cd = cd_cylinder(1e5)\nF = 0.5 * rho * V^2 * Cd * pi * d * L\n", Severity.WARNING,
+                "the shape of the lateral surface of a cylinder"),
+            Arguments.of("plate normal to the flow, tagged frontal",
+                "Cd = cd_plate_normal(b / h)\nA = b * h   as frontal\nF = Cd * A * q\n", null, null),
+            Arguments.of("plate normal to the flow, tagged wetted",
+                "Cd = cd_plate_normal(b / h)\nA = 2 * b * h   as wetted\nF = Cd * A * q\n", Severity.WARNING,
+                "Cd (from cd_plate_normal) is referenced to frontal area, but A is tagged wetted"),
+            Arguments.of("plate parallel to the flow, both faces",
+                "Cf = cf_plate_mixed(2e6)\nS = 2 * b * L\nF = Cf * S * q\n", null, null),
+            Arguments.of("plate parallel to the flow, one face only",
+                "Cf = cf_plate_mixed(2e6)\nS = b * L\nF = Cf * S * q\n", Severity.HINT,
+                "S is one rectangle: if the flow wets both faces of a plate, the wetted area is 2·b·L"),
+            Arguments.of("skin friction on a frontal circle",
+                "Cf = cf_plate_mixed(2e6)\nA = pi * d^2 / 4\nF = Cf * A * q\n", Severity.WARNING,
+                "has the shape of a circle's area (π·d²/4), a frontal area: use the surface the flow runs over"),
+            Arguments.of("box sides with skin friction",
+                "Cf = cf_plate_mixed(2e6)\nS = box_wetted_area(L, b, h)\nF = Cf * S * q\n", null, null),
+            Arguments.of("box sides with a bluff-body coefficient",
+                "Cd = cd_cube(1e5)\nS = box_wetted_area(L, b, h)\nF = Cd * S * q\n", Severity.WARNING,
+                "Cd (from cd_cube) is referenced to frontal area, but S is tagged wetted"),
+            Arguments.of("wing lift on its planform",
+                "correlation cl_sail(alpha)\n    basis planform\n    = 2 * pi * alpha\nend\n"
+                    + "CL = cl_sail(0.1)\nA = wing_planform_area(L, b)\nF_L = CL * A * q\n", null, null),
+            Arguments.of("wing lift on a wetted area",
+                "correlation cl_sail(alpha)\n    basis planform\n    = 2 * pi * alpha\nend\n"
+                    + "CL = cl_sail(0.1)\nA = plate_wetted_area(L, b)\nF_L = CL * A * q\n", Severity.WARNING,
+                "CL (from cl_sail) is referenced to planform area, but A is tagged wetted: use the planform area"),
+            Arguments.of("through a function of the user's",
+                "drag(C, A, p) = C * A * p\nCd = cd_sphere(1e4)\nF = drag(Cd, pi * d^2, q)\n", Severity.WARNING,
+                "in drag(…): C (from cd_sphere) is referenced to frontal area"),
+            Arguments.of("a plain input coefficient says nothing",
+                "input Cd = 1.2\nA = pi * d * L\nF = Cd * A * q\n", null, null),
+            Arguments.of("a tag on something that is not an area",
+                "F = 3 N   as frontal\n", Severity.WARNING, "`as frontal` tags areas, but F is a force"));
+    }
+
+    @org.junit.jupiter.api.Test
+    void theFixtureMarksTheMistake() {
+        Fixture.checkResource("basis.area.plumb");
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("pairings")
+    void pairing(String name, String calc, Severity severity, String fragment) {
+        Analysis a = Fixture.analyze(AIR + calc);
+        List<Diagnostic> found = a.diagnostics().stream().filter(d -> d.code() == Code.BASIS_AREA).toList();
+        List<Diagnostic> others = a.diagnostics().stream()
+            .filter(d -> d.code() != Code.BASIS_AREA && d.severity() != Severity.HINT).toList();
+        assertEquals(List.of(), others, "the calc itself is clean");
+        if (severity == null) {
+            assertEquals(List.of(), found);
+            return;
+        }
+        assertEquals(1, found.size(), found.toString());
+        assertEquals(severity, found.get(0).severity());
+        assertTrue(found.get(0).message().contains(fragment), found.get(0).message());
+    }
+}
