@@ -64,8 +64,8 @@ record Shape(double factor, Map<String, Integer> lengths) {
         if (square && near(factor, Math.PI)) return Kind.SPHERE_SURFACE;
         if (square && near(factor, Math.PI / 4)) return Kind.CIRCLE;
         if (!square && near(factor, Math.PI)) return Kind.LATERAL_SURFACE;
-        if (!square && near(factor, 2)) return Kind.BOTH_FACES;
-        if (!square && near(factor, 1)) return Kind.RECTANGLE;
+        if (near(factor, 2)) return Kind.BOTH_FACES;
+        if (near(factor, 1)) return Kind.RECTANGLE;
         return null;
     }
 
