@@ -28,8 +28,23 @@ class LayeringTest {
         "syntax", List.of("dev.plumb.diagnostics", "dev.plumb.grammar", "org.antlr.v4.runtime"),
         "units", List.of("dev.plumb.diagnostics", "javax.measure", "tech.units.indriya", "systems.uom"),
         "analysis", List.of("dev.plumb.diagnostics", "dev.plumb.syntax", "dev.plumb.units", "org.apache.commons.math3"),
+        "ide", List.of("dev.plumb.diagnostics", "dev.plumb.syntax", "dev.plumb.units", "dev.plumb.analysis"),
+        "lsp", List.of("dev.plumb.diagnostics", "dev.plumb.syntax", "dev.plumb.units", "dev.plumb.analysis",
+            "dev.plumb.ide", "org.eclipse.lsp4j", "com.google.gson"),
         "cli", List.of("dev.plumb.diagnostics", "dev.plumb.analysis", "dev.plumb.syntax", "dev.plumb.units",
-            "picocli", "com.google.gson"));
+            "dev.plumb.lsp", "picocli", "com.google.gson"));
+
+    @Test
+    void onlyTheAdapterSpeaksTheProtocol() throws IOException {
+        List<String> leaks = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(Path.of("src/main/java/dev/plumb"))) {
+            for (Path f : files.filter(p -> p.toString().endsWith(".java")).toList()) {
+                boolean adapter = f.toString().contains("/lsp/");
+                if (!adapter && Files.readString(f).contains("org.eclipse.lsp4j")) leaks.add(f.toString());
+            }
+        }
+        assertEquals(List.of(), leaks);
+    }
 
     @Test
     void packagesImportOnlyTheLayersBelow() throws IOException {

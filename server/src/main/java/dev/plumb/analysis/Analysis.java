@@ -18,7 +18,19 @@ import java.util.Set;
  */
 public record Analysis(Path file, String text, LineMap lines, Map<String, String> headers, List<Row> rows,
                        List<Diagnostic> diagnostics, Scope scope, Map<Path, Set<String>> importedUses,
-                       List<Path> imports) {
+                       List<Path> imports, List<Reference> references) {
+
+    /** A name used in the document, where; what it stands for is {@code scope().lookup(name)}. */
+    public record Reference(String name, dev.plumb.diagnostics.Span span) {
+    }
+
+    /** The name used at an offset, or null. */
+    public Reference referenceAt(int offset) {
+        for (Reference r : references) {
+            if (offset >= r.span().start() && offset <= r.span().end()) return r;
+        }
+        return null;
+    }
 
     public Analysis {
         headers = Map.copyOf(headers);
@@ -26,6 +38,7 @@ public record Analysis(Path file, String text, LineMap lines, Map<String, String
         diagnostics = List.copyOf(diagnostics);
         importedUses = Map.copyOf(importedUses);
         imports = List.copyOf(imports);
+        references = List.copyOf(references);
     }
 
     public long count(Severity severity) {

@@ -45,6 +45,7 @@ final class FileAnalyzer {
     private final Map<String, Statement> own = new LinkedHashMap<>();
     private final Set<Statement> duplicates = new HashSet<>();
     private final Set<String> used = new HashSet<>();
+    private final List<Analysis.Reference> references = new ArrayList<>();
     private final Map<Statement, Row> rows = new HashMap<>();
     /** For each `find`, the definitions re-evaluated with each trial value, in order. */
     private final Map<String, List<Statement.Definition>> dependents = new HashMap<>();
@@ -85,7 +86,7 @@ final class FileAnalyzer {
         }
         reportUnusedInputs();
         return new Analysis(file, text, parsed.lines(), headers, rowsInOrder(parsed.statements()), sorted(reporter.all()),
-            scope, importedUses, imports);
+            scope, importedUses, imports, references);
     }
 
     // ---- imports ---------------------------------------------------------------------
@@ -285,6 +286,7 @@ final class FileAnalyzer {
                 References.each(e, (n, span) -> {
                     if (params.contains(n)) return;
                     used.add(n);
+                    references.add(new Analysis.Reference(n, span));
                     if (own.containsKey(n)) {
                         deps.add(n);
                         return;

@@ -19,21 +19,27 @@ public final class StdlibCatalog {
             if (binding instanceof Binding.CorrelationBinding c) {
                 Statement.Correlation def = c.def();
                 String params = String.join(", ", def.params().stream().map(p -> p.name().text()).toList());
-                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), def.basis(),
-                    ranges(def.valid(), c.scope().text()), def.source());
+                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), def.basis(), validText(binding), def.source());
             } else if (binding instanceof Binding.TableBinding t) {
                 Statement.Table def = t.def();
                 String x = def.param().name().text();
-                List<String> valid = new ArrayList<>();
-                valid.add(Shown.value(Value.of(t.data().first(), t.data().argument), t.data().argumentUnit, 4) + " ≤ " + x
-                    + " ≤ " + Shown.value(Value.of(t.data().last(), t.data().argument), t.data().argumentUnit, 4)
-                    + " (table)");
-                String more = ranges(def.valid(), t.scope().text());
-                if (!more.isEmpty()) valid.add(more);
-                row(b, "`" + e.getKey() + "(" + x + ")`", def.title(), def.basis(), String.join("; ", valid), def.source());
+                row(b, "`" + e.getKey() + "(" + x + ")`", def.title(), def.basis(), validText(binding), def.source());
             }
         }
         return b.toString();
+    }
+
+    /** The range a correlation or table column holds in, as written ("1e3 <= Re <= 2e5"); "" for none. */
+    public static String validText(Binding binding) {
+        if (binding instanceof Binding.CorrelationBinding c) return ranges(c.def().valid(), c.scope().text());
+        if (!(binding instanceof Binding.TableBinding t)) return "";
+        String x = t.def().param().name().text();
+        List<String> valid = new ArrayList<>();
+        valid.add(Shown.value(Value.of(t.data().first(), t.data().argument), t.data().argumentUnit, 4) + " ≤ " + x
+            + " ≤ " + Shown.value(Value.of(t.data().last(), t.data().argument), t.data().argumentUnit, 4) + " (table)");
+        String more = ranges(t.def().valid(), t.scope().text());
+        if (!more.isEmpty()) valid.add(more);
+        return String.join("; ", valid);
     }
 
     private static String ranges(List<Statement.Bound> bounds, String text) {

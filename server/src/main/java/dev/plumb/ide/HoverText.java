@@ -1,0 +1,140 @@
+package dev.plumb.ide;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Binding;
+import dev.plumb.analysis.Row;
+import dev.plumb.analysis.StdlibCatalog;
+import dev.plumb.analysis.Value;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.QuantityFormat;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * What hovering over a name shows, as Markdown: a value in its display unit and in SI, its
+ * dimension in words, and its formula with the values put in; for a correlation or table its
+ * title, source, basis, range and accuracy.
+ */
+public final class HoverText {
+    private HoverText() {
+    }
+
+    /** The hover at an offset: over a name used, or over a name where it is defined; null elsewhere. */
+    public static String at(Analysis a, int offset) {
+        Analysis.Reference r = a.referenceAt(offset);
+        String name = r != null ? r.name() : definedNameAt(a, offset);
+        if (name == null) return null;
+        Binding b = a.scope().lookup(name);
+        if (b instanceof Binding.ValueBinding v) return value(a, name, v);
+        if (b instanceof Binding.CorrelationBinding c) return correlation(c);
+        if (b instanceof Binding.TableBinding t) return table(t);
+        if (b instanceof Binding.FunctionBinding f) {
+            return "**" + name + "**(" + String.join(", ", f.def().params().stream().map(p -> p.text()).toList())
+                + ") — function" + (f.def().note() == null ? "" : "\n\n" + f.def().note());
+        }
+        if (b instanceof Binding.BuiltinFunction f) return "**" + f.signature() + "** — built-in function";
+        return null;
+    }
+
+    private static String definedNameAt(Analysis a, int offset) {
+        for (Row row : a.rows()) {
+            if (!row.span().contains(offset)) continue;
+            String name = row instanceof Row.ValueRow v ? v.name()
+                : row instanceof Row.FunctionRow f ? f.signature().substring(0, f.signature().indexOf('(')) : null;
+            if (name == null) return null;
+            Binding b = a.scope().lookup(name);
+            return b != null && b.span().start() <= offset && offset <= b.span().end() ? name : null;
+        }
+        return null;
+    }
+
+    private static String value(Analysis a, String name, Binding.ValueBinding b) {
+        Value v = b.value();
+        StringBuilder out = new StringBuilder("**" + name + "**");
+        if (!v.known()) return out.append(" — not computed (see the problems reported)").toString();
+        Row.ValueRow row = rowOf(a, name, b);
+        out.append(" = ").append(row != null ? row.shown() : QuantityFormat.format(v.si(),
+            b.display() != null ? b.display() : DisplayUnits.defaultFor(v.dimension()), 4));
+        out.append("\n\n").append(v.dimension().isDimensionless() ? "a dimensionless number"
+            : v.dimension().describe() + "; in SI " + QuantityFormat.format(v.si(), DisplayUnits.defaultFor(v.dimension()), 6));
+        if (b.input()) out.append("\n\ninput");
+        if (row != null && row.note() != null) out.append("\n\n").append(row.note());
+        String formula = row == null ? null : formula(a, row);
+        if (formula != null) out.append("\n\n").append(formula);
+        if (b.origin() != null) {
+            out.append("\n\nfrom ").append(b.origin().correlation());
+            if (b.origin().basis() != null) out.append(", ").append(b.origin().basis()).append(" basis");
+            if (b.origin().accuracy() != null) {
+                out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
+            }
+        }
+        if (row != null && row.solution() != null) {
+            out.append("\n\nsolved by `find` in ").append(row.solution().iterations()).append(" iterations");
+        }
+        if (b.file() != null && !b.file().equals(a.file())) out.append("\n\ndefined in ").append(b.file().getFileName());
+        return out.toString();
+    }
+
+    private static Row.ValueRow rowOf(Analysis a, String name, Binding.ValueBinding b) {
+        if (b.file() == null || !b.file().equals(a.file())) return null;
+        for (Row r : a.rows()) {
+            if (r instanceof Row.ValueRow v && v.name().equals(name) && v.span().contains(b.span().start())) return v;
+        }
+        return null;
+    }
+
+    /** "`F = Cd * A * q`" then the same with each name replaced by its value. */
+    private static String formula(Analysis a, Row.ValueRow row) {
+        String text = a.text();
+        int eq = text.indexOf('=', row.span().start());
+        if (eq < 0 || eq >= row.span().end()) return null;
+        Span expr = new Span(eq + 1, row.span().end());
+        List<Analysis.Reference> inside = new ArrayList<>();
+        for (Analysis.Reference r : a.references()) {
+            if (r.span().start() >= expr.start() && r.span().end() <= expr.end()) inside.add(r);
+        }
+        if (inside.isEmpty()) return null;
+        inside.sort(Comparator.comparingInt((Analysis.Reference r) -> r.span().start()).reversed());
+        StringBuilder substituted = new StringBuilder(text.substring(expr.start(), expr.end()));
+        for (Analysis.Reference r : inside) {
+            if (!(a.scope().lookup(r.name()) instanceof Binding.ValueBinding vb) || !vb.value().known()) continue;
+            String shown = QuantityFormat.format(vb.value().si(),
+                vb.display() != null ? vb.display() : DisplayUnits.defaultFor(vb.value().dimension()), 4);
+            substituted.replace(r.span().start() - expr.start(), r.span().end() - expr.start(), "(" + shown + ")");
+        }
+        String original = text.substring(expr.start(), expr.end()).strip().replaceAll("\\s+", " ");
+        return "`" + row.name() + " = " + cut(original) + "`\n\n`= " + cut(substituted.toString().strip()
+            .replaceAll("\\s+", " ")) + "`";
+    }
+
+    private static String cut(String s) {
+        int note = s.indexOf('"');
+        String t = note > 0 ? s.substring(0, note).strip() : s;
+        return t.length() > 200 ? t.substring(0, 197) + "…" : t;
+    }
+
+    private static String correlation(Binding.CorrelationBinding c) {
+        Statement.Correlation d = c.def();
+        StringBuilder out = new StringBuilder("**" + d.name().text() + "**(" + String.join(", ", d.params().stream()
+            .map(p -> p.name().text() + (p.dimension() == null ? "" : ": " + p.dimension().text())).toList()) + ") — correlation");
+        meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(c));
+        return out.toString();
+    }
+
+    private static String table(Binding.TableBinding t) {
+        Statement.Table d = t.def();
+        StringBuilder out = new StringBuilder("**" + t.name() + "**(" + d.param().name().text() + ") — table");
+        meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(t));
+        return out.toString();
+    }
+
+    private static void meta(StringBuilder out, String title, String source, dev.plumb.syntax.Ident basis, String valid) {
+        if (title != null) out.append("\n\n").append(title);
+        if (source != null) out.append("\n\nsource: ").append(source);
+        if (basis != null) out.append("\n\nbasis: ").append(basis.text());
+        if (!valid.isEmpty()) out.append("\n\nvalid: ").append(valid).append(" (checked at every call)");
+    }
+}

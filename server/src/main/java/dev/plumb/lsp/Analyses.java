@@ -1,0 +1,139 @@
+package dev.plumb.lsp;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Settings;
+import dev.plumb.analysis.Workspace;
+import java.nio.file.Path;
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.HashSet;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.ScheduledExecutorService;
+import java.util.concurrent.ScheduledFuture;
+import java.util.concurrent.TimeUnit;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+
+/**
+ * Runs the engine for open documents off the message thread: debounced per document, the
+ * newest edit cancelling a pending run, and a result published only while its version is still
+ * the document's version, so a stale result never overwrites a newer one. Documents that `use`
+ * an edited file are re-run too.
+ */
+final class Analyses {
+    /** An analysis and the document version it was made from. */
+    record Result(int version, Analysis analysis) {
+    }
+
+    private final DocumentStore documents;
+    private final Supplier<ServerSettings> settings;
+    private final Consumer<OpenDocumentResult> publisher;
+    private final ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(daemon("plumb-debounce"));
+    private final ExecutorService workers = Executors.newFixedThreadPool(
+        Math.max(1, Runtime.getRuntime().availableProcessors()), daemon("plumb-analysis"));
+    private final Map<String, Result> latest = new ConcurrentHashMap<>();
+    private final Map<String, ScheduledFuture<?>> pending = new ConcurrentHashMap<>();
+
+    /** What is published: the document and its fresh analysis. */
+    record OpenDocumentResult(OpenDocument document, Analysis analysis) {
+    }
+
+    Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher) {
+        this.documents = documents;
+        this.settings = settings;
+        this.publisher = publisher;
+    }
+
+    private static java.util.concurrent.ThreadFactory daemon(String name) {
+        return r -> {
+            Thread t = new Thread(r, name);
+            t.setDaemon(true);
+            return t;
+        };
+    }
+
+    /** After an edit: run again after the debounce delay, and re-run the documents that use this one. */
+    void schedule(String uri) {
+        ScheduledFuture<?> previous = pending.remove(uri);
+        if (previous != null) previous.cancel(false);
+        int delay = settings.get().debounceMs();
+        pending.put(uri, timer.schedule(() -> workers.submit(() -> run(uri)), delay, TimeUnit.MILLISECONDS));
+    }
+
+    void forget(String uri) {
+        ScheduledFuture<?> previous = pending.remove(uri);
+        if (previous != null) previous.cancel(false);
+        latest.remove(uri);
+    }
+
+    /** The analysis of a document's current text, made now if the last one is stale. */
+    Analysis current(String uri) {
+        OpenDocument d = documents.get(uri);
+        if (d == null) return null;
+        Result r = latest.get(uri);
+        if (r != null && r.version() == d.version()) return r.analysis();
+        Analysis a = analyze(d);
+        store(d, a);
+        return a;
+    }
+
+    private void run(String uri) {
+        OpenDocument d = documents.get(uri);
+        if (d == null) return;
+        try {
+            Analysis a = analyze(d);
+            if (!store(d, a)) return;
+            publisher.accept(new OpenDocumentResult(d, a));
+            for (String user : usersOf(d.path(), uri)) schedule(user);
+        } catch (RuntimeException | StackOverflowError e) {
+            System.err.println("plumb: analysis of " + uri + " failed: " + e);
+        }
+    }
+
+    /** Keeps a result only while it belongs to the document's current version. */
+    private boolean store(OpenDocument d, Analysis a) {
+        OpenDocument now = documents.get(d.uri());
+        if (now == null || now.version() != d.version()) return false;
+        latest.put(d.uri(), new Result(d.version(), a));
+        return true;
+    }
+
+    private Analysis analyze(OpenDocument d) {
+        Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance());
+        return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text());
+    }
+
+    /** Open documents that use this path, directly or through other files. */
+    private Set<String> usersOf(Path path, String self) {
+        Set<String> users = new HashSet<>();
+        Deque<Path> todo = new ArrayDeque<>();
+        todo.add(path);
+        Set<Path> seen = new HashSet<>();
+        while (!todo.isEmpty()) {
+            Path p = todo.poll();
+            if (!seen.add(p)) continue;
+            for (Map.Entry<String, Result> e : latest.entrySet()) {
+                if (e.getKey().equals(self)) continue;
+                if (e.getValue().analysis().imports().contains(p)) {
+                    users.add(e.getKey());
+                    todo.add(e.getValue().analysis().file());
+                }
+            }
+        }
+        return users;
+    }
+
+    /** Every open document again (settings or files on disk changed). */
+    void scheduleAll() {
+        for (OpenDocument d : documents.all()) schedule(d.uri());
+    }
+
+    void shutdown() {
+        timer.shutdownNow();
+        workers.shutdownNow();
+    }
+}

@@ -1,0 +1,36 @@
+package dev.plumb.lsp;
+
+import java.io.FileDescriptor;
+import java.io.FileOutputStream;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.io.PrintStream;
+import java.util.concurrent.ExecutionException;
+import org.eclipse.lsp4j.launch.LSPLauncher;
+import org.eclipse.lsp4j.services.LanguageClient;
+
+/** `plumb lsp`: the language server on stdin/stdout. Stray prints go to stderr, never the protocol. */
+public final class LspMain {
+    private LspMain() {
+    }
+
+    public static int run() {
+        InputStream in = System.in;
+        OutputStream out = new FileOutputStream(FileDescriptor.out);
+        System.setOut(new PrintStream(new FileOutputStream(FileDescriptor.err), true));
+        PlumbLanguageServer server = new PlumbLanguageServer();
+        var launcher = LSPLauncher.createServerLauncher(server, in, out);
+        LanguageClient client = launcher.getRemoteProxy();
+        server.connect(client);
+        try {
+            launcher.startListening().get();
+            return 0;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return 1;
+        } catch (ExecutionException e) {
+            System.err.println("plumb lsp: " + e.getCause());
+            return 1;
+        }
+    }
+}

@@ -1,0 +1,174 @@
+package dev.plumb.lsp;
+
+import dev.plumb.analysis.Stdlib;
+import dev.plumb.ide.Target;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.DiagnosticRegistrationOptions;
+import org.eclipse.lsp4j.InitializeParams;
+import org.eclipse.lsp4j.InitializeResult;
+import org.eclipse.lsp4j.Location;
+import org.eclipse.lsp4j.PublishDiagnosticsParams;
+import org.eclipse.lsp4j.ServerCapabilities;
+import org.eclipse.lsp4j.ServerInfo;
+import org.eclipse.lsp4j.TextDocumentSyncKind;
+import org.eclipse.lsp4j.services.LanguageClient;
+import org.eclipse.lsp4j.services.LanguageClientAware;
+import org.eclipse.lsp4j.services.LanguageServer;
+import org.eclipse.lsp4j.services.TextDocumentService;
+import org.eclipse.lsp4j.services.WorkspaceService;
+
+/**
+ * Plumb's language server: wires the document store, the analysis scheduler and the services,
+ * negotiates the position encoding and the value channels the client can show.
+ */
+public final class PlumbLanguageServer implements LanguageServer, LanguageClientAware {
+    private final Positions.Enc encoding = new Positions.Enc();
+    private final DocumentStore documents = new DocumentStore(encoding);
+    private final ExecutorService requests = Executors.newFixedThreadPool(2, r -> {
+        Thread t = new Thread(r, "plumb-request");
+        t.setDaemon(true);
+        return t;
+    });
+    private volatile ServerSettings settings = ServerSettings.DEFAULT;
+    private volatile LanguageClient client;
+    private final Analyses analyses = new Analyses(documents, () -> settings, this::publish);
+    private final PlumbTextDocumentService text = new PlumbTextDocumentService(this, requests);
+    private final PlumbWorkspaceService workspace = new PlumbWorkspaceService(this);
+    private boolean shutdown;
+    private Path libraryCopy;
+
+    @Override
+    public void connect(LanguageClient client) {
+        this.client = client;
+    }
+
+    @Override
+    public CompletableFuture<InitializeResult> initialize(InitializeParams params) {
+        ClientCapabilities caps = params.getCapabilities();
+        encoding.value = negotiate(caps);
+        settings = channelsFor(caps).with(params.getInitializationOptions());
+        ServerCapabilities c = new ServerCapabilities();
+        c.setTextDocumentSync(TextDocumentSyncKind.Incremental);
+        c.setHoverProvider(true);
+        c.setDefinitionProvider(true);
+        c.setDocumentSymbolProvider(true);
+        c.setInlayHintProvider(true);
+        c.setCodeLensProvider(new org.eclipse.lsp4j.CodeLensOptions(false));
+        c.setDiagnosticProvider(new DiagnosticRegistrationOptions(true, false));
+        c.setPositionEncoding(encoding.value.id);
+        return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", "0.1.0")));
+    }
+
+    /** UTF-16 unless the client offers only others; the client's first choice among those we know. */
+    private static Positions.Encoding negotiate(ClientCapabilities caps) {
+        List<String> offered = caps == null || caps.getGeneral() == null ? null : caps.getGeneral().getPositionEncodings();
+        if (offered == null || offered.isEmpty()) return Positions.Encoding.UTF16;
+        for (String o : offered) {
+            for (Positions.Encoding e : Positions.Encoding.values()) {
+                if (e.id.equalsIgnoreCase(o)) return e;
+            }
+        }
+        return Positions.Encoding.UTF16;
+    }
+
+    /** Values go where the client can show them: inlay hints, else code lenses, else hint diagnostics. */
+    private static ServerSettings channelsFor(ClientCapabilities caps) {
+        var td = caps == null ? null : caps.getTextDocument();
+        boolean inlay = td != null && td.getInlayHint() != null;
+        boolean lens = td != null && td.getCodeLens() != null;
+        ServerSettings d = ServerSettings.DEFAULT;
+        return new ServerSettings(d.digits(), inlay, !inlay && lens, !inlay && !lens, d.debounceMs(), d.onSaveOnly());
+    }
+
+    @Override
+    public CompletableFuture<Object> shutdown() {
+        shutdown = true;
+        analyses.shutdown();
+        return CompletableFuture.completedFuture(null);
+    }
+
+    @Override
+    public void exit() {
+        System.exit(shutdown ? 0 : 1);
+    }
+
+    @Override
+    public TextDocumentService getTextDocumentService() {
+        return text;
+    }
+
+    @Override
+    public WorkspaceService getWorkspaceService() {
+        return workspace;
+    }
+
+    DocumentStore documents() {
+        return documents;
+    }
+
+    Analyses analyses() {
+        return analyses;
+    }
+
+    ServerSettings settings() {
+        return settings;
+    }
+
+    Positions.Encoding encoding() {
+        return encoding.value;
+    }
+
+    void updateSettings(Object json) {
+        settings = settings.with(json);
+    }
+
+    private void publish(Analyses.OpenDocumentResult r) {
+        LanguageClient c = client;
+        if (c == null) return;
+        c.publishDiagnostics(new PublishDiagnosticsParams(r.document().uri(),
+            ProtocolMapping.diagnostics(r.analysis(), encoding.value, settings), r.document().version()));
+        if (settings.codeLens()) c.refreshCodeLenses();
+        if (settings.inlayHints()) c.refreshInlayHints();
+    }
+
+    void clearDiagnostics(String uri) {
+        LanguageClient c = client;
+        if (c != null) c.publishDiagnostics(new PublishDiagnosticsParams(uri, List.of()));
+    }
+
+    /** A definition's place as a protocol location; library files are copied out of the jar once. */
+    Location locate(Target t) {
+        Path file = t.file();
+        String text;
+        try {
+            if (file.startsWith(Stdlib.ROOT)) {
+                file = libraryFile(Stdlib.ROOT.relativize(file).toString());
+            }
+            OpenDocument open = documents.byPath(file);
+            text = open != null ? open.text() : Files.readString(file);
+        } catch (IOException | RuntimeException e) {
+            return null;
+        }
+        return new Location(file.toUri().toString(), Positions.range(text, t.span().start(), t.span().end(), encoding.value));
+    }
+
+    private synchronized Path libraryFile(String name) throws IOException {
+        if (libraryCopy == null) libraryCopy = Files.createTempDirectory("plumb-stdlib-");
+        Path copy = libraryCopy.resolve(name);
+        if (!Files.exists(copy)) {
+            try (var in = Stdlib.class.getResourceAsStream("/stdlib/" + name)) {
+                if (in == null) throw new IOException("no library file " + name);
+                Files.copy(in, copy);
+            }
+            copy.toFile().setReadOnly();
+        }
+        return copy;
+    }
+}

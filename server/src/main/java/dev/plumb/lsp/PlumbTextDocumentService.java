@@ -1,0 +1,131 @@
+package dev.plumb.lsp;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.ide.HoverText;
+import dev.plumb.ide.Navigation;
+import dev.plumb.ide.Outline;
+import dev.plumb.ide.Target;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutorService;
+import java.util.function.Function;
+import org.eclipse.lsp4j.CodeLens;
+import org.eclipse.lsp4j.CodeLensParams;
+import org.eclipse.lsp4j.DefinitionParams;
+import org.eclipse.lsp4j.DidChangeTextDocumentParams;
+import org.eclipse.lsp4j.DidCloseTextDocumentParams;
+import org.eclipse.lsp4j.DidOpenTextDocumentParams;
+import org.eclipse.lsp4j.DidSaveTextDocumentParams;
+import org.eclipse.lsp4j.DocumentDiagnosticParams;
+import org.eclipse.lsp4j.DocumentDiagnosticReport;
+import org.eclipse.lsp4j.DocumentSymbol;
+import org.eclipse.lsp4j.DocumentSymbolParams;
+import org.eclipse.lsp4j.Hover;
+import org.eclipse.lsp4j.HoverParams;
+import org.eclipse.lsp4j.InlayHint;
+import org.eclipse.lsp4j.InlayHintParams;
+import org.eclipse.lsp4j.Location;
+import org.eclipse.lsp4j.LocationLink;
+import org.eclipse.lsp4j.MarkupContent;
+import org.eclipse.lsp4j.MarkupKind;
+import org.eclipse.lsp4j.RelatedFullDocumentDiagnosticReport;
+import org.eclipse.lsp4j.SymbolInformation;
+import org.eclipse.lsp4j.jsonrpc.CompletableFutures;
+import org.eclipse.lsp4j.jsonrpc.messages.Either;
+import org.eclipse.lsp4j.services.TextDocumentService;
+
+/**
+ * The text-document requests: each is a one-line delegation to the engine's analysis of the
+ * document and an `ide` feature, run off the message thread, mapped to protocol types.
+ */
+final class PlumbTextDocumentService implements TextDocumentService {
+    private final PlumbLanguageServer server;
+    private final ExecutorService requests;
+
+    PlumbTextDocumentService(PlumbLanguageServer server, ExecutorService requests) {
+        this.server = server;
+        this.requests = requests;
+    }
+
+    @Override
+    public void didOpen(DidOpenTextDocumentParams params) {
+        var d = params.getTextDocument();
+        server.documents().open(d.getUri(), d.getText(), d.getVersion());
+        server.analyses().schedule(d.getUri());
+    }
+
+    @Override
+    public void didChange(DidChangeTextDocumentParams params) {
+        String uri = params.getTextDocument().getUri();
+        server.documents().change(uri, params.getTextDocument().getVersion(), params.getContentChanges());
+        if (!server.settings().onSaveOnly()) server.analyses().schedule(uri);
+    }
+
+    @Override
+    public void didClose(DidCloseTextDocumentParams params) {
+        String uri = params.getTextDocument().getUri();
+        server.documents().close(uri);
+        server.analyses().forget(uri);
+        server.clearDiagnostics(uri);
+    }
+
+    @Override
+    public void didSave(DidSaveTextDocumentParams params) {
+        server.analyses().schedule(params.getTextDocument().getUri());
+    }
+
+    /** Runs a feature on the document's current analysis, off the message thread. */
+    private <T> CompletableFuture<T> with(String uri, Function<Analysis, T> feature) {
+        return CompletableFutures.computeAsync(requests, cancel -> {
+            Analysis a = server.analyses().current(uri);
+            cancel.checkCanceled();
+            return a == null ? null : feature.apply(a);
+        });
+    }
+
+    private Positions.Encoding enc() {
+        return server.encoding();
+    }
+
+    @Override
+    public CompletableFuture<Hover> hover(HoverParams params) {
+        return with(params.getTextDocument().getUri(), a -> {
+            String text = HoverText.at(a, Positions.offset(a.text(), params.getPosition(), enc()));
+            return text == null ? null : new Hover(new MarkupContent(MarkupKind.MARKDOWN, text));
+        });
+    }
+
+    @Override
+    public CompletableFuture<Either<List<? extends Location>, List<? extends LocationLink>>> definition(
+        DefinitionParams params) {
+        return with(params.getTextDocument().getUri(), a -> {
+            Target t = Navigation.definitionAt(a, Positions.offset(a.text(), params.getPosition(), enc()));
+            Location l = t == null ? null : server.locate(t);
+            return Either.forLeft(l == null ? List.of() : List.of(l));
+        });
+    }
+
+    @Override
+    public CompletableFuture<List<Either<SymbolInformation, DocumentSymbol>>> documentSymbol(DocumentSymbolParams params) {
+        return with(params.getTextDocument().getUri(), a -> ProtocolMapping.symbols(a, Outline.of(a), enc()).stream()
+            .map(Either::<SymbolInformation, DocumentSymbol>forRight).toList());
+    }
+
+    @Override
+    public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
+        return with(params.getTextDocument().getUri(), a -> server.settings().inlayHints()
+            ? ProtocolMapping.inlayHints(a, enc()) : List.of());
+    }
+
+    @Override
+    public CompletableFuture<List<? extends CodeLens>> codeLens(CodeLensParams params) {
+        return with(params.getTextDocument().getUri(), a -> server.settings().codeLens()
+            ? ProtocolMapping.codeLenses(a, enc()) : List.of());
+    }
+
+    @Override
+    public CompletableFuture<DocumentDiagnosticReport> diagnostic(DocumentDiagnosticParams params) {
+        return with(params.getTextDocument().getUri(), a -> new DocumentDiagnosticReport(
+            new RelatedFullDocumentDiagnosticReport(ProtocolMapping.diagnostics(a, enc(), server.settings()))));
+    }
+}

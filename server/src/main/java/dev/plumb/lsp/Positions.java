@@ -1,0 +1,88 @@
+package dev.plumb.lsp;
+
+import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.Range;
+
+/**
+ * Converts between the engine's offsets (UTF-16 units into the document string) and protocol
+ * positions, whose character counts are UTF-16 units by default, or UTF-8 bytes or code points
+ * when that was negotiated.
+ */
+final class Positions {
+    enum Encoding {
+        UTF16("utf-16"), UTF8("utf-8"), UTF32("utf-32");
+
+        final String id;
+
+        Encoding(String id) {
+            this.id = id;
+        }
+    }
+
+    private Positions() {
+    }
+
+    static Position position(String text, int offset, Encoding enc) {
+        offset = Math.max(0, Math.min(offset, text.length()));
+        int line = 0;
+        int lineStart = 0;
+        for (int i = 0; i < offset; i++) {
+            char c = text.charAt(i);
+            if (c == '\n' || (c == '\r' && (i + 1 >= text.length() || text.charAt(i + 1) != '\n'))) {
+                line++;
+                lineStart = i + 1;
+            }
+        }
+        return new Position(line, units(text, lineStart, offset, enc));
+    }
+
+    static Range range(String text, int start, int end, Encoding enc) {
+        return new Range(position(text, start, enc), position(text, end, enc));
+    }
+
+    /** The offset of a position; positions past a line's end clamp to it, past the end to the end. */
+    static int offset(String text, Position p, Encoding enc) {
+        int line = 0;
+        int i = 0;
+        while (line < p.getLine() && i < text.length()) {
+            char c = text.charAt(i++);
+            if (c == '\n' || (c == '\r' && (i >= text.length() || text.charAt(i) != '\n'))) line++;
+        }
+        if (line < p.getLine()) return text.length();
+        int remaining = p.getCharacter();
+        while (i < text.length() && remaining > 0) {
+            char c = text.charAt(i);
+            if (c == '\n' || c == '\r') break;
+            int cp = text.codePointAt(i);
+            int width = width(cp, enc);
+            if (width > remaining) break;
+            remaining -= width;
+            i += Character.charCount(cp);
+        }
+        return i;
+    }
+
+    private static int units(String text, int from, int to, Encoding enc) {
+        if (enc == Encoding.UTF16) return to - from;
+        int n = 0;
+        for (int i = from; i < to; ) {
+            int cp = text.codePointAt(i);
+            n += width(cp, enc);
+            i += Character.charCount(cp);
+        }
+        return n;
+    }
+
+    private static int width(int cp, Encoding enc) {
+        return switch (enc) {
+            case UTF16 -> Character.charCount(cp);
+            case UTF32 -> 1;
+            case UTF8 -> cp < 0x80 ? 1 : cp < 0x800 ? 2 : cp < 0x10000 ? 3 : 4;
+        };
+    }
+
+    /** A mutable holder of the negotiated encoding, shared by the services. */
+    static final class Enc {
+        volatile Encoding value = Encoding.UTF16;
+    }
+}

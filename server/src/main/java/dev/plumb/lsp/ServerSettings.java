@@ -1,0 +1,40 @@
+package dev.plumb.lsp;
+
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+
+/**
+ * What the editor may set (initializationOptions or workspace/configuration section "plumb"):
+ * significant figures, which value channels are on, the debounce delay, diagnostics on save only.
+ */
+record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean valueDiagnostics, int debounceMs,
+                      boolean onSaveOnly) {
+    static final ServerSettings DEFAULT = new ServerSettings(4, true, true, false, 100, false);
+
+    /** Reads known keys from a JSON object; unknown keys and wrong types keep the current value. */
+    ServerSettings with(Object json) {
+        if (!(json instanceof JsonObject o)) return this;
+        if (o.has("plumb") && o.get("plumb").isJsonObject()) o = o.getAsJsonObject("plumb");
+        return new ServerSettings(
+            Math.max(1, Math.min(15, integer(o, "significantFigures", digits))),
+            bool(o, "inlayHints", inlayHints),
+            bool(o, "codeLens", codeLens),
+            bool(o, "valueDiagnostics", valueDiagnostics),
+            Math.max(0, Math.min(5000, integer(o, "debounceMs", debounceMs))),
+            bool(o, "diagnosticsOnSaveOnly", onSaveOnly));
+    }
+
+    private static int integer(JsonObject o, String key, int fallback) {
+        JsonElement e = o.get(key);
+        try {
+            return e != null && e.isJsonPrimitive() ? e.getAsInt() : fallback;
+        } catch (NumberFormatException ex) {
+            return fallback;
+        }
+    }
+
+    private static boolean bool(JsonObject o, String key, boolean fallback) {
+        JsonElement e = o.get(key);
+        return e != null && e.isJsonPrimitive() && e.getAsJsonPrimitive().isBoolean() ? e.getAsBoolean() : fallback;
+    }
+}
