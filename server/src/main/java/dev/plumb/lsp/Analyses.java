@@ -127,8 +127,9 @@ final class Analyses {
         return users;
     }
 
-    /** Every open document again (settings or files on disk changed). */
+    /** Every open document again (settings or files on disk changed): earlier results are void. */
     void scheduleAll() {
+        latest.clear();
         for (OpenDocument d : documents.all()) schedule(d.uri());
     }
 

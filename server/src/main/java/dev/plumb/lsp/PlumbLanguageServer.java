@@ -42,6 +42,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     private final PlumbTextDocumentService text = new PlumbTextDocumentService(this, requests);
     private final PlumbWorkspaceService workspace = new PlumbWorkspaceService(this);
     private boolean shutdown;
+    private volatile boolean pullsConfiguration;
     private Path libraryCopy;
 
     @Override
@@ -53,6 +54,8 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     public CompletableFuture<InitializeResult> initialize(InitializeParams params) {
         ClientCapabilities caps = params.getCapabilities();
         encoding.value = negotiate(caps);
+        pullsConfiguration = caps != null && caps.getWorkspace() != null
+            && Boolean.TRUE.equals(caps.getWorkspace().getConfiguration());
         settings = channelsFor(caps).with(params.getInitializationOptions());
         ServerCapabilities c = new ServerCapabilities();
         c.setTextDocumentSync(TextDocumentSyncKind.Incremental);
@@ -63,6 +66,15 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         c.setCodeLensProvider(new org.eclipse.lsp4j.CodeLensOptions(false));
         c.setDiagnosticProvider(new DiagnosticRegistrationOptions(true, false));
         c.setPositionEncoding(encoding.value.id);
+        c.setCompletionProvider(new org.eclipse.lsp4j.CompletionOptions(false, List.of(" ", "/", "*")));
+        c.setSignatureHelpProvider(new org.eclipse.lsp4j.SignatureHelpOptions(List.of("(", ",")));
+        c.setReferencesProvider(true);
+        c.setDocumentHighlightProvider(true);
+        c.setRenameProvider(true);
+        c.setFoldingRangeProvider(true);
+        c.setWorkspaceSymbolProvider(true);
+        c.setCodeActionProvider(true);
+        c.setSemanticTokensProvider(new org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions(Features.LEGEND, true));
         return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", "0.1.0")));
     }
 
@@ -85,6 +97,21 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         boolean lens = td != null && td.getCodeLens() != null;
         ServerSettings d = ServerSettings.DEFAULT;
         return new ServerSettings(d.digits(), inlay, !inlay && lens, !inlay && !lens, d.debounceMs(), d.onSaveOnly());
+    }
+
+    /** Asks the client for the "plumb" settings, without ever blocking the message thread. */
+    @Override
+    public void initialized(org.eclipse.lsp4j.InitializedParams params) {
+        LanguageClient c = client;
+        if (c == null || !pullsConfiguration) return;
+        org.eclipse.lsp4j.ConfigurationItem item = new org.eclipse.lsp4j.ConfigurationItem();
+        item.setSection("plumb");
+        c.configuration(new org.eclipse.lsp4j.ConfigurationParams(List.of(item))).thenAccept(values -> {
+            if (values != null && !values.isEmpty() && values.get(0) != null) {
+                updateSettings(values.get(0));
+                analyses.scheduleAll();
+            }
+        }).exceptionally(e -> null);
     }
 
     @Override

@@ -9,7 +9,24 @@ import java.util.List;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutorService;
 import java.util.function.Function;
+import org.eclipse.lsp4j.CodeAction;
+import org.eclipse.lsp4j.CodeActionParams;
 import org.eclipse.lsp4j.CodeLens;
+import org.eclipse.lsp4j.Command;
+import org.eclipse.lsp4j.CompletionItem;
+import org.eclipse.lsp4j.CompletionList;
+import org.eclipse.lsp4j.CompletionParams;
+import org.eclipse.lsp4j.DocumentHighlight;
+import org.eclipse.lsp4j.DocumentHighlightParams;
+import org.eclipse.lsp4j.FoldingRange;
+import org.eclipse.lsp4j.FoldingRangeRequestParams;
+import org.eclipse.lsp4j.ReferenceParams;
+import org.eclipse.lsp4j.RenameParams;
+import org.eclipse.lsp4j.SemanticTokens;
+import org.eclipse.lsp4j.SemanticTokensParams;
+import org.eclipse.lsp4j.SignatureHelp;
+import org.eclipse.lsp4j.SignatureHelpParams;
+import org.eclipse.lsp4j.WorkspaceEdit;
 import org.eclipse.lsp4j.CodeLensParams;
 import org.eclipse.lsp4j.DefinitionParams;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
@@ -121,6 +138,53 @@ final class PlumbTextDocumentService implements TextDocumentService {
     public CompletableFuture<List<? extends CodeLens>> codeLens(CodeLensParams params) {
         return with(params.getTextDocument().getUri(), a -> server.settings().codeLens()
             ? ProtocolMapping.codeLenses(a, enc()) : List.of());
+    }
+
+    @Override
+    public CompletableFuture<Either<List<CompletionItem>, CompletionList>> completion(CompletionParams params) {
+        return with(params.getTextDocument().getUri(), a -> Either.forLeft(Features.completion(a,
+            Positions.offset(a.text(), params.getPosition(), enc()))));
+    }
+
+    @Override
+    public CompletableFuture<SignatureHelp> signatureHelp(SignatureHelpParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.signatureHelp(a,
+            Positions.offset(a.text(), params.getPosition(), enc())));
+    }
+
+    @Override
+    public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.references(a,
+            Positions.offset(a.text(), params.getPosition(), enc()), params.getTextDocument().getUri(), enc()));
+    }
+
+    @Override
+    public CompletableFuture<List<? extends DocumentHighlight>> documentHighlight(DocumentHighlightParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.highlights(a,
+            Positions.offset(a.text(), params.getPosition(), enc()), enc()));
+    }
+
+    @Override
+    public CompletableFuture<WorkspaceEdit> rename(RenameParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.rename(a,
+            Positions.offset(a.text(), params.getPosition(), enc()), params.getNewName(), params.getTextDocument().getUri(),
+            enc()));
+    }
+
+    @Override
+    public CompletableFuture<List<FoldingRange>> foldingRange(FoldingRangeRequestParams params) {
+        return with(params.getTextDocument().getUri(), Features::folding);
+    }
+
+    @Override
+    public CompletableFuture<SemanticTokens> semanticTokensFull(SemanticTokensParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.semanticTokens(a, enc()));
+    }
+
+    @Override
+    public CompletableFuture<List<Either<Command, CodeAction>>> codeAction(CodeActionParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.codeActions(a, params.getRange(),
+            params.getTextDocument().getUri(), enc()));
     }
 
     @Override

@@ -1,6 +1,18 @@
 package dev.plumb.lsp;
 
+import dev.plumb.analysis.Analysis;
+import dev.plumb.ide.Outline;
+import dev.plumb.ide.Symbol;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
 import org.eclipse.lsp4j.DidChangeConfigurationParams;
+import org.eclipse.lsp4j.Location;
+import org.eclipse.lsp4j.SymbolInformation;
+import org.eclipse.lsp4j.SymbolKind;
+import org.eclipse.lsp4j.WorkspaceSymbol;
+import org.eclipse.lsp4j.WorkspaceSymbolParams;
+import org.eclipse.lsp4j.jsonrpc.messages.Either;
 import org.eclipse.lsp4j.DidChangeWatchedFilesParams;
 import org.eclipse.lsp4j.services.WorkspaceService;
 
@@ -21,5 +33,32 @@ final class PlumbWorkspaceService implements WorkspaceService {
     @Override
     public void didChangeWatchedFiles(DidChangeWatchedFilesParams params) {
         server.analyses().scheduleAll();
+    }
+
+    /** Every open document's sections and definitions whose names contain the query. */
+    @Override
+    public CompletableFuture<Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>> symbol(
+        WorkspaceSymbolParams params) {
+        return CompletableFuture.supplyAsync(() -> {
+            String query = params.getQuery() == null ? "" : params.getQuery().toLowerCase(java.util.Locale.ROOT);
+            List<WorkspaceSymbol> out = new ArrayList<>();
+            for (OpenDocument d : server.documents().all()) {
+                Analysis a = server.analyses().current(d.uri());
+                if (a == null) continue;
+                collect(a, d.uri(), Outline.of(a), query, out);
+            }
+            return Either.forRight(out);
+        });
+    }
+
+    private void collect(Analysis a, String uri, List<Symbol> symbols, String query, List<WorkspaceSymbol> out) {
+        for (Symbol s : symbols) {
+            if (!s.kind().equals("section") && s.name().toLowerCase(java.util.Locale.ROOT).contains(query)) {
+                out.add(new WorkspaceSymbol(s.name(), s.kind().equals("input") ? SymbolKind.Constant : SymbolKind.Variable,
+                    Either.forLeft(new Location(uri, Positions.range(a.text(), s.selection().start(), s.selection().end(),
+                        server.encoding())))));
+            }
+            collect(a, uri, s.children(), query, out);
+        }
     }
 }

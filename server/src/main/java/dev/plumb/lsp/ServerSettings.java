@@ -13,6 +13,7 @@ record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean 
 
     /** Reads known keys from a JSON object; unknown keys and wrong types keep the current value. */
     ServerSettings with(Object json) {
+        if (json instanceof com.google.gson.JsonElement e && e.isJsonObject()) json = e.getAsJsonObject();
         if (!(json instanceof JsonObject o)) return this;
         if (o.has("plumb") && o.get("plumb").isJsonObject()) o = o.getAsJsonObject("plumb");
         return new ServerSettings(

@@ -1,0 +1,106 @@
+package dev.plumb.ide;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Binding;
+import dev.plumb.units.UnitRegistry;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.TreeSet;
+
+/**
+ * What may be typed at the cursor: units after a number or after `in`, else names in scope
+ * (with their values), functions and correlations (with parameter snippets) and statement words.
+ */
+public final class Completion {
+    private static final int LIMIT = 200;
+    private static final List<String> STATEMENT_WORDS = List.of("input", "check", "section", "use", "find", "correlation",
+        "table", "title", "author", "reviewer", "revision");
+
+    private Completion() {
+    }
+
+    public static List<CompletionEntry> at(Analysis a, int offset) {
+        String text = a.text();
+        offset = Math.max(0, Math.min(offset, text.length()));
+        int start = offset;
+        while (start > 0 && isUnitChar(text.charAt(start - 1))) start--;
+        String prefix = text.substring(start, offset);
+        if (unitExpected(text, start)) return units(prefix);
+        int wordStart = offset;
+        while (wordStart > 0 && isNameChar(text.charAt(wordStart - 1))) wordStart--;
+        String word = text.substring(wordStart, offset);
+        List<CompletionEntry> out = new ArrayList<>();
+        if (lineStartsAt(text, wordStart)) {
+            for (String k : STATEMENT_WORDS) {
+                if (matches(k, word)) out.add(new CompletionEntry(k, CompletionEntry.Kind.KEYWORD, "statement", k + " ", false));
+            }
+        }
+        for (String name : new TreeSet<>(a.scope().visibleNames())) {
+            if (!matches(name, word)) continue;
+            out.add(entry(name, a.scope().lookup(name)));
+            if (out.size() >= LIMIT) break;
+        }
+        return out;
+    }
+
+    private static CompletionEntry entry(String name, Binding b) {
+        if (b instanceof Binding.ValueBinding v) {
+            String detail = v.value().known() ? dev.plumb.units.QuantityFormat.format(v.value().si(),
+                v.display() != null ? v.display() : dev.plumb.units.DisplayUnits.defaultFor(v.value().dimension()), 4) : "?";
+            return new CompletionEntry(name, v.file() == null ? CompletionEntry.Kind.CONSTANT
+                : v.input() ? CompletionEntry.Kind.INPUT : CompletionEntry.Kind.VALUE, detail, name, false);
+        }
+        List<String> params = Signatures.parameters(b);
+        StringBuilder snippet = new StringBuilder(name).append('(');
+        for (int i = 0; i < params.size(); i++) {
+            if (i > 0) snippet.append(", ");
+            snippet.append("${").append(i + 1).append(':').append(params.get(i).split(":")[0].strip()).append('}');
+        }
+        snippet.append(')');
+        CompletionEntry.Kind kind = b instanceof Binding.CorrelationBinding ? CompletionEntry.Kind.CORRELATION
+            : b instanceof Binding.TableBinding ? CompletionEntry.Kind.TABLE : CompletionEntry.Kind.FUNCTION;
+        return new CompletionEntry(name, kind, Signatures.label(name, b), snippet.toString(), true);
+    }
+
+    private static List<CompletionEntry> units(String prefix) {
+        List<CompletionEntry> out = new ArrayList<>();
+        for (String symbol : new TreeSet<>(UnitRegistry.standard().symbols())) {
+            if (symbol.startsWith(prefix) && !symbol.isEmpty()) {
+                out.add(new CompletionEntry(symbol, CompletionEntry.Kind.UNIT, "unit", symbol, false));
+                if (out.size() >= LIMIT) break;
+            }
+        }
+        return out;
+    }
+
+    /** After a number (and optional blanks) or after the word `in`, a unit is expected. */
+    private static boolean unitExpected(String text, int start) {
+        int i = start;
+        boolean blank = false;
+        while (i > 0 && (text.charAt(i - 1) == ' ' || text.charAt(i - 1) == '\t')) {
+            i--;
+            blank = true;
+        }
+        if (i > 0 && Character.isDigit(text.charAt(i - 1))) return true;
+        return blank && i >= 2 && text.startsWith("in", i - 2) && (i < 3 || !isNameChar(text.charAt(i - 3)));
+    }
+
+    private static boolean lineStartsAt(String text, int i) {
+        int j = i;
+        while (j > 0 && (text.charAt(j - 1) == ' ' || text.charAt(j - 1) == '\t')) j--;
+        return j == 0 || text.charAt(j - 1) == '\n' || text.charAt(j - 1) == '\r';
+    }
+
+    private static boolean matches(String candidate, String typed) {
+        return candidate.toLowerCase(Locale.ROOT).startsWith(typed.toLowerCase(Locale.ROOT));
+    }
+
+    private static boolean isNameChar(char c) {
+        return Character.isLetterOrDigit(c) || c == '_' || c == '.';
+    }
+
+    private static boolean isUnitChar(char c) {
+        return Character.isLetter(c) || c == '°' || c == '%' || c == '/' || c == '^' || c == '*' || c == '·';
+    }
+}

@@ -1,0 +1,99 @@
+package dev.plumb.ide;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Row;
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.units.DisplayUnits;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Code actions: quick fixes for findings that name their fix (a missing `*`, a close spelling,
+ * a correlation valid at the value) and refactors on a definition (show it in SI).
+ */
+public final class Fixes {
+    /** One action: a title, whether it fixes a finding, and its edits. */
+    public record Action(String title, boolean quickFix, List<Edit> edits, Diagnostic fixes) {
+    }
+
+    private static final Pattern DID_YOU_MEAN = Pattern.compile("did you mean ((?:'[^']+'(?: or )?)+)\\?");
+    private static final Pattern QUOTED = Pattern.compile("'([^']+)'");
+    private static final Pattern WITHIN = Pattern.compile("within range: ([\\w, .]+)$");
+
+    private Fixes() {
+    }
+
+    /** The actions for a range of the document. */
+    public static List<Action> at(Analysis a, Span range) {
+        List<Action> out = new ArrayList<>();
+        for (Diagnostic d : a.diagnostics()) {
+            if (d.span().end() < range.start() || d.span().start() > range.end()) continue;
+            out.addAll(quickFixes(a, d));
+        }
+        for (Row r : a.rows()) {
+            if (r instanceof Row.ValueRow v && v.span().start() <= range.end() && range.start() <= v.span().end()) {
+                Action si = showInSi(a, v);
+                if (si != null) out.add(si);
+            }
+        }
+        return out;
+    }
+
+    private static List<Action> quickFixes(Analysis a, Diagnostic d) {
+        List<Action> out = new ArrayList<>();
+        String m = d.message();
+        if (d.code() == Code.SYNTAX_ERROR && m.startsWith("missing operator between")) {
+            out.add(new Action("Insert '*'", true, List.of(new Edit(d.span().start(), 0, "* ")), d));
+        }
+        if (d.code() == Code.UNIT_UNKNOWN || d.code() == Code.NAME_UNKNOWN) {
+            Matcher mean = DID_YOU_MEAN.matcher(m);
+            if (mean.find()) {
+                Matcher q = QUOTED.matcher(mean.group(1));
+                while (q.find()) {
+                    out.add(new Action("Change to '" + q.group(1) + "'", true,
+                        List.of(new Edit(d.span().start(), d.span().length(), q.group(1))), d));
+                }
+            }
+        }
+        if (d.code() == Code.RANGE_OUTSIDE) {
+            Matcher w = WITHIN.matcher(m);
+            String call = a.text().substring(d.span().start(), d.span().end());
+            int paren = call.indexOf('(');
+            if (w.find() && paren > 0) {
+                for (String alt : w.group(1).split(",\\s*")) {
+                    out.add(new Action("Use " + alt.strip() + ", valid here", true,
+                        List.of(new Edit(d.span().start(), paren, alt.strip())), d));
+                }
+            }
+        }
+        return out;
+    }
+
+    /** "Show in SI": set the definition's `in` unit to the SI unit of its dimension. */
+    private static Action showInSi(Analysis a, Row.ValueRow v) {
+        if (!v.value().known() || v.value().dimension().isDimensionless()) return null;
+        String si = DisplayUnits.defaultFor(v.value().dimension()).symbol();
+        if (v.shown().endsWith(" " + si)) return null;
+        String text = a.text();
+        int end = v.span().end();
+        String statement = text.substring(v.span().start(), end);
+        int note = statement.indexOf('"');
+        int bodyEnd = note >= 0 ? v.span().start() + note : end;
+        Matcher in = Pattern.compile("\\sin\\s+\\S+").matcher(text.substring(v.span().start(), bodyEnd));
+        Edit edit;
+        if (in.find()) {
+            edit = new Edit(v.span().start() + in.start(), in.end() - in.start(), " in " + si);
+        } else {
+            // `in UNIT` comes before `as TAG` and the note.
+            Matcher as = Pattern.compile("\\sas\\s").matcher(text.substring(v.span().start(), bodyEnd));
+            int at = as.find() ? v.span().start() + as.start() : bodyEnd;
+            while (at > v.span().start() && Character.isWhitespace(text.charAt(at - 1))) at--;
+            edit = new Edit(at, 0, " in " + si);
+        }
+        return new Action("Show " + v.name() + " in SI (" + si + ")", false, List.of(edit), null);
+    }
+}

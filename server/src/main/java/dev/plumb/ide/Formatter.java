@@ -1,0 +1,86 @@
+package dev.plumb.ide;
+
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.LineMap;
+import dev.plumb.syntax.ParsedSource;
+import dev.plumb.syntax.SourceParser;
+import dev.plumb.syntax.Statement;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * Lines up blocks of definitions. A block is a run of one-line definitions ({@code NAME = …},
+ * {@code input NAME = …}) on consecutive lines with the same indentation; anything else on a
+ * line between them, a blank line or a change of indentation ends it. Within a block the
+ * {@code =} signs, the {@code in}/{@code as} clauses and the notes stand in columns (see
+ * {@link AlignedBlock}).
+ *
+ * <p>Only blanks between the parts of such a definition change. Everything else is left as
+ * written: narrative, code comments and the blanks before them, quoted text, statements that
+ * continue onto further lines, correlation and table blocks, every line that holds or belongs
+ * to a syntax error, indentation and line breaks. So formatting never changes what a document
+ * means, and formatting twice changes nothing more.
+ */
+public final class Formatter {
+    private Formatter() {
+    }
+
+    /** The edits that format the text, in ascending order of offset and not overlapping. */
+    public static List<Edit> format(String text) {
+        ParsedSource parsed = SourceParser.parse(text);
+        LineMap lines = parsed.lines();
+        boolean[] untouchable = untouchableLines(parsed);
+        List<Edit> edits = new ArrayList<>();
+        List<DefinitionLine> block = new ArrayList<>();
+        for (Statement s : parsed.statements()) {
+            DefinitionLine line = s instanceof Statement.Definition d ? DefinitionLine.read(text, lines, d) : null;
+            if (line != null && untouchable[line.line()]) line = null;
+            if (!block.isEmpty() && (line == null || !continuesBlock(block.get(block.size() - 1), line))) {
+                new AlignedBlock(text, block).edits(edits);
+                block.clear();
+            }
+            if (line != null) block.add(line);
+        }
+        if (!block.isEmpty()) new AlignedBlock(text, block).edits(edits);
+        edits.sort(Comparator.comparingInt(Edit::offset));
+        return edits;
+    }
+
+    /** The text with the edits made; the edits must not overlap. */
+    public static String apply(String text, List<Edit> edits) {
+        List<Edit> sorted = new ArrayList<>(edits);
+        sorted.sort(Comparator.comparingInt(Edit::offset));
+        StringBuilder out = new StringBuilder(text.length());
+        int at = 0;
+        for (Edit e : sorted) {
+            if (e.offset() < at) throw new IllegalArgumentException("overlapping edits at offset " + e.offset());
+            out.append(text, at, e.offset()).append(e.replacement());
+            at = e.end();
+        }
+        return out.append(text, at, text.length()).toString();
+    }
+
+    private static boolean continuesBlock(DefinitionLine previous, DefinitionLine next) {
+        return next.line() == previous.line() + 1 && next.indent().equals(previous.indent());
+    }
+
+    /** Lines the formatter must not touch: any line of a block, a broken statement or a syntax error. */
+    private static boolean[] untouchableLines(ParsedSource parsed) {
+        LineMap lines = parsed.lines();
+        boolean[] marked = new boolean[lines.lineCount()];
+        for (Statement s : parsed.statements()) {
+            boolean keepAsWritten = s instanceof Statement.Correlation || s instanceof Statement.Table
+                || s instanceof Statement.Broken;
+            if (keepAsWritten) mark(marked, lines, s.span());
+        }
+        for (Diagnostic d : parsed.diagnostics()) mark(marked, lines, d.span());
+        return marked;
+    }
+
+    private static void mark(boolean[] marked, LineMap lines, Span span) {
+        int last = lines.lineIndex(span.end());
+        for (int i = lines.lineIndex(span.start()); i <= last; i++) marked[i] = true;
+    }
+}

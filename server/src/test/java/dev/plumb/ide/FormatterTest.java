@@ -1,0 +1,286 @@
+package dev.plumb.ide;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.syntax.ParsedSource;
+import dev.plumb.syntax.SourceParser;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+
+/** Lining up definitions, what the formatter leaves alone, and that it never changes meaning. */
+class FormatterTest {
+
+    /** Formats {@code input} and compares with {@code expected}; then checks the invariants on both. */
+    private static void check(String input, String expected) {
+        assertEquals(expected, Formatter.apply(input, Formatter.format(input)));
+        assertKeepsMeaning(input);
+        assertEquals(List.of(), Formatter.format(expected), "formatting the formatted text changes it again");
+    }
+
+    private static void unchanged(String input) {
+        check(input, input);
+    }
+
+    // ---- lining up -------------------------------------------------------------------
+
+    @Test
+    void inputsLineUpTheirEqualsSignsAndNotesCountingCharactersNotUnits() {
+        check("""
+            section "Mooring"
+            input V = 2.4 m/s "current at the buoy, survey log B-7"
+            input ρ_sw=1025 kg/m³ "sea water, survey brief"
+            input µ = 1.08e-3 Pa·s
+            input T_w = 12 °C      "water temperature, survey log B-7"
+            """, """
+            section "Mooring"
+            input V    = 2.4 m/s        "current at the buoy, survey log B-7"
+            input ρ_sw = 1025 kg/m³     "sea water, survey brief"
+            input µ    = 1.08e-3 Pa·s
+            input T_w  = 12 °C          "water temperature, survey log B-7"
+            """);
+    }
+
+    @Test
+    void clausesStartInOneColumnAndNotesInAnother() {
+        check("""
+            A_f = d_w * L_w as frontal "projected area of the whip"
+            q = 0.5 * ρ_sw * V^2 in Pa
+            F_D = C_D * A_f * q in kN "drag on the whip"
+            A_w = pi * d_w * L_w in m² as wetted
+            Δp=q in kPa
+            """, """
+            A_f = d_w * L_w          as frontal     "projected area of the whip"
+            q   = 0.5 * ρ_sw * V^2   in Pa
+            F_D = C_D * A_f * q      in kN          "drag on the whip"
+            A_w = pi * d_w * L_w     in m² as wetted
+            Δp  = q                  in kPa
+            """);
+    }
+
+    @Test
+    void anAsAfterAnInLinesUpWithTheOthersThatFollowAnIn() {
+        check("""
+            A_1 = b * h in m² as frontal "face"
+            A_22 = pi * d * L in mm² as wetted
+            """, """
+            A_1  = b * h       in m²  as frontal  "face"
+            A_22 = pi * d * L  in mm² as wetted
+            """);
+    }
+
+    @Test
+    void aLoneDefinitionGetsOneSpaceAroundItsEqualsSign() {
+        check("Re=ρ_sw * V * d_w / µ\n", "Re = ρ_sw * V * d_w / µ\n");
+        check("input  d_w\t=\t12 mm\n", "input  d_w = 12 mm\n");
+    }
+
+    @Test
+    void namesOutsideTheBasicPlaneCountAsOneCharacter() {
+        check("""
+            input 𝜌 = 1.2 kg/m³ "air"
+            input ab = 3 m "span"
+            """, """
+            input 𝜌  = 1.2 kg/m³  "air"
+            input ab = 3 m        "span"
+            """);
+    }
+
+    @Test
+    void blankLinesSectionsNarrativeChecksAndIndentationEndABlock() {
+        check("""
+            a = 1
+            bbbb = 2
+
+            cc = 3
+            # narrative between
+            d = 4
+            check d > 1
+            eeeee = 5
+            section "Next"
+            f = 6
+              gg = 7
+              h = 8
+            """, """
+            a    = 1
+            bbbb = 2
+
+            cc = 3
+            # narrative between
+            d = 4
+            check d > 1
+            eeeee = 5
+            section "Next"
+            f = 6
+              gg = 7
+              h  = 8
+            """);
+    }
+
+    @Test
+    void codeCommentsKeepTheirTextAndTheBlanksBeforeThem() {
+        check("""
+            L_w = 3.2 m   # whip length, drawing W-1
+            d_w=12 mm\t#\tdiameter
+            """, """
+            L_w = 3.2 m   # whip length, drawing W-1
+            d_w = 12 mm\t#\tdiameter
+            """);
+    }
+
+    @Test
+    void lineBreaksAreKept() {
+        check("a=1\r\nbb = 2 in m\r\n", "a  = 1\r\nbb = 2  in m\r\n");
+        check("a=1\rbb = 2\r", "a  = 1\rbb = 2\r");
+    }
+
+    // ---- left alone ------------------------------------------------------------------
+
+    @Test
+    void continuedStatementsAreLeftAloneAndEndTheBlock() {
+        check("""
+            input μ_ref = 1.716e-5 Pa·s
+                "Sutherland reference viscosity, property sheet"
+            q=0.5 * ρ *
+                V^2      in Pa
+            a = 1
+            bb = 2
+            """, """
+            input μ_ref = 1.716e-5 Pa·s
+                "Sutherland reference viscosity, property sheet"
+            q=0.5 * ρ *
+                V^2      in Pa
+            a  = 1
+            bb = 2
+            """);
+    }
+
+    @Test
+    void correlationAndTableBlocksAreLeftAlone() {
+        unchanged("""
+            correlation cd_whip(Re)
+                title  "Drag coefficient of the whip, invented"
+                source "Invented for this test"
+                basis  frontal
+                valid  1e3 <= Re <= 1e5
+                =   1.1 + 0.2 * log10(Re / 1e3)
+            end
+
+            table cd_plate(AR)
+                source "Invented for this test"
+                AR   Cd
+                1    1.18
+                5      1.20
+            end
+            """);
+    }
+
+    @Test
+    void brokenLinesAreLeftAloneAndTheRestIsStillFormatted() {
+        check("""
+            a=1 @ 2
+            bb=2
+            c =  3
+            x = 5.
+            """, """
+            a=1 @ 2
+            bb = 2
+            c  = 3
+            x = 5.
+            """);
+    }
+
+    @Test
+    void functionsFindAndHeadersAreLeftAlone() {
+        unchanged("""
+            title   "Survey buoy whip"
+            drag(Cd, A, q)=Cd * A * q    "drag on a reference area"
+            find V within 1 mm/s .. 10 m/s so that drag = W    in mm/s
+            """);
+    }
+
+    @Test
+    void quotedTextKeepsItsBlanks() {
+        check("note_x =  1   \"  two   blanks  \"\n", "note_x = 1  \"  two   blanks  \"\n");
+    }
+
+    @Test
+    void clauseWordsThatAreUnitsStayUnits() {
+        // `5 in` is five inches and `2 as` two attoseconds: no clause to line up.
+        check("a = 5 in\nbb = 2 as \"note\"\nc = 5 in in mm\n", "a  = 5 in\nbb = 2 as         \"note\"\nc  = 5 in  in mm\n");
+    }
+
+    // ---- the invariant ---------------------------------------------------------------
+
+    @Test
+    void randomDocumentsKeepTheirMeaningAndFormatOnce() {
+        RandomCalc calcs = new RandomCalc(20_240_611L);
+        int changed = 0;
+        int changedWithoutErrors = 0;
+        for (int i = 0; i < 5000; i++) {
+            String text = calcs.document();
+            List<Edit> edits = assertKeepsMeaning(text);
+            if (!edits.isEmpty()) {
+                changed++;
+                if (SourceParser.parse(text).diagnostics().isEmpty()) changedWithoutErrors++;
+            }
+        }
+        // The corpus must exercise the formatter, not just pass through it.
+        assertTrue(changed > 2500, "only " + changed + " documents changed");
+        assertTrue(changedWithoutErrors > 500, "only " + changedWithoutErrors + " clean documents changed");
+    }
+
+    @Test
+    void theSamplesAndTheStandardLibraryKeepTheirMeaning() throws IOException {
+        List<Path> files;
+        try (Stream<Path> all = Stream.concat(Files.walk(Path.of("../samples")),
+            Files.walk(Path.of("src/main/resources/stdlib")))) {
+            files = all.filter(p -> p.toString().endsWith(".plumb")).toList();
+        }
+        assertTrue(files.size() > 10, "found only " + files);
+        for (Path f : files) assertKeepsMeaning(Files.readString(f));
+    }
+
+    /**
+     * Formats the text and asserts the invariant: the same characters apart from blanks, the same
+     * statements and syntax diagnostics, and nothing more to do on a second pass.
+     */
+    private static List<Edit> assertKeepsMeaning(String text) {
+        List<Edit> edits = Formatter.format(text);
+        String formatted = Formatter.apply(text, edits);
+        String shown = "\n--- before ---\n" + text + "\n--- after ---\n" + formatted;
+        for (Edit e : edits) {
+            assertTrue(isBlanks(text.substring(e.offset(), e.end())) && isBlanks(e.replacement()), "edit " + e + shown);
+        }
+        assertEquals(withoutBlanks(text), withoutBlanks(formatted), "characters other than blanks changed" + shown);
+        ParsedSource before = SourceParser.parse(text);
+        ParsedSource after = SourceParser.parse(formatted);
+        assertEquals(dump(before), dump(after), "statements changed" + shown);
+        assertEquals(codes(before), codes(after), "diagnostics changed" + shown);
+        assertEquals(List.of(), Formatter.format(formatted), "a second pass changes more" + shown);
+        return edits;
+    }
+
+    private static boolean isBlanks(String s) {
+        return s.chars().allMatch(c -> c == ' ' || c == '\t');
+    }
+
+    /** Line breaks count: the formatter only ever changes spaces and tabs. */
+    private static String withoutBlanks(String s) {
+        return s.replace(" ", "").replace("\t", "");
+    }
+
+    /** The statements as their records print, without where they stand. */
+    private static List<String> dump(ParsedSource p) {
+        return p.statements().stream().map(s -> s.toString().replaceAll("Span\\[start=\\d+, end=\\d+]", "@")).toList();
+    }
+
+    private static List<String> codes(ParsedSource p) {
+        return p.diagnostics().stream().map(Diagnostic::code).map(Object::toString).toList();
+    }
+}

@@ -1,0 +1,164 @@
+package dev.plumb.lsp;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonObject;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.TimeUnit;
+import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.CodeActionContext;
+import org.eclipse.lsp4j.CodeActionParams;
+import org.eclipse.lsp4j.CompletionItem;
+import org.eclipse.lsp4j.CompletionParams;
+import org.eclipse.lsp4j.DidChangeConfigurationParams;
+import org.eclipse.lsp4j.DocumentHighlightParams;
+import org.eclipse.lsp4j.FoldingRangeRequestParams;
+import org.eclipse.lsp4j.InlayHintCapabilities;
+import org.eclipse.lsp4j.InlayHintParams;
+import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.Range;
+import org.eclipse.lsp4j.ReferenceContext;
+import org.eclipse.lsp4j.ReferenceParams;
+import org.eclipse.lsp4j.RenameParams;
+import org.eclipse.lsp4j.SemanticTokensParams;
+import org.eclipse.lsp4j.SignatureHelpParams;
+import org.eclipse.lsp4j.TextDocumentClientCapabilities;
+import org.eclipse.lsp4j.TextDocumentIdentifier;
+import org.eclipse.lsp4j.WorkspaceSymbolParams;
+import org.eclipse.lsp4j.services.TextDocumentService;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Completion, signatures, references, rename, folding, semantic tokens, code actions, symbols, settings. */
+class FeaturesTest {
+    @TempDir
+    Path dir;
+    private TestClient client;
+
+    @AfterEach
+    void stop() throws IOException {
+        if (client != null) TestClient.close(client);
+    }
+
+    private TextDocumentService open(String name, String text, Object options) throws Exception {
+        TextDocumentClientCapabilities td = new TextDocumentClientCapabilities();
+        td.setInlayHint(new InlayHintCapabilities());
+        ClientCapabilities caps = new ClientCapabilities();
+        caps.setTextDocument(td);
+        client = new TestClient(caps, options);
+        Files.createDirectories(dir.resolve(".git"));
+        Path p = dir.resolve(name);
+        Files.writeString(p, text);
+        client.open(p.toUri().toString(), text);
+        return client.remote.getTextDocumentService();
+    }
+
+    private String uri(String name) {
+        return dir.resolve(name).toUri().toString();
+    }
+
+    private static TextDocumentIdentifier doc(String uri) {
+        return new TextDocumentIdentifier(uri);
+    }
+
+    @Test
+    void completionOffersUnitsAfterANumberAndNamesWithValuesElsewhere() throws Exception {
+        TextDocumentService s = open("c.plumb", "input rho = 1.2 kg/m^3\ninput V = 12 k\nq = 0.5 * r\n", null);
+        List<CompletionItem> units = s.completion(new CompletionParams(doc(uri("c.plumb")), new Position(1, 14)))
+            .get(10, TimeUnit.SECONDS).getLeft();
+        assertTrue(units.stream().anyMatch(i -> i.getLabel().equals("kN")), "units after a number");
+        List<CompletionItem> names = s.completion(new CompletionParams(doc(uri("c.plumb")), new Position(2, 11)))
+            .get(10, TimeUnit.SECONDS).getLeft();
+        CompletionItem rho = names.stream().filter(i -> i.getLabel().equals("rho")).findFirst().orElseThrow();
+        assertEquals("1.2 kg/m³", rho.getDetail());
+        CompletionItem reynolds = names.stream().filter(i -> i.getLabel().equals("reynolds")).findFirst().orElseThrow();
+        assertTrue(reynolds.getInsertText().startsWith("reynolds(${1:rho}"), reynolds.getInsertText());
+    }
+
+    @Test
+    void signatureHelpShowsParametersAndTheValidRange() throws Exception {
+        TextDocumentService s = open("sig.plumb", "x = cd_sphere_sn(\n", null);
+        var help = s.signatureHelp(new SignatureHelpParams(doc(uri("sig.plumb")), new Position(0, 17)))
+            .get(10, TimeUnit.SECONDS);
+        assertEquals("cd_sphere_sn(Re: dimensionless)", help.getSignatures().get(0).getLabel());
+        String docs = help.getSignatures().get(0).getDocumentation().getRight().getValue();
+        assertTrue(docs.contains("valid:"), docs);
+    }
+
+    @Test
+    void referencesHighlightsAndRename() throws Exception {
+        String text = "input b = 2 m\nA = b * b\nP = 2 * b\n";
+        TextDocumentService s = open("r.plumb", text, null);
+        String u = uri("r.plumb");
+        var refs = s.references(new ReferenceParams(doc(u), new Position(1, 4), new ReferenceContext(true)))
+            .get(10, TimeUnit.SECONDS);
+        assertEquals(4, refs.size(), "the definition and three uses");
+        var highlights = s.documentHighlight(new DocumentHighlightParams(doc(u), new Position(0, 6))).get(10, TimeUnit.SECONDS);
+        assertEquals(4, highlights.size());
+        var edit = s.rename(new RenameParams(doc(u), new Position(2, 8), "width")).get(10, TimeUnit.SECONDS);
+        assertEquals(4, edit.getChanges().get(u).size());
+        ExecutionException clash = assertThrows(ExecutionException.class,
+            () -> s.rename(new RenameParams(doc(u), new Position(2, 8), "A")).get(10, TimeUnit.SECONDS));
+        assertTrue(clash.getCause().getMessage().contains("already defined"), clash.getCause().getMessage());
+    }
+
+    @Test
+    void foldingSemanticTokensAndWorkspaceSymbols() throws Exception {
+        String text = "section \"Air\"\ninput rho = 1.2 kg/m^3\nq = rho * (3 m/s)^2\nsection \"End\"\nz = 1\n";
+        TextDocumentService s = open("f.plumb", text, null);
+        String u = uri("f.plumb");
+        var folds = s.foldingRange(new FoldingRangeRequestParams(doc(u))).get(10, TimeUnit.SECONDS);
+        assertEquals(0, folds.get(0).getStartLine());
+        assertEquals(2, folds.get(0).getEndLine());
+        List<Integer> data = s.semanticTokensFull(new SemanticTokensParams(doc(u))).get(10, TimeUnit.SECONDS).getData();
+        // First token: the unit kg/m^3 on line 1 at character 16, length 6, type 3 (unit).
+        assertEquals(List.of(1, 16, 6, 3, 0), data.subList(0, 5));
+        // Then rho on line 2 at 4, an input (type 0).
+        assertEquals(List.of(1, 4, 3, 0, 0), data.subList(5, 10));
+        var symbols = client.remote.getWorkspaceService().symbol(new WorkspaceSymbolParams("rh")).get(10, TimeUnit.SECONDS);
+        assertEquals(List.of("rho"), symbols.getRight().stream().map(w -> w.getName()).toList());
+    }
+
+    @Test
+    void quickFixesAndTheSiRefactor() throws Exception {
+        String text = "input Cd = 1.1\ninput A = 2 m^2\nF = Cd A\nL = 3 mtr\nC = cd_sphere_stokes(50)\nq = 2 kPa\n";
+        TextDocumentService s = open("x.plumb", text, null);
+        String u = uri("x.plumb");
+        List<String> titles = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(2, 0), new Position(5, 9)),
+            new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS).stream()
+            .map(e -> e.getRight().getTitle()).toList();
+        assertTrue(titles.contains("Insert '*'"), titles.toString());
+        assertTrue(titles.contains("Change to 'm'"), titles.toString());
+        assertTrue(titles.stream().anyMatch(t -> t.startsWith("Use cd_sphere_sn")), titles.toString());
+        assertTrue(titles.contains("Show q in SI (Pa)"), titles.toString());
+    }
+
+    @Test
+    void settingsChangeWhatIsShown() throws Exception {
+        JsonObject options = new JsonObject();
+        options.addProperty("significantFigures", 2);
+        TextDocumentService s = open("d.plumb", "x = 2 / 3\n", options);
+        String u = uri("d.plumb");
+        var hints = s.inlayHint(new InlayHintParams(doc(u), new Range(new Position(0, 0), new Position(1, 0))))
+            .get(10, TimeUnit.SECONDS);
+        assertEquals("  = 0.67", hints.get(0).getLabel().getLeft());
+        JsonObject settings = new JsonObject();
+        JsonObject plumb = new JsonObject();
+        plumb.addProperty("significantFigures", 5);
+        settings.add("plumb", plumb);
+        client.remote.getWorkspaceService().didChangeConfiguration(new DidChangeConfigurationParams(settings));
+        Thread.sleep(300);
+        var again = s.inlayHint(new InlayHintParams(doc(u), new Range(new Position(0, 0), new Position(1, 0))))
+            .get(10, TimeUnit.SECONDS);
+        assertNotNull(again);
+        assertEquals("  = 0.66667", again.get(0).getLabel().getLeft());
+    }
+}
