@@ -6,18 +6,27 @@ import dev.plumb.syntax.Statement;
 /**
  * Where the parts of a one-line definition ({@code [input] NAME = EXPR [in UNIT] [as BASIS] ["note"]})
  * stand in the text, found from the AST spans and the text between them. Offsets are UTF-16;
- * a missing clause has start and end -1. The formatter changes only the blanks between parts.
+ * a missing clause has all its offsets -1. The formatter changes only the blanks between parts.
  *
  * @param line       0-based line
  * @param indent     the blanks before the statement, without a byte-order mark
  * @param start      where the statement starts ({@code input} or the name)
+ * @param nameStart  the name (after {@code input} and its blanks, when given)
  * @param nameEnd    just past the name
  * @param equals     the {@code =}
  * @param exprStart  the first character of the expression
  * @param exprEnd    just past the expression, closing parentheses included
+ * @param inStart    the word {@code in}; {@code unitStart} and {@code inEnd} bound its unit
+ * @param asStart    the word {@code as}; {@code basisStart} and {@code asEnd} bound its basis
+ * @param noteStart  the note's opening quote; {@code noteEnd} is just past its closing one
  */
-record DefinitionLine(int line, String indent, int start, int nameEnd, int equals, int exprStart, int exprEnd,
-                      int inStart, int inEnd, int asStart, int asEnd, int noteStart, int noteEnd) {
+record DefinitionLine(int line, String indent, int start, int nameStart, int nameEnd, int equals, int exprStart,
+                      int exprEnd, int inStart, int unitStart, int inEnd, int asStart, int basisStart, int asEnd,
+                      int noteStart, int noteEnd) {
+
+    boolean isInput() {
+        return nameStart > start;
+    }
 
     boolean hasIn() {
         return inStart >= 0;
@@ -51,16 +60,20 @@ record DefinitionLine(int line, String indent, int start, int nameEnd, int equal
         int exprStart = skipBlanks(text, equals + 1, end);
 
         int inStart = -1;
+        int unitStart = -1;
         int inEnd = -1;
         if (d.displayUnit() != null) {
-            inStart = keywordBefore(text, d.displayUnit().span().start(), "in", exprStart);
+            unitStart = d.displayUnit().span().start();
+            inStart = keywordBefore(text, unitStart, "in", exprStart);
             inEnd = d.displayUnit().span().end();
             if (inStart < 0) return null;
         }
         int asStart = -1;
+        int basisStart = -1;
         int asEnd = -1;
         if (d.basis() != null) {
-            asStart = keywordBefore(text, d.basis().span().start(), "as", Math.max(exprStart, inEnd));
+            basisStart = d.basis().span().start();
+            asStart = keywordBefore(text, basisStart, "as", Math.max(exprStart, inEnd));
             asEnd = d.basis().span().end();
             if (asStart < 0) return null;
         }
@@ -75,8 +88,12 @@ record DefinitionLine(int line, String indent, int start, int nameEnd, int equal
         int firstClause = inStart >= 0 ? inStart : asStart >= 0 ? asStart : noteStart >= 0 ? noteStart : end;
         int exprEnd = firstClause == end ? end : skipBlanksBack(text, firstClause, exprStart);
         if (exprEnd <= exprStart) return null;
-        return new DefinitionLine(line, indent, start, nameEnd, equals, exprStart, exprEnd, inStart, inEnd, asStart,
-            asEnd, noteStart, noteEnd);
+        int nameStart = d.name().span().start();
+        int headGap = start + "input".length();
+        boolean inputHead = text.startsWith("input", start) && nameStart > headGap && isBlanks(text, headGap, nameStart);
+        if (d.input() ? !inputHead : nameStart != start) return null;
+        return new DefinitionLine(line, indent, start, nameStart, nameEnd, equals, exprStart, exprEnd, inStart,
+            unitStart, inEnd, asStart, basisStart, asEnd, noteStart, noteEnd);
     }
 
     /** The start of {@code word} standing before {@code at} with at least one blank between; -1 when absent. */

@@ -1,7 +1,6 @@
 package dev.plumb.ide;
 
 import dev.plumb.diagnostics.Diagnostic;
-import dev.plumb.diagnostics.Span;
 import dev.plumb.syntax.LineMap;
 import dev.plumb.syntax.ParsedSource;
 import dev.plumb.syntax.SourceParser;
@@ -9,6 +8,7 @@ import dev.plumb.syntax.Statement;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.regex.Pattern;
 
 /**
  * Lines up blocks of definitions. A block is a run of one-line definitions ({@code NAME = …},
@@ -24,6 +24,9 @@ import java.util.List;
  * means, and formatting twice changes nothing more.
  */
 public final class Formatter {
+    private static final Pattern BLOCK_HEAD = Pattern.compile("[ \t]*(correlation|table)[ \t].*");
+    private static final Pattern BLOCK_END = Pattern.compile("[ \t]*end([ \t#].*)?");
+
     private Formatter() {
     }
 
@@ -66,21 +69,39 @@ public final class Formatter {
         return next.line() == previous.line() + 1 && next.indent().equals(previous.indent());
     }
 
-    /** Lines the formatter must not touch: any line of a block, a broken statement or a syntax error. */
+    /**
+     * Lines the formatter must not touch: those of a broken statement or a syntax error, and
+     * those of a correlation or table block as written, from its head to its {@code end} (also
+     * when a line inside it reads as a definition and so ends the block for the parser).
+     */
     private static boolean[] untouchableLines(ParsedSource parsed) {
         LineMap lines = parsed.lines();
         boolean[] marked = new boolean[lines.lineCount()];
         for (Statement s : parsed.statements()) {
             boolean keepAsWritten = s instanceof Statement.Correlation || s instanceof Statement.Table
                 || s instanceof Statement.Broken;
-            if (keepAsWritten) mark(marked, lines, s.span());
+            if (keepAsWritten) mark(marked, lines.lineIndex(s.span().start()), lines.lineIndex(s.span().end()));
         }
-        for (Diagnostic d : parsed.diagnostics()) mark(marked, lines, d.span());
+        for (Diagnostic d : parsed.diagnostics()) {
+            mark(marked, lines.lineIndex(d.span().start()), lines.lineIndex(d.span().end()));
+        }
+        for (int i = 0; i < lines.lineCount(); i++) {
+            if (BLOCK_HEAD.matcher(lines.lineText(i)).matches()) mark(marked, i, blockEnd(lines, i));
+        }
         return marked;
     }
 
-    private static void mark(boolean[] marked, LineMap lines, Span span) {
-        int last = lines.lineIndex(span.end());
-        for (int i = lines.lineIndex(span.start()); i <= last; i++) marked[i] = true;
+    /** The line of the {@code end} that closes the block whose head is on a line; that line when none does. */
+    private static int blockEnd(LineMap lines, int head) {
+        for (int i = head + 1; i < lines.lineCount(); i++) {
+            String line = lines.lineText(i);
+            if (BLOCK_END.matcher(line).matches()) return i;
+            if (BLOCK_HEAD.matcher(line).matches()) break;
+        }
+        return head;
+    }
+
+    private static void mark(boolean[] marked, int first, int last) {
+        for (int i = first; i <= last; i++) marked[i] = true;
     }
 }

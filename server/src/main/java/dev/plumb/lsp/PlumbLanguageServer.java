@@ -43,6 +43,8 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     private final PlumbWorkspaceService workspace = new PlumbWorkspaceService(this);
     private boolean shutdown;
     private volatile boolean pullsConfiguration;
+    private volatile boolean refreshLenses;
+    private volatile boolean refreshHints;
     private Path libraryCopy;
 
     @Override
@@ -56,7 +58,12 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         encoding.value = negotiate(caps);
         pullsConfiguration = caps != null && caps.getWorkspace() != null
             && Boolean.TRUE.equals(caps.getWorkspace().getConfiguration());
-        settings = channelsFor(caps).with(params.getInitializationOptions());
+        String clientName = params.getClientInfo() == null ? "" : params.getClientInfo().getName();
+        settings = channelsFor(caps, clientName).with(params.getInitializationOptions());
+        refreshLenses = caps != null && caps.getWorkspace() != null && caps.getWorkspace().getCodeLens() != null
+            && Boolean.TRUE.equals(caps.getWorkspace().getCodeLens().getRefreshSupport());
+        refreshHints = caps != null && caps.getWorkspace() != null && caps.getWorkspace().getInlayHint() != null
+            && Boolean.TRUE.equals(caps.getWorkspace().getInlayHint().getRefreshSupport());
         ServerCapabilities c = new ServerCapabilities();
         c.setTextDocumentSync(TextDocumentSyncKind.Incremental);
         c.setHoverProvider(true);
@@ -74,6 +81,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         c.setFoldingRangeProvider(true);
         c.setWorkspaceSymbolProvider(true);
         c.setCodeActionProvider(true);
+        c.setExecuteCommandProvider(new org.eclipse.lsp4j.ExecuteCommandOptions(List.of(ProtocolMapping.SHOW_VALUE)));
         c.setSemanticTokensProvider(new org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions(Features.LEGEND, true));
         return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", "0.1.0")));
     }
@@ -90,13 +98,18 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         return Positions.Encoding.UTF16;
     }
 
-    /** Values go where the client can show them: inlay hints, else code lenses, else hint diagnostics. */
-    private static ServerSettings channelsFor(ClientCapabilities caps) {
+    /**
+     * Values go where the client can show them: inlay hints; else code lenses (answered to any client
+     * that asks — Neovim 0.7 shows them without declaring it); else, for clients that show neither,
+     * low-severity value diagnostics.
+     */
+    private static ServerSettings channelsFor(ClientCapabilities caps, String clientName) {
         var td = caps == null ? null : caps.getTextDocument();
         boolean inlay = td != null && td.getInlayHint() != null;
         boolean lens = td != null && td.getCodeLens() != null;
+        boolean neovim = clientName != null && clientName.toLowerCase(java.util.Locale.ROOT).contains("neovim");
         ServerSettings d = ServerSettings.DEFAULT;
-        return new ServerSettings(d.digits(), inlay, !inlay && lens, !inlay && !lens, d.debounceMs(), d.onSaveOnly());
+        return new ServerSettings(d.digits(), inlay, !inlay, !inlay && !lens && !neovim, d.debounceMs(), d.onSaveOnly());
     }
 
     /** Asks the client for the "plumb" settings, without ever blocking the message thread. */
@@ -161,8 +174,8 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         if (c == null) return;
         c.publishDiagnostics(new PublishDiagnosticsParams(r.document().uri(),
             ProtocolMapping.diagnostics(r.analysis(), encoding.value, settings), r.document().version()));
-        if (settings.codeLens()) c.refreshCodeLenses();
-        if (settings.inlayHints()) c.refreshInlayHints();
+        if (settings.codeLens() && refreshLenses) c.refreshCodeLenses();
+        if (settings.inlayHints() && refreshHints) c.refreshInlayHints();
     }
 
     void clearDiagnostics(String uri) {

@@ -35,6 +35,12 @@ final class PlumbWorkspaceService implements WorkspaceService {
         server.analyses().scheduleAll();
     }
 
+    /** The value lens's command: it only shows the value, so there is nothing to do. */
+    @Override
+    public CompletableFuture<Object> executeCommand(org.eclipse.lsp4j.ExecuteCommandParams params) {
+        return CompletableFuture.completedFuture(null);
+    }
+
     /** Every open document's sections and definitions whose names contain the query. */
     @Override
     public CompletableFuture<Either<List<? extends SymbolInformation>, List<? extends WorkspaceSymbol>>> symbol(

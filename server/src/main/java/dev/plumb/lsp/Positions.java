@@ -24,16 +24,36 @@ final class Positions {
 
     static Position position(String text, int offset, Encoding enc) {
         offset = Math.max(0, Math.min(offset, text.length()));
-        int line = 0;
-        int lineStart = 0;
-        for (int i = 0; i < offset; i++) {
+        int[] starts = lineStarts(text);
+        int line = java.util.Arrays.binarySearch(starts, offset);
+        if (line < 0) line = -line - 2;
+        return new Position(line, units(text, starts[line], offset, enc));
+    }
+
+    /** Line starts of the texts converted most recently: a document's positions are asked for many times. */
+    private static final java.util.Map<String, int[]> RECENT = java.util.Collections.synchronizedMap(
+        new java.util.LinkedHashMap<>(8, 0.75f, true) {
+            @Override
+            protected boolean removeEldestEntry(java.util.Map.Entry<String, int[]> eldest) {
+                return size() > 8;
+            }
+        });
+
+    private static int[] lineStarts(String text) {
+        int[] cached = RECENT.get(text);
+        if (cached != null) return cached;
+        int[] starts = new int[16];
+        int n = 1;
+        for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);
             if (c == '\n' || (c == '\r' && (i + 1 >= text.length() || text.charAt(i + 1) != '\n'))) {
-                line++;
-                lineStart = i + 1;
+                if (n == starts.length) starts = java.util.Arrays.copyOf(starts, n * 2);
+                starts[n++] = i + 1;
             }
         }
-        return new Position(line, units(text, lineStart, offset, enc));
+        int[] exact = java.util.Arrays.copyOf(starts, n);
+        RECENT.put(text, exact);
+        return exact;
     }
 
     static Range range(String text, int start, int end, Encoding enc) {

@@ -22,6 +22,8 @@ import org.eclipse.lsp4j.jsonrpc.messages.Either;
 final class ProtocolMapping {
     /** The source named on every diagnostic. */
     static final String SOURCE = "plumb";
+    /** The command of a value's code lens: showing is all it does, so running it changes nothing. */
+    static final String SHOW_VALUE = "plumb.showValue";
 
     private ProtocolMapping() {
     }
@@ -42,8 +44,8 @@ final class ProtocolMapping {
         }
         if (settings.valueDiagnostics()) {
             for (InlayValue v : dev.plumb.ide.InlayValues.of(a)) {
-                int lineStart = a.text().lastIndexOf('\n', Math.max(0, v.offset() - 1)) + 1;
-                Diagnostic value = new Diagnostic(Positions.range(a.text(), lineStart, v.offset(), enc), v.label(),
+                // Zero-width at the statement's end: listed and shown at the end of the line, nothing underlined.
+                Diagnostic value = new Diagnostic(Positions.range(a.text(), v.offset(), v.offset(), enc), v.label(),
                     DiagnosticSeverity.Hint, SOURCE, "value");
                 out.add(value);
             }
@@ -77,7 +79,7 @@ final class ProtocolMapping {
         for (InlayValue v : dev.plumb.ide.InlayValues.of(a)) {
             int lineStart = a.text().lastIndexOf('\n', Math.max(0, v.offset() - 1)) + 1;
             CodeLens lens = new CodeLens(Positions.range(a.text(), lineStart, lineStart, enc));
-            lens.setCommand(new Command(v.statement() + " " + v.label(), ""));
+            lens.setCommand(new Command(v.statement() + " " + v.label(), SHOW_VALUE));
             out.add(lens);
         }
         return out;

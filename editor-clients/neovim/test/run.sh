@@ -1,0 +1,75 @@
+#!/usr/bin/env bash
+# Headless Neovim test of the language server: makes a small calc workspace in a temp folder,
+# opens it in `nvim --headless --clean` with editor-clients/neovim/plumb.lua, and checks
+# diagnostics, hover, go-to-definition, code lenses and edits (see test.lua).
+#
+# Needs: nvim (0.7.2 or later; Debian: apt-get install -y neovim), java 17, and the server jar
+# (server/target/plumb.jar, built here via ./plumb when it is missing). PLUMB_JAR overrides it.
+# Exit status: 0 when every check passed, non-zero otherwise (124 when nvim hit the time limit).
+set -euo pipefail
+
+here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
+client_dir="$(cd "$here/.." && pwd)"
+repo="$(cd "$here/../../.." && pwd)"
+
+if ! command -v nvim >/dev/null 2>&1; then
+  echo "neovim lsp test: nvim not found (Debian: apt-get install -y neovim)" >&2
+  exit 2
+fi
+
+jar="${PLUMB_JAR:-$repo/server/target/plumb.jar}"
+if [ ! -f "$jar" ]; then
+  echo "neovim lsp test: $jar missing, building it once via ./plumb --help" >&2
+  (cd "$repo" && ./plumb --help >/dev/null)
+fi
+if [ ! -f "$jar" ]; then
+  echo "neovim lsp test: no server jar at $jar" >&2
+  exit 2
+fi
+
+work="$(mktemp -d "${TMPDIR:-/tmp}/plumb-nvim-test.XXXXXX")"
+trap 'rm -rf "$work"' EXIT
+ws="$work/workspace"
+mkdir -p "$ws/.git"
+
+# An invented calc: drag on a camera pod in a rig's air stream. The last line holds the
+# deliberate unit mismatch, after non-ASCII names (𝑥 is outside the BMP: two UTF-16 units).
+cat >"$ws/site.plumb" <<'EOF'
+# Rig data for the editor test (invented).
+input V_rig = 18 m/s   "fan speed at the pod station"
+EOF
+cat >"$ws/pod.plumb" <<'EOF'
+title "Camera pod in a rig air stream: drag (editor test, invented data)"
+
+use "site.plumb"
+
+input ρ_air = 1.18 kg/m³   "air in the rig hall"
+input T_hall = 22 °C       "hall temperature"
+T_abs = T_hall              in K
+input d_pod = 150 mm       "pod diameter"
+input Cd = 0.47            "smooth sphere, subcritical"
+q = 0.5 * ρ_air * V_rig^2   in Pa
+A = pi / 4 * d_pod^2        in m^2
+F = Cd * A * q              in N
+𝑥_Δ = ρ_air + 40 µm   "gap at 22 °C"
+EOF
+
+# Keep Neovim's state and the LSP log (with the server's stderr) inside the temp folder.
+export XDG_CONFIG_HOME="$work/config" XDG_DATA_HOME="$work/data" XDG_STATE_HOME="$work/state" \
+  XDG_CACHE_HOME="$work/cache"
+export PLUMB_JAR="$jar" PLUMB_WORKSPACE="$ws" PLUMB_NVIM_DIR="$client_dir"
+
+status=0
+(cd "$ws" && timeout 120 nvim --headless --clean -u NONE -i NONE -n \
+  -c "luafile $here/test.lua" </dev/null) || status=$?
+
+if [ "$status" -ne 0 ]; then
+  [ "$status" -eq 124 ] && echo "neovim lsp test: nvim did not finish within 120 s" >&2
+  for log in "$work"/cache/nvim/lsp.log "$work"/state/nvim/lsp.log; do
+    if [ -s "$log" ]; then
+      echo "---- $log (last 60 lines) ----" >&2
+      tail -n 60 "$log" >&2
+    fi
+  done
+fi
+exit "$status"

@@ -1,0 +1,90 @@
+package dev.plumb.lsp;
+
+import com.google.gson.JsonObject;
+import dev.plumb.bench.GeneratedCalc;
+import java.lang.management.ManagementFactory;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.CompletionParams;
+import org.eclipse.lsp4j.DidChangeTextDocumentParams;
+import org.eclipse.lsp4j.Position;
+import org.eclipse.lsp4j.Range;
+import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
+import org.eclipse.lsp4j.TextDocumentIdentifier;
+import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
+
+/**
+ * Prints the language server's latencies over real JSON-RPC in one process: didChange to
+ * publishDiagnostics on generated 1,000- and 10,000-line documents (debounce set to 0 so the
+ * figure is the server's own work), completion, and heap with 50 open 1,000-line documents.
+ * Run: {@code mvn -B -q -pl server test-compile exec:java -Dexec.classpathScope=test
+ * -Dexec.mainClass=dev.plumb.lsp.LspBenchmark}. Figures only; nothing here asserts a time.
+ */
+public final class LspBenchmark {
+    private LspBenchmark() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        JsonObject options = new JsonObject();
+        options.addProperty("debounceMs", 0);
+        TestClient client = new TestClient(new ClientCapabilities(), options);
+        Path dir = Files.createTempDirectory("plumb-lsp-bench");
+        Files.createDirectories(dir.resolve(".git"));
+        System.out.printf("Plumb language server benchmark — %d cores, %s %s%n", Runtime.getRuntime().availableProcessors(),
+            System.getProperty("java.vm.name"), System.getProperty("java.version"));
+        for (int lines : new int[] {1_000, 10_000}) {
+            String text = GeneratedCalc.of(lines);
+            Path file = dir.resolve("doc" + lines + ".plumb");
+            Files.writeString(file, text);
+            String uri = file.toUri().toString();
+            client.open(uri, text);
+            client.diagnostics(uri, 1);
+            int version = 1;
+            int runs = lines >= 10_000 ? 30 : 60;
+            double[] ms = new double[runs];
+            for (int i = -10; i < runs; i++) {
+                version++;
+                // Edit a number on line 5 back and forth: a realistic keystroke.
+                String digit = version % 2 == 0 ? "21" : "22";
+                long t0 = System.nanoTime();
+                client.remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
+                    new VersionedTextDocumentIdentifier(uri, version), List.of(new TextDocumentContentChangeEvent(
+                        new Range(new Position(4, 11), new Position(4, 13)), digit))));
+                client.diagnostics(uri, version);
+                if (i >= 0) ms[i] = (System.nanoTime() - t0) / 1e6;
+            }
+            Arrays.sort(ms);
+            System.out.printf("didChange → publishDiagnostics, %6d lines: median %7.1f ms   p90 %7.1f ms   min %7.1f ms%n",
+                text.split("\n").length, ms[runs / 2], ms[(int) (runs * 0.9)], ms[0]);
+            double[] comp = new double[40];
+            for (int i = -10; i < comp.length; i++) {
+                long t0 = System.nanoTime();
+                client.remote.getTextDocumentService().completion(new CompletionParams(new TextDocumentIdentifier(uri),
+                    new Position(6, 12))).get(10, TimeUnit.SECONDS);
+                if (i >= 0) comp[i] = (System.nanoTime() - t0) / 1e6;
+            }
+            Arrays.sort(comp);
+            System.out.printf("completion,                        %6d lines: median %7.1f ms   p90 %7.1f ms%n",
+                text.split("\n").length, comp[comp.length / 2], comp[(int) (comp.length * 0.9)]);
+        }
+        for (int i = 0; i < 50; i++) {
+            Path file = dir.resolve("open" + i + ".plumb");
+            String text = GeneratedCalc.of(1_000);
+            Files.writeString(file, text);
+            client.open(file.toUri().toString(), text);
+            client.diagnostics(file.toUri().toString(), 1);
+        }
+        for (int i = 0; i < 3; i++) {
+            System.gc();
+            Thread.sleep(200);
+        }
+        long used = ManagementFactory.getMemoryMXBean().getHeapMemoryUsage().getUsed();
+        System.out.printf("heap in use with 52 open documents (50 of 1,000 lines, one of 10,000): %.0f MB%n", used / 1e6);
+        TestClient.close(client);
+        System.exit(0);
+    }
+}
