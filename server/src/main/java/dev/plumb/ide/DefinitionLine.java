@@ -109,7 +109,7 @@ record DefinitionLine(int line, String indent, int start, int nameStart, int nam
         return i == lineEnd || text.charAt(i) == '#';
     }
 
-    static boolean isBlank(char c) {
+    private static boolean isBlank(char c) {
         return c == ' ' || c == '\t';
     }
 

@@ -24,15 +24,23 @@ import java.util.regex.Pattern;
  * means, and formatting twice changes nothing more.
  */
 public final class Formatter {
-    private static final Pattern BLOCK_HEAD = Pattern.compile("[ \t]*(correlation|table)[ \t].*");
-    private static final Pattern BLOCK_END = Pattern.compile("[ \t]*end([ \t#].*)?");
+    /** {@code correlation NAME(} or {@code table NAME(}, as the parser opens a block. */
+    private static final Pattern BLOCK_HEAD =
+        Pattern.compile("[\uFEFF \t]*(correlation|table)[ \t]+[\\p{L}_][\\p{L}\\p{Nd}_]*[ \t]*\\(.*");
+    /** {@code end} alone on its line, perhaps with a code comment. */
+    private static final Pattern BLOCK_END = Pattern.compile("[ \t]*end[ \t]*(#.*)?");
 
     private Formatter() {
     }
 
     /** The edits that format the text, in ascending order of offset and not overlapping. */
     public static List<Edit> format(String text) {
-        ParsedSource parsed = SourceParser.parse(text);
+        return format(SourceParser.parse(text));
+    }
+
+    /** The edits that format a parsed text, for a caller that has parsed it already. */
+    public static List<Edit> format(ParsedSource parsed) {
+        String text = parsed.text();
         LineMap lines = parsed.lines();
         boolean[] untouchable = untouchableLines(parsed);
         List<Edit> edits = new ArrayList<>();

@@ -150,6 +150,11 @@ final class Features {
         return out;
     }
 
+    /** Aligns definition blocks; only blanks change, never meaning. */
+    static List<TextEdit> format(Analysis a, Positions.Encoding enc) {
+        return edits(a, dev.plumb.ide.Formatter.format(a.text()), enc);
+    }
+
     private static List<TextEdit> edits(Analysis a, List<Edit> edits, Positions.Encoding enc) {
         List<TextEdit> out = new ArrayList<>();
         for (Edit e : edits) out.add(new TextEdit(range(a, new Span(e.offset(), e.end()), enc), e.replacement()));

@@ -81,6 +81,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         c.setFoldingRangeProvider(true);
         c.setWorkspaceSymbolProvider(true);
         c.setCodeActionProvider(true);
+        c.setDocumentFormattingProvider(true);
         c.setExecuteCommandProvider(new org.eclipse.lsp4j.ExecuteCommandOptions(List.of(ProtocolMapping.SHOW_VALUE)));
         c.setSemanticTokensProvider(new org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions(Features.LEGEND, true));
         return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", "0.1.0")));

@@ -188,6 +188,12 @@ final class PlumbTextDocumentService implements TextDocumentService {
     }
 
     @Override
+    public CompletableFuture<List<? extends org.eclipse.lsp4j.TextEdit>> formatting(
+        org.eclipse.lsp4j.DocumentFormattingParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.format(a, enc()));
+    }
+
+    @Override
     public CompletableFuture<DocumentDiagnosticReport> diagnostic(DocumentDiagnosticParams params) {
         return with(params.getTextDocument().getUri(), a -> new DocumentDiagnosticReport(
             new RelatedFullDocumentDiagnosticReport(ProtocolMapping.diagnostics(a, enc(), server.settings()))));

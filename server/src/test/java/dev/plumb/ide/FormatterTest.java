@@ -30,6 +30,55 @@ class FormatterTest {
     // ---- lining up -------------------------------------------------------------------
 
     @Test
+    void aSmallCalcLinesUpSectionBySection() {
+        check("""
+            title "Survey buoy B-7: drag on the antenna whip"
+            author "R. Okonkwo"
+
+            # Current and wind drag on the whip antenna of a moored survey buoy.
+
+            section "Inputs"
+            input V_w = 18 m/s "gust at the whip, mooring brief"
+            input T_air=6 °C "air temperature, survey log"
+            input p_air = 101.3 kPa
+            input d_w = 12 mm "whip diameter, antenna data sheet"
+            input L_w = 1.8 m   # above the float collar
+            input C_D = 1.1 "long cylinder, subcritical"
+
+            section "Drag"
+            ρ_air = p_air / (287.05 J/(kg*K) * T_air) in kg/m³
+            A_w = d_w * L_w as frontal "projected area"
+            q = 0.5 * ρ_air * V_w^2 in Pa
+            F_D = C_D * A_w * q in N "drag on the whip"
+            M_base = F_D * L_w / 2 in N*m "bending moment at the collar"
+
+            check M_base <= 25 N*m "whip base rating, data sheet"
+            """, """
+            title "Survey buoy B-7: drag on the antenna whip"
+            author "R. Okonkwo"
+
+            # Current and wind drag on the whip antenna of a moored survey buoy.
+
+            section "Inputs"
+            input V_w   = 18 m/s  "gust at the whip, mooring brief"
+            input T_air = 6 °C    "air temperature, survey log"
+            input p_air = 101.3 kPa
+            input d_w   = 12 mm   "whip diameter, antenna data sheet"
+            input L_w   = 1.8 m   # above the float collar
+            input C_D   = 1.1     "long cylinder, subcritical"
+
+            section "Drag"
+            ρ_air  = p_air / (287.05 J/(kg*K) * T_air)  in kg/m³
+            A_w    = d_w * L_w                          as frontal  "projected area"
+            q      = 0.5 * ρ_air * V_w^2                in Pa
+            F_D    = C_D * A_w * q                      in N        "drag on the whip"
+            M_base = F_D * L_w / 2                      in N*m      "bending moment at the collar"
+
+            check M_base <= 25 N*m "whip base rating, data sheet"
+            """);
+    }
+
+    @Test
     void inputsLineUpTheirEqualsSignsAndNotesCountingCharactersNotUnits() {
         check("""
             section "Mooring"
@@ -282,18 +331,21 @@ class FormatterTest {
      * edits and the text's parse.
      */
     private static Outcome assertKeepsMeaning(String text) {
-        List<Edit> edits = Formatter.format(text);
+        ParsedSource before = SourceParser.parse(text);
+        List<Edit> edits = Formatter.format(before);
         String formatted = Formatter.apply(text, edits);
         String shown = "\n--- before ---\n" + text + "\n--- after ---\n" + formatted;
+        int previousEnd = 0;
         for (Edit e : edits) {
+            assertTrue(e.offset() >= previousEnd, "edits out of order or overlapping at " + e + shown);
             assertTrue(isBlanks(text.substring(e.offset(), e.end())) && isBlanks(e.replacement()), "edit " + e + shown);
+            previousEnd = e.end();
         }
         assertEquals(withoutBlanks(text), withoutBlanks(formatted), "characters other than blanks changed" + shown);
-        ParsedSource before = SourceParser.parse(text);
         ParsedSource after = SourceParser.parse(formatted);
         assertEquals(dump(before), dump(after), "statements changed" + shown);
         assertEquals(codes(before), codes(after), "diagnostics changed" + shown);
-        assertEquals(List.of(), Formatter.format(formatted), "a second pass changes more" + shown);
+        assertEquals(List.of(), Formatter.format(after), "a second pass changes more" + shown);
         return new Outcome(edits, before);
     }
 

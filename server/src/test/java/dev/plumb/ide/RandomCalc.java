@@ -12,7 +12,7 @@ import java.util.Random;
 final class RandomCalc {
     private static final List<String> NAMES = List.of(
         "V", "rho", "ρ_air", "µ", "μ_w", "ΔT", "Re_L", "C_D", "A_front", "q", "F_D", "x2", "_tmp", "L",
-        "\uD835\uDF0C_sw", "T_amb", "check", "source", "ν", "d");
+        "\uD835\uDF0C_sw", "T_amb", "check", "source", "ν", "d", "end", "table");
     private static final List<String> QUANTITIES = List.of(
         "26 m/s", "8 °C", "1.716e-5 Pa·s", "3.0 m", "1.2", "101 kPa", "1025 kg/m³", "0.9 m", "5mm", "2 m^2",
         "15 °C", "12 degC", "1.5e-6 m²/s", "40 lbf", "105 km/h", "25 deg", "10 %", "5 in", "5in", "2 as",
@@ -47,12 +47,14 @@ final class RandomCalc {
         String newline = pick(List.of("\n", "\n", "\n", "\r\n", "\r"));
         boolean mixedBreaks = random.nextInt(10) == 0;
         int count = 1 + random.nextInt(25);
+        String lastBreak = "";
         for (int i = 0; i < count; i++) {
             for (String line : piece().split("\n", -1)) {
-                doc.append(line).append(mixedBreaks ? pick(List.of("\n", "\r\n", "\r")) : newline);
+                lastBreak = mixedBreaks ? pick(List.of("\n", "\r\n", "\r")) : newline;
+                doc.append(line).append(lastBreak);
             }
         }
-        if (random.nextBoolean()) doc.setLength(doc.length() - newline.length());
+        if (random.nextBoolean()) doc.setLength(doc.length() - lastBreak.length());
         return doc.toString();
     }
 

@@ -142,6 +142,17 @@ class FeaturesTest {
     }
 
     @Test
+    void formattingAlignsADefinitionBlock() throws Exception {
+        TextDocumentService s = open("fmt.plumb", "input b = 2 m \"width\"\ninput rho_air = 1.2 kg/m^3 \"air\"\n", null);
+        var edits = s.formatting(new org.eclipse.lsp4j.DocumentFormattingParams(doc(uri("fmt.plumb")),
+            new org.eclipse.lsp4j.FormattingOptions(4, true))).get(10, TimeUnit.SECONDS);
+        assertTrue(!edits.isEmpty());
+        String text = "input b = 2 m \"width\"\ninput rho_air = 1.2 kg/m^3 \"air\"\n";
+        String formatted = dev.plumb.ide.Formatter.apply(text, dev.plumb.ide.Formatter.format(text));
+        assertTrue(formatted.startsWith("input b       = 2 m"), formatted);
+    }
+
+    @Test
     void settingsChangeWhatIsShown() throws Exception {
         JsonObject options = new JsonObject();
         options.addProperty("significantFigures", 2);
