@@ -127,12 +127,15 @@ final class CorrelationCall {
             return;
         }
         double re = params.get(reName).si();
-        double reCrit = crit.value().si();
+        // Order: the document's own Re_crit, then the settings', then the library's.
+        Value critical = caller.fromLibrary("Re_crit") && caller.criticalReynolds() != null
+            ? Value.number(caller.criticalReynolds()) : crit.value();
+        double reCrit = critical.si();
         boolean laminar = def.regime().text().equals("laminar");
         if (laminar ? re <= reCrit : re >= reCrit) return;
         String name = def.name().text();
         String shownRe = Shown.value(params.get(reName), DisplayUnits.defaultFor(Dimension.NONE), 4);
-        String shownCrit = Shown.value(crit.value(), DisplayUnits.defaultFor(Dimension.NONE), 4);
+        String shownCrit = Shown.value(critical, DisplayUnits.defaultFor(Dimension.NONE), 4);
         String message = laminar
             ? name + " assumes a laminar boundary layer, but " + reName + " = " + shownRe + " is above the critical "
                 + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely transitional or turbulent there"

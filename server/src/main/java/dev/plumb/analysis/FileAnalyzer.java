@@ -57,6 +57,7 @@ final class FileAnalyzer {
         this.chain = chain;
         this.settings = settings;
         this.scope = new Scope(text, workspace.library());
+        this.scope.setCriticalReynolds(settings.criticalReynolds());
     }
 
     Analysis run() {

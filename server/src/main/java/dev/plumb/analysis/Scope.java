@@ -13,6 +13,8 @@ public final class Scope {
     private final String text;
     /** The standard library (or, while it loads, its files read so before); null for none. */
     private final Scope library;
+    /** A critical Reynolds number set for this analysis (settings), used where the library's would be. */
+    private Double criticalReynolds;
 
     Scope(String text) {
         this(text, null);
@@ -34,6 +36,14 @@ public final class Scope {
         if (own != null) return own;
         Binding fromLibrary = library == null ? null : library.lookup(name);
         return fromLibrary != null ? fromLibrary : Builtins.lookup(name);
+    }
+
+    void setCriticalReynolds(Double value) {
+        this.criticalReynolds = value;
+    }
+
+    Double criticalReynolds() {
+        return criticalReynolds;
     }
 
     /** True when the name comes from the standard library (not defined or imported here). */

@@ -5,9 +5,15 @@ package dev.plumb.analysis;
  *
  * @param significantFigures digits shown for values
  * @param equalityTolerance relative tolerance of {@code ==} and {@code !=} in checks
+ * @param criticalReynolds the critical Reynolds number for regime checks, replacing the library's
+ *     Re_crit where the document does not define its own; null keeps the library's
  */
-public record Settings(int significantFigures, double equalityTolerance) {
-    public static final Settings DEFAULT = new Settings(4, 1e-6);
+public record Settings(int significantFigures, double equalityTolerance, Double criticalReynolds) {
+    public static final Settings DEFAULT = new Settings(4, 1e-6, null);
+
+    public Settings(int significantFigures, double equalityTolerance) {
+        this(significantFigures, equalityTolerance, null);
+    }
 
     public Settings {
         if (significantFigures < 1 || significantFigures > 15) {

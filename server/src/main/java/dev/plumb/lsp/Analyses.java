@@ -103,7 +103,8 @@ final class Analyses {
     }
 
     private Analysis analyze(OpenDocument d) {
-        Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance());
+        Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance(),
+            settings.get().criticalReynolds());
         return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text());
     }
 

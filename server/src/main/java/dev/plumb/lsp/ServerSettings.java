@@ -5,11 +5,12 @@ import com.google.gson.JsonObject;
 
 /**
  * What the editor may set (initializationOptions or workspace/configuration section "plumb"):
- * significant figures, which value channels are on, the debounce delay, diagnostics on save only.
+ * significant figures, which value channels are on, the debounce delay, diagnostics on save only,
+ * and the critical Reynolds number of the regime checks.
  */
 record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean valueDiagnostics, int debounceMs,
-                      boolean onSaveOnly) {
-    static final ServerSettings DEFAULT = new ServerSettings(4, true, true, false, 100, false);
+                      boolean onSaveOnly, Double criticalReynolds) {
+    static final ServerSettings DEFAULT = new ServerSettings(4, true, true, false, 100, false, null);
 
     /** Reads known keys from a JSON object; unknown keys and wrong types keep the current value. */
     ServerSettings with(Object json) {
@@ -22,7 +23,18 @@ record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean 
             bool(o, "codeLens", codeLens),
             bool(o, "valueDiagnostics", valueDiagnostics),
             Math.max(0, Math.min(5000, integer(o, "debounceMs", debounceMs))),
-            bool(o, "diagnosticsOnSaveOnly", onSaveOnly));
+            bool(o, "diagnosticsOnSaveOnly", onSaveOnly),
+            positive(o, "criticalReynolds", criticalReynolds));
+    }
+
+    private static Double positive(JsonObject o, String key, Double fallback) {
+        JsonElement e = o.get(key);
+        try {
+            double v = e != null && e.isJsonPrimitive() ? e.getAsDouble() : Double.NaN;
+            return v > 0 && Double.isFinite(v) ? v : fallback;
+        } catch (NumberFormatException ex) {
+            return fallback;
+        }
     }
 
     private static int integer(JsonObject o, String key, int fallback) {

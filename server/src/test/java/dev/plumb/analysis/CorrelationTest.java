@@ -211,6 +211,17 @@ class CorrelationTest {
     }
 
     @Test
+    void aCriticalReynoldsNumberFromTheSettingsReplacesTheLibrarysOnly() {
+        String calc = "Cf = cf_plate_blasius_avg(4e5)\n";
+        Settings early = new Settings(4, 1e-6, 3e5);
+        Analysis a = new Workspace(new FileSources(), early).analyzeText(Fixture.FILE, calc);
+        assertEquals(List.of(Code.RANGE_REGIME), codes(a));
+        assertTrue(a.diagnostics().get(0).message().contains("Re_crit = 300000"));
+        Analysis own = new Workspace(new FileSources(), early).analyzeText(Fixture.FILE, "Re_crit = 6e5\n" + calc);
+        assertEquals(List.of(), codes(own), "the document's own Re_crit wins over the settings");
+    }
+
+    @Test
     void aDocumentsOwnReCritMovesTheRegimeThreshold() {
         String blasius = """
             correlation cf_lam(Re)
