@@ -31,7 +31,7 @@ record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean 
         JsonElement e = o.get(key);
         try {
             double v = e != null && e.isJsonPrimitive() ? e.getAsDouble() : Double.NaN;
-            return v > 0 && Double.isFinite(v) ? v : fallback;
+            return v > 0 && Double.isFinite(v) ? Double.valueOf(v) : fallback;
         } catch (NumberFormatException ex) {
             return fallback;
         }
