@@ -31,7 +31,12 @@ public final class LspBenchmark {
     public static void main(String[] args) throws Exception {
         JsonObject options = new JsonObject();
         options.addProperty("debounceMs", 0);
-        TestClient client = new TestClient(new ClientCapabilities(), options);
+        // A client with inlay hints, as current editors are: values are not sent as diagnostics.
+        org.eclipse.lsp4j.TextDocumentClientCapabilities td = new org.eclipse.lsp4j.TextDocumentClientCapabilities();
+        td.setInlayHint(new org.eclipse.lsp4j.InlayHintCapabilities());
+        ClientCapabilities caps = new ClientCapabilities();
+        caps.setTextDocument(td);
+        TestClient client = new TestClient(caps, options);
         Path dir = Files.createTempDirectory("plumb-lsp-bench");
         Files.createDirectories(dir.resolve(".git"));
         System.out.printf("Plumb language server benchmark — %d cores, %s %s%n", Runtime.getRuntime().availableProcessors(),
