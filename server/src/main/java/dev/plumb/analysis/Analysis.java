@@ -18,7 +18,22 @@ import java.util.Set;
  */
 public record Analysis(Path file, String text, LineMap lines, Map<String, String> headers, List<Row> rows,
                        List<Diagnostic> diagnostics, Scope scope, Map<Path, Set<String>> importedUses,
-                       List<Path> imports, List<Reference> references) {
+                       List<Path> imports, List<Reference> references, List<CallSite> calls) {
+
+    /**
+     * A call of a correlation or table column in this document: its arguments and where they sit
+     * in the range (for hover).
+     */
+    public record CallSite(dev.plumb.diagnostics.Span callee, String name, String arguments, String verdict) {
+    }
+
+    /** The correlation call whose name covers an offset, or null. */
+    public CallSite callAt(int offset) {
+        for (CallSite c : calls) {
+            if (offset >= c.callee().start() && offset <= c.callee().end()) return c;
+        }
+        return null;
+    }
 
     /** A name used in the document, where; what it stands for is {@code scope().lookup(name)}. */
     public record Reference(String name, dev.plumb.diagnostics.Span span) {
@@ -39,6 +54,7 @@ public record Analysis(Path file, String text, LineMap lines, Map<String, String
         importedUses = Map.copyOf(importedUses);
         imports = List.copyOf(imports);
         references = List.copyOf(references);
+        calls = List.copyOf(calls);
     }
 
     public long count(Severity severity) {

@@ -38,10 +38,18 @@ final class CorrelationCall {
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
         Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
         Set<String> names = params.keySet();
+        List<String> verdicts = new ArrayList<>();
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
-            if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), name + " is " + why + alternatives(b, args));
+            if (why != null) {
+                reporter.report(Code.RANGE_OUTSIDE, c.span(), name + " is " + why + alternatives(b, args));
+                verdicts.add("outside: " + why);
+            }
         }
+        String range = StdlibCatalog.validText(b);
+        reporter.call(new dev.plumb.analysis.Analysis.CallSite(c.callee().span(), name, arguments(def, args),
+            !verdicts.isEmpty() ? String.join("; ", verdicts) : range.isEmpty() ? "no stated range"
+                : "inside its range, " + range));
         regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
         for (Statement.Piece piece : def.pieces()) {
@@ -89,6 +97,10 @@ final class CorrelationCall {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
             if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " is " + why + alternatives(t, args));
         }
+        reporter.call(new dev.plumb.analysis.Analysis.CallSite(c.callee().span(), t.name(),
+            param + " = " + Shown.value(x, data.argumentUnit, 4), data.covers(x.si())
+                ? "inside the table, " + StdlibCatalog.validText(t) : "beyond the table's rows (extrapolated), "
+                + StdlibCatalog.validText(t)));
         double v = data.at(x.si());
         if (Double.isNaN(v)) {
             reporter.report(Code.MATH_DOMAIN, c.span(), t.name() + " interpolates log–log, so it needs a positive "

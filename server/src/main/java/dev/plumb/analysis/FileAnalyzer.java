@@ -87,7 +87,7 @@ final class FileAnalyzer {
         }
         reportUnusedInputs();
         return new Analysis(file, text, parsed.lines(), headers, rowsInOrder(parsed.statements()), sorted(reporter.all()),
-            scope, importedUses, imports, references);
+            scope, importedUses, imports, references, reporter.calls());
     }
 
     // ---- imports ---------------------------------------------------------------------

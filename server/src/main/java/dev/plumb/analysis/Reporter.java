@@ -29,13 +29,17 @@ final class Reporter {
      */
     private final boolean quietRanges;
 
+    /** Correlation calls written in the document itself (not inside functions), for hover. */
+    private final List<Analysis.CallSite> calls;
+
     Reporter() {
-        this(new LinkedHashSet<>(), null, null, null, null, false);
+        this(new LinkedHashSet<>(), new ArrayList<>(), null, null, null, null, false);
     }
 
-    private Reporter(Set<Diagnostic> diagnostics, Reporter caller, String function, Span callSpan, Path file,
-                     boolean quietRanges) {
+    private Reporter(Set<Diagnostic> diagnostics, List<Analysis.CallSite> calls, Reporter caller, String function,
+                     Span callSpan, Path file, boolean quietRanges) {
         this.diagnostics = diagnostics;
+        this.calls = calls;
         this.caller = caller;
         this.function = function;
         this.callSpan = callSpan;
@@ -71,12 +75,21 @@ final class Reporter {
 
     /** A reporter for evaluating the body of {@code function} called at {@code at}. */
     Reporter inCall(String function, Span at, Path definingFile) {
-        return new Reporter(diagnostics, this, function, at, definingFile, quietRanges);
+        return new Reporter(diagnostics, calls, this, function, at, definingFile, quietRanges);
     }
 
     /** As {@link #inCall}, for a correlation's formula: nested range warnings stay quiet. */
     Reporter inCorrelation(String correlation, Span at, Path definingFile) {
-        return new Reporter(diagnostics, this, correlation, at, definingFile, true);
+        return new Reporter(diagnostics, calls, this, correlation, at, definingFile, true);
+    }
+
+    /** Records a correlation call made at document level. */
+    void call(Analysis.CallSite site) {
+        if (caller == null && !quietRanges) calls.add(site);
+    }
+
+    List<Analysis.CallSite> calls() {
+        return new ArrayList<>(calls);
     }
 
     List<Diagnostic> all() {

@@ -23,6 +23,20 @@ public final class Fixes {
     private static final Pattern DID_YOU_MEAN = Pattern.compile("did you mean ((?:'[^']+'(?: or )?)+)\\?");
     private static final Pattern QUOTED = Pattern.compile("'([^']+)'");
     private static final Pattern WITHIN = Pattern.compile("within range: ([\\w, .]+)$");
+    private static final Pattern SUCH_AS = Pattern.compile("such as (\\S+)$");
+
+    /** Units an engineer converts to, by the SI unit of their dimension. */
+    private static final java.util.Map<String, List<String>> COMMON = java.util.Map.of(
+        "N", List.of("kN", "lbf"),
+        "Pa", List.of("kPa", "bar", "psi"),
+        "m", List.of("mm", "ft"),
+        "m/s", List.of("km/h", "knot", "mph"),
+        "W", List.of("kW", "hp"),
+        "N·m", List.of("kN*m"),
+        "kg/m³", List.of("g/L"),
+        "Pa·s", List.of("mPa*s", "cP"),
+        "m²", List.of("mm^2", "ft^2"),
+        "K", List.of("degC", "degF"));
 
     private Fixes() {
     }
@@ -38,6 +52,7 @@ public final class Fixes {
             if (r instanceof Row.ValueRow v && v.span().start() <= range.end() && range.start() <= v.span().end()) {
                 Action si = showInSi(a, v);
                 if (si != null) out.add(si);
+                out.addAll(conversions(a, v));
             }
         }
         return out;
@@ -59,6 +74,13 @@ public final class Fixes {
                 }
             }
         }
+        if (d.code() == Code.UNIT_MISMATCH && m.startsWith("`in ")) {
+            Matcher such = SUCH_AS.matcher(m);
+            if (such.find()) {
+                out.add(new Action("Show it in " + such.group(1), true,
+                    List.of(new Edit(d.span().start(), d.span().length(), such.group(1))), d));
+            }
+        }
         if (d.code() == Code.RANGE_OUTSIDE) {
             Matcher w = WITHIN.matcher(m);
             String call = a.text().substring(d.span().start(), d.span().end());
@@ -78,6 +100,24 @@ public final class Fixes {
         if (!v.value().known() || v.value().dimension().isDimensionless()) return null;
         String si = DisplayUnits.defaultFor(v.value().dimension()).symbol();
         if (v.shown().endsWith(" " + si)) return null;
+        return showIn(a, v, si, "Show " + v.name() + " in SI (" + si + ")");
+    }
+
+    /** "Convert to kN", "… lbf": the usual units of the value's dimension. */
+    private static List<Action> conversions(Analysis a, Row.ValueRow v) {
+        if (!v.value().known() || v.value().dimension().isDimensionless()) return List.of();
+        String si = DisplayUnits.defaultFor(v.value().dimension()).symbol();
+        List<Action> out = new ArrayList<>();
+        for (String unit : COMMON.getOrDefault(si, List.of())) {
+            Action act = showIn(a, v, unit, "Show " + v.name() + " in " + unit);
+            if (act != null) out.add(act);
+        }
+        return out;
+    }
+
+    /** Sets (or replaces) a definition's `in UNIT`. */
+    private static Action showIn(Analysis a, Row.ValueRow v, String unit, String title) {
+        String si = unit;
         String text = a.text();
         int end = v.span().end();
         String statement = text.substring(v.span().start(), end);
@@ -94,6 +134,6 @@ public final class Fixes {
             while (at > v.span().start() && Character.isWhitespace(text.charAt(at - 1))) at--;
             edit = new Edit(at, 0, " in " + si);
         }
-        return new Action("Show " + v.name() + " in SI (" + si + ")", false, List.of(edit), null);
+        return new Action(title, false, List.of(edit), null);
     }
 }

@@ -29,8 +29,10 @@ public final class HoverText {
         if (name == null) return null;
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
-        if (b instanceof Binding.CorrelationBinding c) return correlation(c);
-        if (b instanceof Binding.TableBinding t) return table(t);
+        Analysis.CallSite call = a.callAt(offset);
+        String here = call == null ? "" : "\n\nat this call: " + call.arguments() + " — " + call.verdict();
+        if (b instanceof Binding.CorrelationBinding c) return correlation(c) + here;
+        if (b instanceof Binding.TableBinding t) return table(t) + here;
         if (b instanceof Binding.FunctionBinding f) {
             return "**" + name + "**(" + String.join(", ", f.def().params().stream().map(p -> p.text()).toList())
                 + ") — function" + (f.def().note() == null ? "" : "\n\n" + f.def().note());

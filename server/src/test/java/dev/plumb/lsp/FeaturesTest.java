@@ -129,16 +129,19 @@ class FeaturesTest {
 
     @Test
     void quickFixesAndTheSiRefactor() throws Exception {
-        String text = "input Cd = 1.1\ninput A = 2 m^2\nF = Cd A\nL = 3 mtr\nC = cd_sphere_stokes(50)\nq = 2 kPa\n";
+        String text = "input Cd = 1.1\ninput A = 2 m^2\nF = Cd A\nL = 3 mtr\nC = cd_sphere_stokes(50)\nq = 2 kPa\n"
+            + "P = q * A in m\n";
         TextDocumentService s = open("x.plumb", text, null);
         String u = uri("x.plumb");
-        List<String> titles = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(2, 0), new Position(5, 9)),
+        List<String> titles = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(2, 0), new Position(6, 14)),
             new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS).stream()
             .map(e -> e.getRight().getTitle()).toList();
         assertTrue(titles.contains("Insert '*'"), titles.toString());
         assertTrue(titles.contains("Change to 'm'"), titles.toString());
         assertTrue(titles.stream().anyMatch(t -> t.startsWith("Use cd_sphere_sn")), titles.toString());
         assertTrue(titles.contains("Show q in SI (Pa)"), titles.toString());
+        assertTrue(titles.contains("Show q in psi"), titles.toString());
+        assertTrue(titles.contains("Show it in N"), titles.toString());
     }
 
     @Test

@@ -136,6 +136,22 @@ class LanguageServerTest {
     }
 
     @Test
+    void hoverOnACorrelationCallSaysWhereTheArgumentSits() throws Exception {
+        start(capabilities(true, true, null));
+        Cursor c = Cursor.of("a = cd_sph$0ere_sn(100)\nb = cd_sphere_sn(5000)\n");
+        String uri = uri("hc.plumb", c.text());
+        client.open(uri, c.text());
+        var service = client.remote.getTextDocumentService();
+        String inside = service.hover(new HoverParams(new TextDocumentIdentifier(uri), c.at())).get(10, TimeUnit.SECONDS)
+            .getContents().getRight().getValue();
+        assertTrue(inside.contains("source:"), inside);
+        assertTrue(inside.contains("at this call: Re = 100 — inside its range"), inside);
+        String outside = service.hover(new HoverParams(new TextDocumentIdentifier(uri), new Position(1, 8)))
+            .get(10, TimeUnit.SECONDS).getContents().getRight().getValue();
+        assertTrue(outside.contains("at this call: Re = 5000 — outside: valid for"), outside);
+    }
+
+    @Test
     void goToDefinitionInTheFileInAUsedFileAndInTheLibrary() throws Exception {
         start(capabilities(true, true, null));
         uri("site.plumb", "input V = 30 m/s\n");
