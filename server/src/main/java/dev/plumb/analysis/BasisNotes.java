@@ -18,8 +18,15 @@ record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure)
         this(area, coefficient, shape, true);
     }
 
-    /** @param tag frontal, wetted or planform, or null; @param label how the message names it */
-    record Area(String tag, Shape.Kind kind, String label) {
+    /**
+     * @param tag frontal, wetted or planform, or null
+     * @param label how the message names it
+     * @param frontal the frontal area's formula in the same names (d * L for π·d·L), or null
+     */
+    record Area(String tag, Shape.Kind kind, String label, String frontal) {
+        Area(String tag, Shape.Kind kind, String label) {
+            this(tag, kind, label, null);
+        }
     }
 
     /** @param name the value's name where it is used; @param origin the correlation it came from */

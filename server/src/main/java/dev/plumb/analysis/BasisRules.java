@@ -39,7 +39,8 @@ final class BasisRules {
         BasisNotes n = v.notes() == null ? BasisNotes.NONE : v.notes();
         Shape shape = n.shape();
         boolean pure = n.pure();
-        if (shape == null && v.dimension().equals(Dimension.LENGTH)) {
+        if (v.dimension().equals(Dimension.LENGTH) && (shape == null || plainLength(shape))) {
+            // A named plain length is a symbol of shapes; a length built as π·d keeps its shape.
             shape = Shape.length(name);
             pure = true;
         } else if (shape == null && v.dimension().isDimensionless() && n.coefficient() == null) {
@@ -50,10 +51,15 @@ final class BasisRules {
             shape = Shape.number(1);
             pure = false;
         }
-        BasisNotes.Area area = n.area() == null ? null : new BasisNotes.Area(n.area().tag(), n.area().kind(), name);
+        BasisNotes.Area area = n.area() == null ? null
+            : new BasisNotes.Area(n.area().tag(), n.area().kind(), name, n.area().frontal());
         BasisNotes.Coefficient c = n.coefficient() == null ? null
             : new BasisNotes.Coefficient(n.coefficient().basis(), name, n.coefficient().origin());
         return new BasisNotes(area, c, shape, pure);
+    }
+
+    private static boolean plainLength(Shape s) {
+        return s.factor() == 1 && s.lengths().size() == 1 && s.lengths().values().iterator().next() == 1;
     }
 
     /** The result of a correlation or table with a basis: a coefficient, or a tagged area. */
@@ -117,7 +123,9 @@ final class BasisRules {
         if (rn.area() != null && ln.area() == null && l.dimensionless()) {
             return new BasisNotes.Area(rn.area().tag(), kind, Shown.source(text, b.span()));
         }
-        if (ln.area() == null && rn.area() == null) return new BasisNotes.Area(null, kind, Shown.source(text, b.span()));
+        if (ln.area() == null && rn.area() == null) {
+            return new BasisNotes.Area(null, kind, Shown.source(text, b.span()), shape == null ? null : shape.frontalFormula());
+        }
         return null;
     }
 
@@ -174,8 +182,9 @@ final class BasisRules {
         Shape.Kind k = a.kind();
         boolean wettedShape = k == Shape.Kind.LATERAL_SURFACE || k == Shape.Kind.SPHERE_SURFACE || k == Shape.Kind.BOTH_FACES;
         if (!c.basis().equals("wetted") && wettedShape) {
+            String here = a.frontal() == null ? "" : " (here `" + a.frontal() + "`)";
             warn(b, c.label() + " is referenced to " + c.basis() + " area, but " + area + " has the shape of " + k.words
-                + ", a wetted area: " + frontalFix(k), Severity.WARNING);
+                + ", a wetted area: " + frontalFix(k) + here, Severity.WARNING);
         } else if (c.basis().equals("wetted") && k == Shape.Kind.CIRCLE) {
             warn(b, c.label() + " is referenced to wetted area, but " + area + " has the shape of " + k.words
                 + ", a frontal area: use the surface the flow runs over", Severity.WARNING);

@@ -69,6 +69,19 @@ record Shape(double factor, Map<String, Integer> lengths) {
         return null;
     }
 
+    /** The frontal area of the same body, in the same names: d * L for π·d·L, pi * d^2 / 4 for π·d². */
+    String frontalFormula() {
+        Kind k = kind();
+        if (k == null || lengths.keySet().stream().anyMatch(n -> n.startsWith("#"))) return null;
+        java.util.List<String> names = new java.util.ArrayList<>(lengths.keySet());
+        names.sort(String.CASE_INSENSITIVE_ORDER);
+        return switch (k) {
+            case LATERAL_SURFACE, BOTH_FACES -> names.get(0) + " * " + names.get(1);
+            case SPHERE_SURFACE -> "pi * " + names.get(0) + "^2 / 4";
+            default -> null;
+        };
+    }
+
     private static boolean near(double a, double b) {
         return Math.abs(a - b) <= 1e-9 * Math.abs(b);
     }

@@ -24,6 +24,9 @@ public final class Fixes {
     private static final Pattern QUOTED = Pattern.compile("'([^']+)'");
     private static final Pattern WITHIN = Pattern.compile("within range: ([\\w, .]+)$");
     private static final Pattern SUCH_AS = Pattern.compile("such as (\\S+)$");
+    private static final Pattern AREA_FIX = Pattern.compile("but ([\\p{L}_][\\p{L}\\p{Nd}_]*) has the shape .*\\(here `([^`]+)`\\)");
+    private static final Pattern EXPRESSION = Pattern.compile("=\\s*(.*?)(\\s+in\\s+\\S+|\\s+as\\s+\\S+|\\s+\"|\\s*$)",
+        Pattern.DOTALL);
 
     /** Units an engineer converts to, by the SI unit of their dimension. */
     private static final java.util.Map<String, List<String>> COMMON = java.util.Map.of(
@@ -81,6 +84,14 @@ public final class Fixes {
                     List.of(new Edit(d.span().start(), d.span().length(), such.group(1))), d));
             }
         }
+        if (d.code() == Code.BASIS_AREA) {
+            Matcher fix = AREA_FIX.matcher(m);
+            if (fix.find()) {
+                Edit e = replaceFormula(a, fix.group(1), fix.group(2));
+                if (e != null) out.add(new Action("Use the frontal area " + fix.group(2) + " for " + fix.group(1), true,
+                    List.of(e), d));
+            }
+        }
         if (d.code() == Code.RANGE_OUTSIDE) {
             Matcher w = WITHIN.matcher(m);
             String call = a.text().substring(d.span().start(), d.span().end());
@@ -93,6 +104,18 @@ public final class Fixes {
             }
         }
         return out;
+    }
+
+    /** Replaces the formula of a definition of this document, keeping its `in`, `as` and note. */
+    private static Edit replaceFormula(Analysis a, String name, String formula) {
+        for (Row r : a.rows()) {
+            if (!(r instanceof Row.ValueRow v) || !v.name().equals(name) || v.input()) continue;
+            String statement = a.text().substring(v.span().start(), v.span().end());
+            Matcher e = EXPRESSION.matcher(statement);
+            if (!e.find()) return null;
+            return new Edit(v.span().start() + e.start(1), e.end(1) - e.start(1), formula);
+        }
+        return null;
     }
 
     /** "Show in SI": set the definition's `in` unit to the SI unit of its dimension. */

@@ -156,6 +156,22 @@ class FeaturesTest {
     }
 
     @Test
+    void aLateralSurfaceIsSwappedForTheProjectedArea() throws Exception {
+        String text = "input d = 0.3 m\ninput L = 2 m\nq = 500 Pa\nCd = cd_cylinder(1e5)\nA_side = pi * d * L   \"tube\"\n"
+            + "F = Cd * A_side * q\n";
+        TextDocumentService s = open("area.plumb", text, null);
+        String u = uri("area.plumb");
+        var actions = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(5, 0), new Position(5, 18)),
+            new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS);
+        var swap = actions.stream().map(e -> e.getRight()).filter(a -> a.getTitle().startsWith("Use the frontal area"))
+            .findFirst().orElseThrow();
+        assertEquals("Use the frontal area d * L for A_side", swap.getTitle());
+        var edit = swap.getEdit().getChanges().get(u).get(0);
+        assertEquals("d * L", edit.getNewText());
+        assertEquals(new Range(new Position(4, 9), new Position(4, 19)), edit.getRange());
+    }
+
+    @Test
     void settingsChangeWhatIsShown() throws Exception {
         JsonObject options = new JsonObject();
         options.addProperty("significantFigures", 2);
