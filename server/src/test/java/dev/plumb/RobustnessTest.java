@@ -66,6 +66,13 @@ class RobustnessTest {
     }
 
     @Test
+    void anAnalysisNobodyWantsStopsEarly() {
+        Workspace w = new Workspace(new FileSources(), Settings.DEFAULT);
+        assertEquals(null, w.analyzeText(FILE, GeneratedCalc.of(2_000), () -> true));
+        assertNotNull(w.analyzeText(FILE, GeneratedCalc.of(200), () -> false));
+    }
+
+    @Test
     void randomTextNeverThrows() {
         String[] pieces = {"x", "y", " ", "=", "1", "2.5", "e3", "m", "/s", "^", "(", ")", "*", "+", "-", "\n", "    ",
             "in", "as", "check", "<", "<=", "input", "\"", "#", "°C", "µ", "😀", "kg/m³", ",", "f(", "use", "..", "\t",

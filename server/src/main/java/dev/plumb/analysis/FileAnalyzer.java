@@ -43,10 +43,11 @@ final class FileAnalyzer {
     private final List<Path> imports = new ArrayList<>();
     /** Own statements that define a name, by name (the first definition wins). */
     private final Map<String, Statement> own = new LinkedHashMap<>();
-    private final Set<Statement> duplicates = new HashSet<>();
+    // Statements are records whose hash walks the whole syntax tree: key them by identity.
+    private final Set<Statement> duplicates = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
     private final Set<String> used = new HashSet<>();
     private final List<Analysis.Reference> references = new ArrayList<>();
-    private final Map<Statement, Row> rows = new HashMap<>();
+    private final Map<Statement, Row> rows = new java.util.IdentityHashMap<>();
     /** For each `find`, the definitions re-evaluated with each trial value, in order. */
     private final Map<String, List<Statement.Definition>> dependents = new HashMap<>();
 
@@ -80,7 +81,10 @@ final class FileAnalyzer {
             dependents.put(entry.getKey(), inOrder);
         }
         Set<String> inCycle = reportCycles(order.cycles());
-        for (String name : order.order()) evaluate(own.get(name), inCycle.contains(name));
+        for (String name : order.order()) {
+            workspace.checkSuperseded();
+            evaluate(own.get(name), inCycle.contains(name));
+        }
         for (Statement s : parsed.statements()) {
             if (duplicates.contains(s)) evaluate(s, false);
             if (s instanceof Statement.Check c) rows.put(c, new CheckRunner(scope, reporter, text, settings).run(c));

@@ -56,6 +56,33 @@ public final class Workspace {
         return guarded(file.toAbsolutePath().normalize(), text, List.of());
     }
 
+    /**
+     * As {@link #analyzeText(Path, String)}, giving up as soon as {@code superseded} says the
+     * result is no longer wanted (a newer edit arrived): then null.
+     */
+    public Analysis analyzeText(Path file, String text, java.util.function.BooleanSupplier superseded) {
+        this.superseded = superseded;
+        try {
+            return analyzeText(file, text);
+        } catch (Superseded e) {
+            return null;
+        }
+    }
+
+    /** Asked between statements; a no-op unless a caller gave a check. */
+    private volatile java.util.function.BooleanSupplier superseded = () -> false;
+
+    void checkSuperseded() {
+        if (superseded.getAsBoolean()) throw new Superseded();
+    }
+
+    /** Thrown to abandon an analysis nobody wants any more; never escapes this class. */
+    static final class Superseded extends RuntimeException {
+        Superseded() {
+            super(null, null, false, false);
+        }
+    }
+
     Imported analyzeImport(Path file, List<Path> chain) {
         Imported cached = cache.get(file);
         if (cached != null) return cached;
@@ -103,6 +130,8 @@ public final class Workspace {
         return DeepStack.call(() -> {
             try {
                 return new FileAnalyzer(this, file, text, chain, settings).run();
+            } catch (Superseded e) {
+                throw e;
             } catch (StackOverflowError e) {
                 return failure(file, text, Code.SYNTAX_NESTING,
                     "this document nests expressions too deeply to evaluate: give inner parts names of their own", 0);

@@ -85,8 +85,11 @@ final class Analyses {
         OpenDocument d = documents.get(uri);
         if (d == null) return;
         try {
-            Analysis a = analyze(d);
-            if (!store(d, a)) return;
+            Analysis a = analyze(d, () -> {
+                OpenDocument now = documents.get(uri);
+                return now == null || now.version() != d.version();
+            });
+            if (a == null || !store(d, a)) return;
             publisher.accept(new OpenDocumentResult(d, a));
             for (String user : usersOf(d.path(), uri)) schedule(user);
         } catch (RuntimeException | StackOverflowError e) {
@@ -103,9 +106,14 @@ final class Analyses {
     }
 
     private Analysis analyze(OpenDocument d) {
+        return analyze(d, () -> false);
+    }
+
+    /** The engine on a document's text; null when a newer edit made the run pointless on the way. */
+    private Analysis analyze(OpenDocument d, java.util.function.BooleanSupplier superseded) {
         Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance(),
             settings.get().criticalReynolds());
-        return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text());
+        return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text(), superseded);
     }
 
     /** Open documents that use this path, directly or through other files. */
