@@ -44,6 +44,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     private boolean shutdown;
     private volatile boolean pullsConfiguration;
     private volatile boolean refreshLenses;
+    private volatile boolean watchesFiles;
     private volatile boolean refreshHints;
     private Path libraryCopy;
 
@@ -60,6 +61,8 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
             && Boolean.TRUE.equals(caps.getWorkspace().getConfiguration());
         String clientName = params.getClientInfo() == null ? "" : params.getClientInfo().getName();
         settings = channelsFor(caps, clientName).with(params.getInitializationOptions());
+        watchesFiles = caps != null && caps.getWorkspace() != null && caps.getWorkspace().getDidChangeWatchedFiles() != null
+            && Boolean.TRUE.equals(caps.getWorkspace().getDidChangeWatchedFiles().getDynamicRegistration());
         refreshLenses = caps != null && caps.getWorkspace() != null && caps.getWorkspace().getCodeLens() != null
             && Boolean.TRUE.equals(caps.getWorkspace().getCodeLens().getRefreshSupport());
         refreshHints = caps != null && caps.getWorkspace() != null && caps.getWorkspace().getInlayHint() != null
@@ -118,7 +121,16 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     @Override
     public void initialized(org.eclipse.lsp4j.InitializedParams params) {
         LanguageClient c = client;
-        if (c == null || !pullsConfiguration) return;
+        if (c == null) return;
+        if (watchesFiles) {
+            // Calc files changed outside the editor (git checkout, another tool) re-run the open documents.
+            var watcher = new org.eclipse.lsp4j.FileSystemWatcher(
+                org.eclipse.lsp4j.jsonrpc.messages.Either.forLeft("**/*.plumb"));
+            var options = new org.eclipse.lsp4j.DidChangeWatchedFilesRegistrationOptions(List.of(watcher));
+            c.registerCapability(new org.eclipse.lsp4j.RegistrationParams(List.of(new org.eclipse.lsp4j.Registration(
+                "plumb-watch", "workspace/didChangeWatchedFiles", options)))).exceptionally(e -> null);
+        }
+        if (!pullsConfiguration) return;
         org.eclipse.lsp4j.ConfigurationItem item = new org.eclipse.lsp4j.ConfigurationItem();
         item.setSection("plumb");
         c.configuration(new org.eclipse.lsp4j.ConfigurationParams(List.of(item))).thenAccept(values -> {

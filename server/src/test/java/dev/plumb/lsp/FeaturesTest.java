@@ -108,6 +108,9 @@ class FeaturesTest {
         ExecutionException clash = assertThrows(ExecutionException.class,
             () -> s.rename(new RenameParams(doc(u), new Position(2, 8), "A")).get(10, TimeUnit.SECONDS));
         assertTrue(clash.getCause().getMessage().contains("already defined"), clash.getCause().getMessage());
+        // The failed request was answered with an error; the server carries on.
+        assertEquals(4, s.references(new ReferenceParams(doc(u), new Position(1, 4), new ReferenceContext(true)))
+            .get(10, TimeUnit.SECONDS).size());
     }
 
     @Test
@@ -169,6 +172,37 @@ class FeaturesTest {
         var edit = swap.getEdit().getChanges().get(u).get(0);
         assertEquals("d * L", edit.getNewText());
         assertEquals(new Range(new Position(4, 9), new Position(4, 19)), edit.getRange());
+    }
+
+    @Test
+    void aUsedFileChangedOnDiskIsPickedUp() throws Exception {
+        Files.createDirectories(dir.resolve(".git"));
+        Files.writeString(dir.resolve("site.plumb"), "input V = 30 m/s\n");
+        open("w.plumb", "use \"site.plumb\"\nx = V + 1 m/s\n", null);
+        String u = uri("w.plumb");
+        assertEquals(List.of(), client.diagnostics(u, 1).getDiagnostics());
+        Files.writeString(dir.resolve("site.plumb"), "input V = 30 s\n");
+        client.remote.getWorkspaceService().didChangeWatchedFiles(new org.eclipse.lsp4j.DidChangeWatchedFilesParams(
+            List.of(new org.eclipse.lsp4j.FileEvent(uri("site.plumb"), org.eclipse.lsp4j.FileChangeType.Changed))));
+        var after = client.diagnostics(u, 1).getDiagnostics();
+        assertEquals("unit.mismatch", after.get(0).getCode().getLeft());
+    }
+
+    @Test
+    void diagnosticsOnSaveOnly() throws Exception {
+        JsonObject options = new JsonObject();
+        options.addProperty("diagnosticsOnSaveOnly", true);
+        open("save.plumb", "x = 1 m\n", options);
+        String u = uri("save.plumb");
+        client.diagnostics(u, 1);
+        client.remote.getTextDocumentService().didChange(new org.eclipse.lsp4j.DidChangeTextDocumentParams(
+            new org.eclipse.lsp4j.VersionedTextDocumentIdentifier(u, 2),
+            List.of(new org.eclipse.lsp4j.TextDocumentContentChangeEvent("x = 1 m + 1 s\n"))));
+        Thread.sleep(400);
+        assertTrue(client.published.stream().noneMatch(p -> p.getVersion() != null && p.getVersion() == 2),
+            "nothing is published while typing");
+        client.remote.getTextDocumentService().didSave(new org.eclipse.lsp4j.DidSaveTextDocumentParams(doc(u)));
+        assertEquals("unit.mismatch", client.diagnostics(u, 2).getDiagnostics().get(0).getCode().getLeft());
     }
 
     @Test
