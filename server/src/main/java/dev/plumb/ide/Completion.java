@@ -13,7 +13,7 @@ import java.util.TreeSet;
  * (with their values), functions and correlations (with parameter snippets) and statement words.
  */
 public final class Completion {
-    private static final int LIMIT = 200;
+    public static final int LIMIT = 200;
     private static final List<String> STATEMENT_WORDS = List.of("input", "check", "section", "use", "find", "correlation",
         "table", "title", "author", "reviewer", "revision");
 
@@ -65,8 +65,11 @@ public final class Completion {
 
     private static List<CompletionEntry> units(String prefix) {
         List<CompletionEntry> out = new ArrayList<>();
-        for (String symbol : new TreeSet<>(UnitRegistry.standard().symbols())) {
-            if (symbol.startsWith(prefix) && !symbol.isEmpty()) {
+        // Short spellings first (m, s, kg, kN …), and one of each look-alike (the ohm sign U+2126 is skipped).
+        List<String> symbols = new ArrayList<>(UnitRegistry.standard().symbols());
+        symbols.sort(java.util.Comparator.comparingInt(String::length).thenComparing(String.CASE_INSENSITIVE_ORDER));
+        for (String symbol : symbols) {
+            if (symbol.startsWith(prefix) && !symbol.isEmpty() && symbol.indexOf('\u2126') < 0) {
                 out.add(new CompletionEntry(symbol, CompletionEntry.Kind.UNIT, "unit", symbol, false));
                 if (out.size() >= LIMIT) break;
             }

@@ -48,9 +48,11 @@ final class Features {
     private Features() {
     }
 
-    static List<CompletionItem> completion(Analysis a, int offset) {
+    /** The items, marked incomplete when cut at the limit so the editor asks again as the user types. */
+    static org.eclipse.lsp4j.CompletionList completion(Analysis a, int offset) {
         List<CompletionItem> out = new ArrayList<>();
-        for (CompletionEntry e : Completion.at(a, offset)) {
+        List<CompletionEntry> entries = Completion.at(a, offset);
+        for (CompletionEntry e : entries) {
             CompletionItem item = new CompletionItem(e.label());
             item.setKind(kind(e.kind()));
             item.setDetail(e.detail());
@@ -58,7 +60,7 @@ final class Features {
             item.setInsertTextFormat(e.snippet() ? InsertTextFormat.Snippet : InsertTextFormat.PlainText);
             out.add(item);
         }
-        return out;
+        return new org.eclipse.lsp4j.CompletionList(entries.size() >= Completion.LIMIT, out);
     }
 
     private static CompletionItemKind kind(CompletionEntry.Kind k) {
@@ -83,12 +85,30 @@ final class Features {
         return new SignatureHelp(List.of(info), 0, s.active());
     }
 
-    static List<Location> references(Analysis a, int offset, String uri, Positions.Encoding enc) {
+    static List<Location> references(Analysis a, int offset, String uri, Positions.Encoding enc, boolean declaration) {
         String name = Occurrences.nameAt(a, offset);
         if (name == null) return List.of();
+        var b = a.scope().lookup(name);
         List<Location> out = new ArrayList<>();
-        for (Span s : Occurrences.of(a, name)) out.add(new Location(uri, range(a, s, enc)));
+        for (Span s : Occurrences.of(a, name)) {
+            boolean isDeclaration = b != null && a.file().equals(b.file()) && b.span().equals(s);
+            if (declaration || !isDeclaration) out.add(new Location(uri, range(a, s, enc)));
+        }
         return out;
+    }
+
+    /** The name to rename at the cursor, or null (nothing renameable there). */
+    static org.eclipse.lsp4j.jsonrpc.messages.Either3<Range, org.eclipse.lsp4j.PrepareRenameResult,
+        org.eclipse.lsp4j.PrepareRenameDefaultBehavior> prepareRename(Analysis a, int offset, Positions.Encoding enc) {
+        String name = Occurrences.nameAt(a, offset);
+        if (name == null) return null;
+        for (Span s : Occurrences.of(a, name)) {
+            if (s.start() <= offset && offset <= s.end()) {
+                return org.eclipse.lsp4j.jsonrpc.messages.Either3.forSecond(
+                    new org.eclipse.lsp4j.PrepareRenameResult(range(a, s, enc), name));
+            }
+        }
+        return null;
     }
 
     static List<DocumentHighlight> highlights(Analysis a, int offset, Positions.Encoding enc) {
@@ -139,7 +159,10 @@ final class Features {
     }
 
     static List<Either<Command, CodeAction>> codeActions(Analysis a, Range range, String uri, Positions.Encoding enc) {
-        Span span = new Span(Positions.offset(a.text(), range.getStart(), enc), Positions.offset(a.text(), range.getEnd(), enc));
+        // Whole lines: editors ask with the cursor anywhere on the line of a finding.
+        Range lines = new Range(new Position(range.getStart().getLine(), 0), new Position(range.getEnd().getLine() + 1, 0));
+        Span span = new Span(Positions.offset(a.text(), lines.getStart(), enc), Math.max(0,
+            Positions.offset(a.text(), lines.getEnd(), enc) - 1));
         List<Either<Command, CodeAction>> out = new ArrayList<>();
         for (Fixes.Action f : Fixes.at(a, span)) {
             CodeAction action = new CodeAction(f.title());

@@ -80,7 +80,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         c.setSignatureHelpProvider(new org.eclipse.lsp4j.SignatureHelpOptions(List.of("(", ",")));
         c.setReferencesProvider(true);
         c.setDocumentHighlightProvider(true);
-        c.setRenameProvider(true);
+        c.setRenameProvider(new org.eclipse.lsp4j.RenameOptions(true));
         c.setFoldingRangeProvider(true);
         c.setWorkspaceSymbolProvider(true);
         c.setCodeActionProvider(true);

@@ -142,7 +142,7 @@ final class PlumbTextDocumentService implements TextDocumentService {
 
     @Override
     public CompletableFuture<Either<List<CompletionItem>, CompletionList>> completion(CompletionParams params) {
-        return with(params.getTextDocument().getUri(), a -> Either.forLeft(Features.completion(a,
+        return with(params.getTextDocument().getUri(), a -> Either.forRight(Features.completion(a,
             Positions.offset(a.text(), params.getPosition(), enc()))));
     }
 
@@ -154,8 +154,9 @@ final class PlumbTextDocumentService implements TextDocumentService {
 
     @Override
     public CompletableFuture<List<? extends Location>> references(ReferenceParams params) {
+        boolean declaration = params.getContext() == null || params.getContext().isIncludeDeclaration();
         return with(params.getTextDocument().getUri(), a -> Features.references(a,
-            Positions.offset(a.text(), params.getPosition(), enc()), params.getTextDocument().getUri(), enc()));
+            Positions.offset(a.text(), params.getPosition(), enc()), params.getTextDocument().getUri(), enc(), declaration));
     }
 
     @Override
@@ -169,6 +170,14 @@ final class PlumbTextDocumentService implements TextDocumentService {
         return with(params.getTextDocument().getUri(), a -> Features.rename(a,
             Positions.offset(a.text(), params.getPosition(), enc()), params.getNewName(), params.getTextDocument().getUri(),
             enc()));
+    }
+
+    @Override
+    public CompletableFuture<org.eclipse.lsp4j.jsonrpc.messages.Either3<org.eclipse.lsp4j.Range,
+        org.eclipse.lsp4j.PrepareRenameResult, org.eclipse.lsp4j.PrepareRenameDefaultBehavior>> prepareRename(
+        org.eclipse.lsp4j.PrepareRenameParams params) {
+        return with(params.getTextDocument().getUri(), a -> Features.prepareRename(a,
+            Positions.offset(a.text(), params.getPosition(), enc()), enc()));
     }
 
     @Override

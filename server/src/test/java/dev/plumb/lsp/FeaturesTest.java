@@ -73,10 +73,10 @@ class FeaturesTest {
     void completionOffersUnitsAfterANumberAndNamesWithValuesElsewhere() throws Exception {
         TextDocumentService s = open("c.plumb", "input rho = 1.2 kg/m^3\ninput V = 12 k\nq = 0.5 * r\n", null);
         List<CompletionItem> units = s.completion(new CompletionParams(doc(uri("c.plumb")), new Position(1, 14)))
-            .get(10, TimeUnit.SECONDS).getLeft();
+            .get(10, TimeUnit.SECONDS).getRight().getItems();
         assertTrue(units.stream().anyMatch(i -> i.getLabel().equals("kN")), "units after a number");
         List<CompletionItem> names = s.completion(new CompletionParams(doc(uri("c.plumb")), new Position(2, 11)))
-            .get(10, TimeUnit.SECONDS).getLeft();
+            .get(10, TimeUnit.SECONDS).getRight().getItems();
         CompletionItem rho = names.stream().filter(i -> i.getLabel().equals("rho")).findFirst().orElseThrow();
         assertEquals("1.2 kg/m³", rho.getDetail());
         CompletionItem reynolds = names.stream().filter(i -> i.getLabel().equals("reynolds")).findFirst().orElseThrow();
@@ -101,6 +101,12 @@ class FeaturesTest {
         var refs = s.references(new ReferenceParams(doc(u), new Position(1, 4), new ReferenceContext(true)))
             .get(10, TimeUnit.SECONDS);
         assertEquals(4, refs.size(), "the definition and three uses");
+        var usesOnly = s.references(new ReferenceParams(doc(u), new Position(1, 4), new ReferenceContext(false)))
+            .get(10, TimeUnit.SECONDS);
+        assertEquals(3, usesOnly.size(), "without the declaration");
+        var prepared = s.prepareRename(new org.eclipse.lsp4j.PrepareRenameParams(doc(u), new Position(2, 8)))
+            .get(10, TimeUnit.SECONDS);
+        assertEquals("b", prepared.getSecond().getPlaceholder());
         var highlights = s.documentHighlight(new DocumentHighlightParams(doc(u), new Position(0, 6))).get(10, TimeUnit.SECONDS);
         assertEquals(4, highlights.size());
         var edit = s.rename(new RenameParams(doc(u), new Position(2, 8), "width")).get(10, TimeUnit.SECONDS);
