@@ -110,10 +110,10 @@ function M.attach(bufnr)
       capabilities = M.capabilities(),
       init_options = M.config.init_options,
       handlers = handlers(),
-      -- A lens only shows a value; its command id is empty. Neovim's codelens.run() clears the
-      -- lens and warns about an unknown command unless the client handles the id: show it again.
+      -- A lens only shows a value (command plumb.showValue). Neovim's codelens.run() clears the
+      -- lens before running it: handle the command here and show the lenses again.
       commands = {
-        [''] = function(_, ctx)
+        ['plumb.showValue'] = function(_, ctx)
           M.refresh_code_lens(ctx.bufnr)
         end,
       },

@@ -16,12 +16,14 @@ public final class Outline {
         List<Symbol> top = new ArrayList<>();
         String section = null;
         Span sectionSpan = null;
+        Span heading = null;
         List<Symbol> inSection = new ArrayList<>();
         for (Row r : a.rows()) {
             if (r instanceof Row.SectionRow s) {
-                if (section != null) top.add(section(section, sectionSpan, inSection));
+                if (section != null) top.add(section(section, sectionSpan, heading, inSection));
                 section = s.title();
                 sectionSpan = s.span();
+                heading = s.span();
                 inSection = new ArrayList<>();
                 continue;
             }
@@ -34,12 +36,12 @@ public final class Outline {
                 top.add(sym);
             }
         }
-        if (section != null) top.add(section(section, sectionSpan, inSection));
+        if (section != null) top.add(section(section, sectionSpan, heading, inSection));
         return top;
     }
 
-    private static Symbol section(String title, Span span, List<Symbol> children) {
-        return new Symbol(title, "section", "", span, new Span(span.start(), span.start()), children);
+    private static Symbol section(String title, Span span, Span heading, List<Symbol> children) {
+        return new Symbol(title, "section", "", span, heading, children);
     }
 
     private static Symbol symbol(Analysis a, Row r) {
