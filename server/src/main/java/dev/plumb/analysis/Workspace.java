@@ -35,6 +35,14 @@ public final class Workspace {
         return library;
     }
 
+    /**
+     * Threads with room for deep expressions: an engine caller that runs analyses on its own pool
+     * should make the pool's threads with this, so each analysis need not hop to a fresh thread.
+     */
+    public static java.util.concurrent.ThreadFactory threadFactory() {
+        return DeepStack.FACTORY;
+    }
+
     Sources sources() {
         return sources;
     }

@@ -34,7 +34,7 @@ final class Analyses {
     private final Consumer<OpenDocumentResult> publisher;
     private final ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(daemon("plumb-debounce"));
     private final ExecutorService workers = Executors.newFixedThreadPool(
-        Math.max(1, Runtime.getRuntime().availableProcessors()), daemon("plumb-analysis"));
+        Math.max(1, Runtime.getRuntime().availableProcessors()), Workspace.threadFactory());
     private final Map<String, Result> latest = new ConcurrentHashMap<>();
     private final Map<String, ScheduledFuture<?>> pending = new ConcurrentHashMap<>();
 
