@@ -22,6 +22,9 @@ record Shape(double factor, Map<String, Integer> lengths) {
     }
 
     Shape times(Shape o, int sign) {
+        // Most products scale by a plain number: no lengths to merge.
+        if (o.lengths.isEmpty()) return new Shape(sign > 0 ? factor * o.factor : factor / o.factor, lengths);
+        if (lengths.isEmpty() && sign > 0) return new Shape(factor * o.factor, o.lengths);
         Map<String, Integer> merged = new TreeMap<>(lengths);
         o.lengths.forEach((k, e) -> merged.merge(k, sign * e, Integer::sum));
         merged.values().removeIf(e -> e == 0);

@@ -32,9 +32,11 @@ final class Shown {
     }
 
     /** The source text of a span, shortened for messages. */
+    private static final java.util.regex.Pattern BLANKS = java.util.regex.Pattern.compile("\\s+");
+
     static String source(String text, dev.plumb.diagnostics.Span span) {
-        String s = text.substring(Math.max(0, span.start()), Math.min(text.length(), span.end()))
-            .replaceAll("\\s+", " ");
+        String s = BLANKS.matcher(text.substring(Math.max(0, span.start()), Math.min(text.length(), span.end())))
+            .replaceAll(" ");
         return s.length() > 40 ? s.substring(0, 37) + "…" : s;
     }
 }
