@@ -62,8 +62,20 @@ public final class Stdlib {
         return loadNanos;
     }
 
-    /** Every correlation and table column of the library, by name, in library order. */
+    /** Every correlation and table column of the library, by name, in library order (built once). */
     public Map<String, Binding> entries() {
+        Map<String, Binding> e = entries;
+        if (e == null) {
+            e = java.util.Collections.unmodifiableMap(collectEntries());
+            entries = e;
+        }
+        return e;
+    }
+
+    /** Read once the library has loaded; every out-of-range call asks for a family's members. */
+    private volatile Map<String, Binding> entries;
+
+    private Map<String, Binding> collectEntries() {
         Map<String, Binding> out = new LinkedHashMap<>();
         for (Analysis a : files) {
             for (Row r : a.rows()) {

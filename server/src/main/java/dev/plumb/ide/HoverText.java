@@ -24,8 +24,7 @@ public final class HoverText {
 
     /** The hover at an offset: over a name used, or over a name where it is defined; null elsewhere. */
     public static String at(Analysis a, int offset) {
-        Analysis.Reference r = a.referenceAt(offset);
-        String name = r != null ? r.name() : definedNameAt(a, offset);
+        String name = Occurrences.nameAt(a, offset);
         if (name == null) return null;
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
@@ -38,18 +37,6 @@ public final class HoverText {
                 + ") — function" + (f.def().note() == null ? "" : "\n\n" + f.def().note());
         }
         if (b instanceof Binding.BuiltinFunction f) return "**" + f.signature() + "** — built-in function";
-        return null;
-    }
-
-    private static String definedNameAt(Analysis a, int offset) {
-        for (Row row : a.rows()) {
-            if (!row.span().contains(offset)) continue;
-            String name = row instanceof Row.ValueRow v ? v.name()
-                : row instanceof Row.FunctionRow f ? f.signature().substring(0, f.signature().indexOf('(')) : null;
-            if (name == null) return null;
-            Binding b = a.scope().lookup(name);
-            return b != null && b.span().start() <= offset && offset <= b.span().end() ? name : null;
-        }
         return null;
     }
 
