@@ -68,8 +68,22 @@ class RobustnessTest {
     @Test
     void anAnalysisNobodyWantsStopsEarly() {
         Workspace w = new Workspace(new FileSources(), Settings.DEFAULT);
-        assertEquals(null, w.analyzeText(FILE, GeneratedCalc.of(2_000), () -> true));
-        assertNotNull(w.analyzeText(FILE, GeneratedCalc.of(200), () -> false));
+        assertEquals(null, w.analyzeText(FILE, GeneratedCalc.of(2_000), null, () -> true));
+        assertNotNull(w.analyzeText(FILE, GeneratedCalc.of(200), null, () -> false));
+    }
+
+    @Test
+    void reanalysisFromAnEarlierParseEqualsAFreshAnalysis() {
+        String text = GeneratedCalc.of(300);
+        Analysis before = analyze(text);
+        // Break a line, mend another, and open an unclosed block half way down.
+        String edited = text.replaceFirst("= 22 m/s", "= 22 m/").replaceFirst("check F_3 <", "check F_3 <=")
+            .replaceFirst("section \"Case 12\"", "correlation k(Re)\n  = 1 / Re\nsection \"Case 12\"");
+        Analysis again = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(FILE, edited, before.syntax(), () -> false);
+        Analysis fresh = analyze(edited);
+        assertEquals(fresh.diagnostics(), again.diagnostics());
+        assertEquals(fresh.rows(), again.rows());
+        assertEquals(fresh.syntax().statements(), again.syntax().statements());
     }
 
     @Test

@@ -3,6 +3,7 @@ package dev.plumb.analysis;
 import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Severity;
 import dev.plumb.syntax.LineMap;
+import dev.plumb.syntax.ParsedSource;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -11,12 +12,13 @@ import java.util.Set;
 /**
  * Everything the engine found in one document, immutable.
  *
+ * @param syntax the parse the analysis was made from (an editor reparses from it after an edit)
  * @param headers title, author, reviewer, revision as written
  * @param scope the names the document defines and imports, with their values
  * @param importedUses for each imported file, the names of it this document uses
  * @param imports the files this document uses, directly
  */
-public record Analysis(Path file, String text, LineMap lines, Map<String, String> headers, List<Row> rows,
+public record Analysis(Path file, String text, ParsedSource syntax, Map<String, String> headers, List<Row> rows,
                        List<Diagnostic> diagnostics, Scope scope, Map<Path, Set<String>> importedUses,
                        List<Path> imports, List<Reference> references, List<CallSite> calls) {
 
@@ -55,6 +57,11 @@ public record Analysis(Path file, String text, LineMap lines, Map<String, String
         imports = List.copyOf(imports);
         references = List.copyOf(references);
         calls = List.copyOf(calls);
+    }
+
+    /** Lines and columns of the text. */
+    public LineMap lines() {
+        return syntax.lines();
     }
 
     public long count(Severity severity) {

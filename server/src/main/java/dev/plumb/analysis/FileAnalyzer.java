@@ -34,6 +34,8 @@ final class FileAnalyzer {
     private final Workspace workspace;
     private final Path file;
     private final String text;
+    /** An earlier parse of this document, to reparse from; null for none. */
+    private final ParsedSource earlier;
     private final List<Path> chain;
     private final Settings settings;
     private final UnitRegistry units = UnitRegistry.standard();
@@ -51,10 +53,11 @@ final class FileAnalyzer {
     /** For each `find`, the definitions re-evaluated with each trial value, in order. */
     private final Map<String, List<Statement.Definition>> dependents = new HashMap<>();
 
-    FileAnalyzer(Workspace workspace, Path file, String text, List<Path> chain, Settings settings) {
+    FileAnalyzer(Workspace workspace, Path file, String text, ParsedSource earlier, List<Path> chain, Settings settings) {
         this.workspace = workspace;
         this.file = file;
         this.text = text;
+        this.earlier = earlier;
         this.chain = chain;
         this.settings = settings;
         this.scope = new Scope(text, workspace.library());
@@ -62,7 +65,7 @@ final class FileAnalyzer {
     }
 
     Analysis run() {
-        ParsedSource parsed = SourceParser.parse(text);
+        ParsedSource parsed = earlier == null ? SourceParser.parse(text) : SourceParser.reparse(earlier, text);
         parsed.diagnostics().forEach(reporter::add);
         Map<String, String> headers = new LinkedHashMap<>();
         for (Statement s : parsed.statements()) {
@@ -90,7 +93,7 @@ final class FileAnalyzer {
             if (s instanceof Statement.Check c) rows.put(c, new CheckRunner(scope, reporter, text, settings).run(c));
         }
         reportUnusedInputs();
-        return new Analysis(file, text, parsed.lines(), headers, rowsInOrder(parsed.statements()), sorted(reporter.all()),
+        return new Analysis(file, text, parsed, headers, rowsInOrder(parsed.statements()), sorted(reporter.all()),
             scope, importedUses, imports, references, reporter.calls());
     }
 

@@ -3,7 +3,7 @@ package dev.plumb.analysis;
 import dev.plumb.diagnostics.Code;
 import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Span;
-import dev.plumb.syntax.LineMap;
+import dev.plumb.syntax.ParsedSource;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -61,17 +61,19 @@ public final class Workspace {
 
     /** Analyses text that is not (or not yet) saved under its path, e.g. an editor buffer. */
     public Analysis analyzeText(Path file, String text) {
-        return guarded(file.toAbsolutePath().normalize(), text, List.of());
+        return guarded(file.toAbsolutePath().normalize(), text, null, List.of());
     }
 
     /**
-     * As {@link #analyzeText(Path, String)}, giving up as soon as {@code superseded} says the
-     * result is no longer wanted (a newer edit arrived): then null.
+     * As {@link #analyzeText(Path, String)} for an editor: reparses from {@code earlier} (an
+     * earlier analysis's {@link Analysis#syntax()} of the same document, or null), and gives up as
+     * soon as {@code superseded} says the result is no longer wanted (a newer edit arrived): then
+     * null.
      */
-    public Analysis analyzeText(Path file, String text, java.util.function.BooleanSupplier superseded) {
+    public Analysis analyzeText(Path file, String text, ParsedSource earlier, java.util.function.BooleanSupplier superseded) {
         this.superseded = superseded;
         try {
-            return analyzeText(file, text);
+            return guarded(file.toAbsolutePath().normalize(), text, earlier, List.of());
         } catch (Superseded e) {
             return null;
         }
@@ -97,7 +99,7 @@ public final class Workspace {
         Sources.Loaded loaded = sources.load(file);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
-            fresh = new Imported(guarded(file, t.text(), chain), null);
+            fresh = new Imported(guarded(file, t.text(), null, chain), null);
         } else if (loaded instanceof Sources.NotText n) {
             fresh = new Imported(failure(file, "", Code.FILE_NOT_TEXT,
                 "this is not a calc file: " + n.reason() + " (first bad byte at offset " + n.offset() + ")", 0), null);
@@ -134,10 +136,10 @@ public final class Workspace {
         return null;
     }
 
-    private Analysis guarded(Path file, String text, List<Path> chain) {
+    private Analysis guarded(Path file, String text, ParsedSource earlier, List<Path> chain) {
         return DeepStack.call(() -> {
             try {
-                return new FileAnalyzer(this, file, text, chain, settings).run();
+                return new FileAnalyzer(this, file, text, earlier, chain, settings).run();
             } catch (Superseded e) {
                 throw e;
             } catch (StackOverflowError e) {
@@ -149,7 +151,7 @@ public final class Workspace {
 
     private static Analysis failure(Path file, String text, Code code, String message, int offset) {
         Diagnostic d = Diagnostic.of(code, new Span(offset, offset), message);
-        return new Analysis(file, text, new LineMap(text), Map.of(), List.of(), List.of(d), new Scope(text), Map.of(),
+        return new Analysis(file, text, ParsedSource.unread(text), Map.of(), List.of(), List.of(d), new Scope(text), Map.of(),
             List.of(), List.of(), List.of());
     }
 }

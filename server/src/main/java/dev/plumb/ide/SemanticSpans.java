@@ -4,7 +4,6 @@ import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
 import dev.plumb.diagnostics.Span;
 import dev.plumb.syntax.Expr;
-import dev.plumb.syntax.SourceParser;
 import dev.plumb.syntax.Statement;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -26,7 +25,7 @@ public final class SemanticSpans {
             Type t = typeOf(a.scope().lookup(r.name()));
             if (t != null) out.add(new Token(r.span(), t));
         }
-        for (Statement s : SourceParser.parse(a.text()).statements()) units(s, out);
+        for (Statement s : a.syntax().statements()) units(s, out);
         out.sort(Comparator.comparingInt(t -> t.span().start()));
         return out;
     }

@@ -113,7 +113,10 @@ final class Analyses {
     private Analysis analyze(OpenDocument d, java.util.function.BooleanSupplier superseded) {
         Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance(),
             settings.get().criticalReynolds());
-        return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text(), superseded);
+        // The last result's parse, whatever version it was: only the edited part is read again.
+        Result last = latest.get(d.uri());
+        return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text(),
+            last == null ? null : last.analysis().syntax(), superseded);
     }
 
     /** Open documents that use this path, directly or through other files. */

@@ -34,6 +34,8 @@ final class StatementTokens {
     private final LineMap lines;
     private final List<Diagnostic> diagnostics = new ArrayList<>();
     private final List<Dropped> dropped = new ArrayList<>();
+    private final List<Integer> freshStarts = new ArrayList<>();
+    private boolean blockOpenAtEnd;
 
     StatementTokens(LineMap lines) {
         this.lines = lines;
@@ -45,6 +47,20 @@ final class StatementTokens {
 
     List<Dropped> dropped() {
         return dropped;
+    }
+
+    /**
+     * Offsets of lines that start a statement at column 0 outside any block: the reading of the
+     * text from there on does not depend on anything before it, so an editor's reparse may start
+     * or stop there.
+     */
+    List<Integer> freshStarts() {
+        return freshStarts;
+    }
+
+    /** Whether a {@code correlation} or {@code table} block is still open at the end of the text. */
+    boolean blockOpenAtEnd() {
+        return blockOpenAtEnd;
     }
 
     List<Token> arrange(List<? extends Token> tokens) {
@@ -90,6 +106,7 @@ final class StatementTokens {
                         // Comment lines say nothing about the block's depth.
                         if (inBlock && blockIndent < 0 && next != PlumbLexer.COMMENT) blockIndent = indent;
                         statementIndent = inBlock && blockIndent >= 0 ? Math.min(indent, blockIndent) : indent;
+                        if (indent == 0 && !inBlock) freshStarts.add(lines.fromCodePoint(t.getStopIndex() + 1));
                     }
                 }
                 case PlumbLexer.COMMENT -> {
@@ -103,6 +120,7 @@ final class StatementTokens {
                     out.add(t);
                 }
                 case Token.EOF -> {
+                    blockOpenAtEnd = inBlock;
                     if (inStatement) {
                         finishStatement(out, statementStart);
                         out.add(finalNewline(t));

@@ -7,9 +7,10 @@ import java.util.Random;
  * Random calc documents for the formatter's property test, built from realistic pieces (inputs
  * and definitions with units, clauses and notes, checks, functions, find, sections, narrative,
  * code comments, continued statements, correlation and table blocks) with random blanks between
- * the parts, plus broken and garbage lines. The same seed gives the same documents.
+ * the parts, plus broken and garbage lines. The same seed gives the same documents. Also feeds
+ * the parser's reparse property test.
  */
-final class RandomCalc {
+public final class RandomCalc {
     private static final List<String> NAMES = List.of(
         "V", "rho", "ρ_air", "µ", "μ_w", "ΔT", "Re_L", "C_D", "A_front", "q", "F_D", "x2", "_tmp", "L",
         "\uD835\uDF0C_sw", "T_amb", "check", "source", "ν", "d", "end", "table");
@@ -37,11 +38,11 @@ final class RandomCalc {
 
     private final Random random;
 
-    RandomCalc(long seed) {
+    public RandomCalc(long seed) {
         random = new Random(seed);
     }
 
-    String document() {
+    public String document() {
         StringBuilder doc = new StringBuilder();
         if (random.nextInt(20) == 0) doc.append('\uFEFF');
         String newline = pick(List.of("\n", "\n", "\n", "\r\n", "\r"));

@@ -1,0 +1,131 @@
+package dev.plumb.syntax;
+
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Related;
+import dev.plumb.diagnostics.Span;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Moves syntax results by a number of UTF-16 units: a statement read once keeps its meaning when
+ * text before it is edited, only its place changes. Every span in the tree moves; nothing else.
+ */
+final class Shift {
+    private final int by;
+
+    private Shift(int by) {
+        this.by = by;
+    }
+
+    static List<Statement> statements(List<Statement> in, int by) {
+        if (by == 0) return in;
+        Shift s = new Shift(by);
+        List<Statement> out = new ArrayList<>(in.size());
+        for (Statement st : in) out.add(s.statement(st));
+        return out;
+    }
+
+    static List<Diagnostic> diagnostics(List<Diagnostic> in, int by) {
+        if (by == 0) return in;
+        Shift s = new Shift(by);
+        List<Diagnostic> out = new ArrayList<>(in.size());
+        for (Diagnostic d : in) out.add(s.diagnostic(d));
+        return out;
+    }
+
+    private Diagnostic diagnostic(Diagnostic d) {
+        List<Related> related = new ArrayList<>(d.related().size());
+        for (Related r : d.related()) related.add(new Related(r.file(), span(r.span()), r.message()));
+        return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related);
+    }
+
+    private Span span(Span s) {
+        return s == null ? null : new Span(s.start() + by, s.end() + by);
+    }
+
+    private Ident ident(Ident i) {
+        return i == null ? null : new Ident(i.text(), span(i.span()));
+    }
+
+    private UnitText unit(UnitText u) {
+        return u == null ? null : new UnitText(u.text(), span(u.span()));
+    }
+
+    private List<Ident> idents(List<Ident> in) {
+        List<Ident> out = new ArrayList<>(in.size());
+        for (Ident i : in) out.add(ident(i));
+        return out;
+    }
+
+    private List<Expr> exprs(List<Expr> in) {
+        List<Expr> out = new ArrayList<>(in.size());
+        for (Expr e : in) out.add(expr(e));
+        return out;
+    }
+
+    private List<Statement.Bound> bounds(List<Statement.Bound> in) {
+        List<Statement.Bound> out = new ArrayList<>(in.size());
+        for (Statement.Bound b : in) out.add(bound(b));
+        return out;
+    }
+
+    private Statement.Bound bound(Statement.Bound b) {
+        return b == null ? null : new Statement.Bound(span(b.span()), exprs(b.operands()), b.comparators());
+    }
+
+    private Statement.Param param(Statement.Param p) {
+        return new Statement.Param(ident(p.name()), ident(p.dimension()));
+    }
+
+    Expr expr(Expr e) {
+        if (e == null) return null;
+        if (e instanceof Expr.Quantity q) return new Expr.Quantity(span(q.span()), q.number(), q.numberText(), unit(q.unit()));
+        if (e instanceof Expr.Reference r) return new Expr.Reference(span(r.span()), r.name());
+        if (e instanceof Expr.Call c) return new Expr.Call(span(c.span()), ident(c.callee()), exprs(c.args()));
+        if (e instanceof Expr.Unary u) return new Expr.Unary(span(u.span()), u.op(), expr(u.operand()));
+        Expr.Binary b = (Expr.Binary) e;
+        return new Expr.Binary(span(b.span()), b.op(), expr(b.left()), expr(b.right()));
+    }
+
+    private Statement statement(Statement s) {
+        if (s instanceof Statement.Header h) return new Statement.Header(span(h.span()), h.key(), h.text());
+        if (s instanceof Statement.Narrative n) return new Statement.Narrative(span(n.span()), n.text());
+        if (s instanceof Statement.Section sec) return new Statement.Section(span(sec.span()), sec.title());
+        if (s instanceof Statement.Use u) return new Statement.Use(span(u.span()), u.path(), span(u.pathSpan()));
+        if (s instanceof Statement.Definition d) {
+            return new Statement.Definition(span(d.span()), d.input(), ident(d.name()), expr(d.expr()),
+                unit(d.displayUnit()), ident(d.basis()), d.note());
+        }
+        if (s instanceof Statement.Function f) {
+            return new Statement.Function(span(f.span()), ident(f.name()), idents(f.params()), expr(f.body()), f.note());
+        }
+        if (s instanceof Statement.Check c) {
+            return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note());
+        }
+        if (s instanceof Statement.Find f) {
+            return new Statement.Find(span(f.span()), ident(f.name()), expr(f.low()), expr(f.high()), expr(f.guess()),
+                expr(f.lhs()), expr(f.rhs()), span(f.equation()), unit(f.displayUnit()), ident(f.basis()), f.note());
+        }
+        if (s instanceof Statement.Correlation c) {
+            List<Statement.Param> params = new ArrayList<>(c.params().size());
+            for (Statement.Param p : c.params()) params.add(param(p));
+            List<Statement.Piece> pieces = new ArrayList<>(c.pieces().size());
+            for (Statement.Piece p : c.pieces()) {
+                pieces.add(new Statement.Piece(span(p.span()), expr(p.expr()), bound(p.condition()), p.otherwise()));
+            }
+            return new Statement.Correlation(span(c.span()), ident(c.name()), params, c.title(), c.source(),
+                ident(c.family()), ident(c.basis()), bounds(c.valid()), ident(c.regime()), expr(c.accuracy()), pieces);
+        }
+        if (s instanceof Statement.Table t) {
+            List<Statement.Column> columns = new ArrayList<>(t.columns().size());
+            for (Statement.Column c : t.columns()) columns.add(new Statement.Column(ident(c.name()), unit(c.unit())));
+            List<Statement.Row> rows = new ArrayList<>(t.rows().size());
+            for (Statement.Row r : t.rows()) rows.add(new Statement.Row(span(r.span()), r.numbers()));
+            return new Statement.Table(span(t.span()), ident(t.name()), param(t.param()), t.title(), t.source(),
+                ident(t.family()), ident(t.basis()), bounds(t.valid()), expr(t.accuracy()), ident(t.interpolate()),
+                columns, rows);
+        }
+        Statement.Broken b = (Statement.Broken) s;
+        return new Statement.Broken(span(b.span()), ident(b.name()));
+    }
+}
