@@ -46,7 +46,7 @@ find        : FIND name ( WITHIN expr DOTDOT expr | GUESS expr ) SO THAT expr AS
  */
 correlationHead : CORRELATION name LPAREN param ( COMMA param )* RPAREN;
 tableHead       : TABLE name LPAREN param RPAREN;
-param           : name ( COLON name )?;
+param           : id=name ( COLON dim=name )? ( AS role=name )?;
 
 blockLine
     : SOURCE STRING                                         # sourceLine

@@ -10,12 +10,22 @@ package dev.plumb.analysis;
  * @param shape the canonical product of the lengths and numbers among this value's factors (π·d·L in
  *     ½·ρ·V²·Cd·π·d·L); null when it is not a product
  * @param pure true when the value is nothing but that product of lengths and numbers
+ * @param density a tagged density this value is, or holds as a factor (a dynamic pressure ½·ρ·V²
+ *     holds ρ); null for none
  */
-record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure) {
+record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure, Density density) {
     static final BasisNotes NONE = new BasisNotes(null, null, null, true);
+
+    BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure) {
+        this(area, coefficient, shape, pure, null);
+    }
 
     BasisNotes(Area area, Coefficient coefficient, Shape shape) {
         this(area, coefficient, shape, true);
+    }
+
+    /** @param tag fluid or body; @param label how the message names it */
+    record Density(String tag, String label) {
     }
 
     /**
@@ -37,15 +47,19 @@ record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure)
     }
 
     BasisNotes withArea(Area a) {
-        return new BasisNotes(a, coefficient, shape, pure);
+        return new BasisNotes(a, coefficient, shape, pure, density);
     }
 
     BasisNotes withCoefficient(Coefficient c) {
-        return new BasisNotes(area, c, shape, pure);
+        return new BasisNotes(area, c, shape, pure, density);
     }
 
     BasisNotes withShape(Shape s) {
-        return new BasisNotes(area, coefficient, s, pure);
+        return new BasisNotes(area, coefficient, s, pure, density);
+    }
+
+    BasisNotes withDensity(Density d) {
+        return new BasisNotes(area, coefficient, shape, pure, d);
     }
 
     /** A factor that is not a length or a number: it joins products without adding to their shape. */
@@ -54,6 +68,6 @@ record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure)
     }
 
     boolean empty() {
-        return area == null && coefficient == null && shape == null;
+        return area == null && coefficient == null && shape == null && density == null;
     }
 }

@@ -13,11 +13,16 @@ import dev.plumb.units.Dimension;
  *       of lengths is an untagged area whose shape (π·d·L, π·d²/4 …) is known; anything else
  *       drops it;</li>
  *   <li>a product that holds an area (a force Cd·A·q) carries it along, so the check fires
- *       wherever coefficient and area meet, in any order and through intermediate names.</li>
+ *       wherever coefficient and area meet, in any order and through intermediate names;</li>
+ *   <li>a density tagged {@code body} or {@code fluid} is carried the same way (a dynamic pressure
+ *       ½·ρ·V² holds its ρ); a coefficient with a basis that meets a body's density warns, since
+ *       force coefficients scale the fluid's dynamic pressure. A difference ρ_body − ρ_fluid is
+ *       untagged: it is the buoyancy term, used rightly with the body's density.</li>
  * </ul>
  */
 final class BasisRules {
     static final Dimension AREA = Dimension.of(2, 0, 0, 0, 0, 0, 0);
+    static final Dimension DENSITY = Dimension.of(-3, 1, 0, 0, 0, 0, 0);
 
     private final Reporter reporter;
     private final String text;
@@ -55,7 +60,15 @@ final class BasisRules {
             : new BasisNotes.Area(n.area().tag(), n.area().kind(), name, n.area().frontal());
         BasisNotes.Coefficient c = n.coefficient() == null ? null
             : new BasisNotes.Coefficient(n.coefficient().basis(), name, n.coefficient().origin());
-        return new BasisNotes(area, c, shape, pure);
+        return new BasisNotes(area, c, shape, pure, relabelled(n.density(), name, v));
+    }
+
+    /** A density is named by its own name; one held in a product by the density and the product's name. */
+    private static BasisNotes.Density relabelled(BasisNotes.Density d, String name, Value v) {
+        if (d == null) return null;
+        if (DENSITY.equals(v.dimension())) return new BasisNotes.Density(d.tag(), name);
+        if (d.label().endsWith(")")) return d;
+        return new BasisNotes.Density(d.tag(), d.label() + " (in " + name + ")");
     }
 
     private static boolean plainLength(Shape s) {
@@ -70,6 +83,12 @@ final class BasisRules {
         }
         if (v.dimension().equals(AREA)) return BasisNotes.NONE.withArea(new BasisNotes.Area(basis, null, correlation));
         return BasisNotes.NONE;
+    }
+
+    /** An `as fluid` or `as body` on a density. */
+    static BasisNotes densityTagged(Value v, String tag, String name) {
+        BasisNotes n = v.notes() == null ? BasisNotes.NONE : v.notes();
+        return n.withDensity(new BasisNotes.Density(tag, name));
     }
 
     /** An `as TAG` on a definition. */
@@ -94,7 +113,13 @@ final class BasisRules {
             : rn.coefficient() != null && ln.coefficient() == null ? rn.coefficient() : null;
         if (ln.coefficient() != null && rn.area() != null) check(ln.coefficient(), rn.area(), b);
         if (rn.coefficient() != null && ln.area() != null) check(rn.coefficient(), ln.area(), b);
-        return new BasisNotes(area, c, shape, pure);
+        if (ln.coefficient() != null && rn.density() != null) check(ln.coefficient(), rn.density(), b);
+        if (rn.coefficient() != null && ln.density() != null) check(rn.coefficient(), ln.density(), b);
+        return new BasisNotes(area, c, shape, pure, onlyOne(ln.density(), rn.density()));
+    }
+
+    private static BasisNotes.Density onlyOne(BasisNotes.Density a, BasisNotes.Density b) {
+        return a != null && b == null ? a : b != null && a == null ? b : null;
     }
 
     /**
@@ -141,7 +166,9 @@ final class BasisRules {
             area = new BasisNotes.Area(null, shape.kind(), null);
         }
         BasisNotes.Coefficient c = ln.coefficient() != null && plainDivisor ? ln.coefficient() : null;
-        return new BasisNotes(area, c, shape, ln.pure() && rn.pure());
+        // ρ/2 is still that density; ρ_body/ρ_fluid is a ratio of two, and belongs to neither.
+        BasisNotes.Density density = rn.density() == null ? ln.density() : null;
+        return new BasisNotes(area, c, shape, ln.pure() && rn.pure(), density);
     }
 
     static BasisNotes sum(Value l, Value r) {
@@ -151,7 +178,9 @@ final class BasisRules {
             && ln.area().tag().equals(rn.area().tag()) ? new BasisNotes.Area(ln.area().tag(), null, null) : null;
         BasisNotes.Coefficient c = ln.coefficient() != null && rn.coefficient() != null
             && ln.coefficient().basis().equals(rn.coefficient().basis()) ? ln.coefficient() : null;
-        return new BasisNotes(area, c, null);
+        BasisNotes.Density density = ln.density() != null && rn.density() != null
+            && ln.density().tag().equals(rn.density().tag()) ? ln.density() : null;
+        return new BasisNotes(area, c, null, true, density);
     }
 
     static BasisNotes power(Value base, double n) {
@@ -192,6 +221,14 @@ final class BasisRules {
             warn(b, c.label() + " is referenced to wetted area, and " + area + " is one rectangle: if the flow wets "
                 + "both faces of a plate, the wetted area is 2·b·L", Severity.HINT);
         }
+    }
+
+    /** Where a coefficient meets a tagged density: a body's density does not belong there. */
+    private void check(BasisNotes.Coefficient c, BasisNotes.Density d, Expr.Binary b) {
+        if (!d.tag().equals("body")) return;
+        reporter.report(Code.BASIS_DENSITY, Severity.WARNING, b.span(), c.label() + " scales the dynamic pressure of the "
+            + "fluid, ½·ρ·V² with the fluid's ρ, but " + d.label() + " is tagged body: use the density of the fluid "
+            + "around the body (the body's own density belongs in its weight)");
     }
 
     private static String frontalFix(Shape.Kind k) {

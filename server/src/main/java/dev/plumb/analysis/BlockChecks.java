@@ -20,6 +20,8 @@ import java.util.Set;
  */
 final class BlockChecks {
     static final Set<String> BASES = Set.of("frontal", "wetted", "planform");
+    /** Whose density a value is: the fluid's (drag, lift, Reynolds number) or the body's (weight). */
+    static final Set<String> DENSITY_TAGS = Set.of("fluid", "body");
     private static final Set<String> REGIMES = Set.of("laminar", "turbulent");
     private static final Set<String> INTERPOLATIONS = Set.of("linear", "loglog");
 
@@ -38,6 +40,7 @@ final class BlockChecks {
                 reporter.report(Code.NAME_DUPLICATE, p.name().span(), "parameter " + p.name().text() + " is listed twice");
             }
             dimension(p);
+            role(p);
         }
         word(c.basis(), BASES, Code.BASIS_UNKNOWN, "area basis");
         word(c.regime(), REGIMES, Code.BLOCK_INVALID, "regime");
@@ -53,6 +56,20 @@ final class BlockChecks {
                 + ": use a word such as length, temperature, velocity, pressure, density or dimensionless");
         }
         return d;
+    }
+
+    /** {@code rho: density as fluid}: a known role, on a parameter declared a density. */
+    private void role(Statement.Param p) {
+        if (p.role() == null) return;
+        String r = p.role().text();
+        if (!DENSITY_TAGS.contains(r)) {
+            reporter.report(Code.BLOCK_INVALID, p.role().span(), "unknown role '" + r + "'"
+                + Suggestions.didYouMean(Suggestions.closest(r, DENSITY_TAGS, 1))
+                + ": a density parameter is `as fluid` or `as body`");
+        } else if (p.dimension() == null || !p.dimension().text().equals("density")) {
+            reporter.report(Code.BLOCK_INVALID, p.role().span(), "`as " + r + "` says whose density "
+                + p.name().text() + " is: declare it a density, `" + p.name().text() + ": density as " + r + "`");
+        }
     }
 
     private void word(Ident word, Set<String> allowed, Code code, String what) {
@@ -78,6 +95,7 @@ final class BlockChecks {
         word(t.interpolate(), INTERPOLATIONS, Code.BLOCK_INVALID, "interpolation");
         boolean logLog = t.interpolate() != null && t.interpolate().text().equals("loglog");
         Dimension declared = dimension(t.param());
+        role(t.param());
         List<Statement.Column> columns = t.columns();
         if (columns.size() < 2 || t.rows().size() < 2) return List.of();
         Evaluator resolver = new Evaluator(scope, reporter, scope.text(), units);

@@ -34,6 +34,7 @@ final class CorrelationCall {
         Statement.Correlation def = b.def();
         String name = def.name().text();
         if (b.circular() || !dimensionsFit(c, name, def.params(), args)) return Value.UNKNOWN;
+        roles(c, name, def.params(), args);
         Map<String, Value> params = RangeCheck.bind(def.params(), args);
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
         Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
@@ -126,6 +127,20 @@ final class CorrelationCall {
             return false;
         }
         return true;
+    }
+
+    /** Warns where a parameter declared `as fluid` gets a density tagged body, or the other way round. */
+    private void roles(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {
+        for (int i = 0; i < params.size(); i++) {
+            Statement.Param p = params.get(i);
+            BasisNotes.Density given = args.get(i).notes() == null ? null : args.get(i).notes().density();
+            if (p.role() == null || given == null || given.tag().equals(p.role().text())) continue;
+            String fix = p.role().text().equals("fluid") ? "pass the density of the fluid around the body (air, water)"
+                : "pass the density of the body itself";
+            reporter.report(Code.BASIS_DENSITY, c.args().get(i).span(), name + " takes " + p.name().text()
+                + " as the density of the " + p.role().text() + ", but " + given.label() + " is tagged " + given.tag()
+                + ": " + fix);
+        }
     }
 
     /** Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below. */

@@ -393,12 +393,9 @@ final class FileAnalyzer {
         Unit display = displayUnit(d, v, evaluator);
         String basis = basis(d);
         if (basis != null && v.known()) {
-            if (v.dimension().equals(BasisRules.AREA)) {
-                v = v.noted(BasisRules.tagged(v, basis, d.name().text()));
-            } else {
-                reporter.report(Code.BASIS_AREA, d.basis().span(), "`as " + basis + "` tags areas, but " + d.name().text()
-                    + " is " + v.dimension().describe() + ": remove the tag");
-            }
+            Value tagged = tagged(d, v, basis);
+            if (tagged == null) basis = null;
+            else v = tagged;
         }
         Origin origin = BlockChecks.origin(d.expr(), scope, units);
         if (!duplicates.contains(s)) {
@@ -406,6 +403,19 @@ final class FileAnalyzer {
         }
         String shown = Shown.value(v, display, settings.significantFigures());
         rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note(), origin, null));
+    }
+
+    /** The value with its `as` tag, or null (reported) when the tag does not fit what the value is. */
+    private Value tagged(Statement.Definition d, Value v, String tag) {
+        String name = d.name().text();
+        boolean density = BlockChecks.DENSITY_TAGS.contains(tag);
+        if (v.dimension().equals(density ? BasisRules.DENSITY : BasisRules.AREA)) {
+            return v.noted(density ? BasisRules.densityTagged(v, tag, name) : BasisRules.tagged(v, tag, name));
+        }
+        reporter.report(density ? Code.BASIS_DENSITY : Code.BASIS_AREA, d.basis().span(), "`as " + tag + "` "
+            + (density ? "says whose density a value is" : "tags areas") + ", but " + name + " is "
+            + v.dimension().describe() + ": remove the tag");
+        return null;
     }
 
     private void evaluateFind(Statement.Find f, boolean inCycle) {
@@ -476,9 +486,12 @@ final class FileAnalyzer {
     private String basisOf(Ident word) {
         if (word == null) return null;
         String b = word.text();
-        if (BlockChecks.BASES.contains(b)) return b;
-        reporter.report(Code.BASIS_UNKNOWN, word.span(), "unknown area basis '" + b + "'"
-            + Suggestions.didYouMean(Suggestions.closest(b, BlockChecks.BASES, 1)) + ": use frontal, wetted or planform");
+        if (BlockChecks.BASES.contains(b) || BlockChecks.DENSITY_TAGS.contains(b)) return b;
+        Set<String> tags = new HashSet<>(BlockChecks.BASES);
+        tags.addAll(BlockChecks.DENSITY_TAGS);
+        reporter.report(Code.BASIS_UNKNOWN, word.span(), "unknown tag '" + b + "'"
+            + Suggestions.didYouMean(Suggestions.closest(b, tags, 1))
+            + ": an area is frontal, wetted or planform; a density is fluid or body");
         return null;
     }
 

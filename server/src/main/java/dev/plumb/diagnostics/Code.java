@@ -32,6 +32,7 @@ public enum Code {
     INPUT_UNUSED("input.unused", Severity.HINT),
     BASIS_UNKNOWN("basis.unknown", Severity.ERROR),
     BASIS_AREA("basis.area", Severity.WARNING),
+    BASIS_DENSITY("basis.density", Severity.WARNING),
     BLOCK_INVALID("block.invalid", Severity.ERROR),
     USE_NOT_FOUND("use.not-found", Severity.ERROR),
     USE_CYCLE("use.cycle", Severity.ERROR),

@@ -108,7 +108,7 @@ public final class HoverText {
     private static String correlation(Binding.CorrelationBinding c) {
         Statement.Correlation d = c.def();
         StringBuilder out = new StringBuilder("**" + d.name().text() + "**(" + String.join(", ", d.params().stream()
-            .map(p -> p.name().text() + (p.dimension() == null ? "" : ": " + p.dimension().text())).toList()) + ") — correlation");
+            .map(Statement.Param::written).toList()) + ") — correlation");
         meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(c));
         return out.toString();
     }

@@ -45,10 +45,9 @@ public final class Signatures {
     static List<String> parameters(Binding b) {
         List<String> out = new ArrayList<>();
         if (b instanceof Binding.CorrelationBinding c) {
-            c.def().params().forEach(p -> out.add(p.name().text() + (p.dimension() == null ? "" : ": " + p.dimension().text())));
+            c.def().params().forEach(p -> out.add(p.written()));
         } else if (b instanceof Binding.TableBinding t) {
-            var p = t.def().param();
-            out.add(p.name().text() + (p.dimension() == null ? "" : ": " + p.dimension().text()));
+            out.add(t.def().param().written());
         } else if (b instanceof Binding.FunctionBinding f) {
             f.def().params().forEach(p -> out.add(p.text()));
         } else if (b instanceof Binding.BuiltinFunction f) {

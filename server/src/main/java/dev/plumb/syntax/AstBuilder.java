@@ -163,8 +163,8 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     }
 
     private Statement.Param param(PlumbParser.ParamContext ctx) {
-        List<PlumbParser.NameContext> names = ctx.name();
-        return new Statement.Param(ident(names.get(0)), names.size() > 1 ? ident(names.get(1)) : null);
+        return new Statement.Param(ident(ctx.id), ctx.dim == null ? null : ident(ctx.dim),
+            ctx.role == null ? null : ident(ctx.role));
     }
 
     @Override

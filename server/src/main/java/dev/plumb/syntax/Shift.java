@@ -74,7 +74,7 @@ final class Shift {
     }
 
     private Statement.Param param(Statement.Param p) {
-        return new Statement.Param(ident(p.name()), ident(p.dimension()));
+        return new Statement.Param(ident(p.name()), ident(p.dimension()), ident(p.role()));
     }
 
     Expr expr(Expr e) {

@@ -75,8 +75,15 @@ public sealed interface Statement {
         }
     }
 
-    /** A parameter, with the dimension it must have when one is declared ({@code T: temperature}). */
-    record Param(Ident name, Ident dimension) {
+    /**
+     * A parameter, with the dimension it must have when one is declared ({@code T: temperature})
+     * and, for a density, whose density it is ({@code rho: density as fluid}); null when absent.
+     */
+    record Param(Ident name, Ident dimension, Ident role) {
+        /** As written in the head, without spacing quirks: {@code rho: density as fluid}. */
+        public String written() {
+            return name.text() + (dimension == null ? "" : ": " + dimension.text()) + (role == null ? "" : " as " + role.text());
+        }
     }
 
     /** A chained comparison: {@code valid 0 < Re <= 800}, or a piece's {@code when} condition. */
