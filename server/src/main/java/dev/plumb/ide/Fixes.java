@@ -13,7 +13,8 @@ import java.util.regex.Pattern;
 
 /**
  * Code actions: quick fixes for findings that name their fix (a missing `*`, a close spelling,
- * a correlation valid at the value) and refactors on a definition (show it in SI).
+ * a correlation valid at the value, the frontal area, a density of the right kind) and refactors
+ * on a definition (show it in SI).
  */
 public final class Fixes {
     /** One action: a title, whether it fixes a finding, and its edits. */
@@ -25,6 +26,7 @@ public final class Fixes {
     private static final Pattern WITHIN = Pattern.compile("within range: ([\\w, .]+)$");
     private static final Pattern SUCH_AS = Pattern.compile("such as (\\S+)$");
     private static final Pattern AREA_FIX = Pattern.compile("but ([\\p{L}_][\\p{L}\\p{Nd}_]*) has the shape .*\\(here `([^`]+)`\\)");
+    private static final Pattern ROLE = Pattern.compile("takes \\S+ as the density of the (fluid|body), but");
     private static final Pattern EXPRESSION = Pattern.compile("=\\s*(.*?)(\\s+in\\s+\\S+|\\s+as\\s+\\S+|\\s+\"|\\s*$)",
         Pattern.DOTALL);
 
@@ -92,6 +94,15 @@ public final class Fixes {
                     List.of(e), d));
             }
         }
+        if (d.code() == Code.BASIS_DENSITY) {
+            Matcher role = ROLE.matcher(m);
+            if (role.find()) {
+                for (String name : densitiesTagged(a, role.group(1))) {
+                    out.add(new Action("Use " + name + " (tagged " + role.group(1) + ")", true,
+                        List.of(new Edit(d.span().start(), d.span().length(), name)), d));
+                }
+            }
+        }
         if (d.code() == Code.RANGE_OUTSIDE) {
             Matcher w = WITHIN.matcher(m);
             String call = a.text().substring(d.span().start(), d.span().end());
@@ -101,6 +112,18 @@ public final class Fixes {
                     out.add(new Action("Use " + alt.strip() + ", valid here", true,
                         List.of(new Edit(d.span().start(), paren, alt.strip())), d));
                 }
+            }
+        }
+        return out;
+    }
+
+    /** The document's own densities tagged {@code as TAG}, in source order. */
+    private static List<String> densitiesTagged(Analysis a, String tag) {
+        List<String> out = new ArrayList<>();
+        for (Row r : a.rows()) {
+            // A density tag stays on a definition only when its value is a density.
+            if (r instanceof Row.ValueRow v && tag.equals(v.basis())) {
+                out.add(v.name());
             }
         }
         return out;

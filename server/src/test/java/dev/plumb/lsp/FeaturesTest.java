@@ -181,6 +181,22 @@ class FeaturesTest {
     }
 
     @Test
+    void aBodysDensityPassedForTheFluidsIsSwappedForTheFluids() throws Exception {
+        String text = "input rho_air = 1.2 kg/m^3   as fluid\ninput rho_ice = 900 kg/m^3   as body\ninput V = 25 m/s\n"
+            + "q = dynamic_pressure(rho_ice, V)\n";
+        TextDocumentService s = open("density.plumb", text, null);
+        String u = uri("density.plumb");
+        var actions = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(3, 21), new Position(3, 21)),
+            new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS);
+        var swap = actions.stream().map(e -> e.getRight()).filter(a -> a.getTitle().startsWith("Use rho_"))
+            .toList();
+        assertEquals(List.of("Use rho_air (tagged fluid)"), swap.stream().map(a -> a.getTitle()).toList());
+        var edit = swap.get(0).getEdit().getChanges().get(u).get(0);
+        assertEquals("rho_air", edit.getNewText());
+        assertEquals(new Range(new Position(3, 21), new Position(3, 28)), edit.getRange());
+    }
+
+    @Test
     void aUsedFileChangedOnDiskIsPickedUp() throws Exception {
         Files.createDirectories(dir.resolve(".git"));
         Files.writeString(dir.resolve("site.plumb"), "input V = 30 m/s\n");
