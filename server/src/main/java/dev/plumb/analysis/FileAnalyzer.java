@@ -101,7 +101,14 @@ final class FileAnalyzer {
 
     private void importFile(Statement.Use u) {
         Path folder = file.toAbsolutePath().getParent();
-        Path target = folder.resolve(u.path()).normalize();
+        Path target;
+        try {
+            target = folder.resolve(u.path()).normalize();
+        } catch (java.nio.file.InvalidPathException e) {
+            reporter.report(Code.USE_NOT_FOUND, u.pathSpan(), "cannot use \"" + u.path().replace("\0", "\\0")
+                + "\": it is not a file path here (" + e.getReason() + "): write the path of a .plumb file");
+            return;
+        }
         Path root = workspace.sources().workspaceRoot(file);
         if (!target.startsWith(root)) {
             reporter.report(Code.USE_OUTSIDE_WORKSPACE, u.pathSpan(), "\"" + u.path() + "\" leads outside the workspace ("

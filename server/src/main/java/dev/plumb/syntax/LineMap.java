@@ -50,6 +50,11 @@ public final class LineMap {
         return utf16Of[Math.max(0, Math.min(codePointIndex, utf16Of.length - 1))];
     }
 
+    /** The length of the text in UTF-16 units. */
+    public int length() {
+        return text.length();
+    }
+
     public int lineCount() {
         return lineStarts.length;
     }

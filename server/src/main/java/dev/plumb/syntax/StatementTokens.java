@@ -50,9 +50,9 @@ final class StatementTokens {
     }
 
     /**
-     * Offsets of lines that start a statement at column 0 outside any block: the reading of the
-     * text from there on does not depend on anything before it, so an editor's reparse may start
-     * or stop there.
+     * Offsets of lines that start at column 0 (no blank or tab first) outside any block: the
+     * reading of the text from there on does not depend on anything before it, so an editor's
+     * reparse may start or stop there.
      */
     List<Integer> freshStarts() {
         return freshStarts;
@@ -106,8 +106,11 @@ final class StatementTokens {
                         // Comment lines say nothing about the block's depth.
                         if (inBlock && blockIndent < 0 && next != PlumbLexer.COMMENT) blockIndent = indent;
                         statementIndent = inBlock && blockIndent >= 0 ? Math.min(indent, blockIndent) : indent;
-                        if (indent == 0 && !inBlock) freshStarts.add(lines.fromCodePoint(t.getStopIndex() + 1));
                     }
+                    // Decided by the text before the line and the line's first character only, so
+                    // that an edit later in the line cannot move the cut (blank lines count too).
+                    int lineStart = lines.fromCodePoint(t.getStopIndex() + 1);
+                    if (indent == 0 && !inBlock && lineStart < lines.length()) freshStarts.add(lineStart);
                 }
                 case PlumbLexer.COMMENT -> {
                     if (inStatement) {

@@ -70,6 +70,17 @@ class UseTest {
     }
 
     @Test
+    void aPathNoFileCanHaveIsNotFound() throws IOException {
+        // Found by the fuzzer (EngineFuzzTestInputs/*/use-path-with-nul): the engine threw.
+        Path main = write("nul.plumb", "x = 1\n");
+        Analysis a = workspace().analyzeText(main, "use \"a\0b.plumb\"\nx = 1\n");
+        assertEquals(1, a.diagnostics().size(), a.diagnostics().toString());
+        assertEquals(Code.USE_NOT_FOUND, a.diagnostics().get(0).code());
+        assertTrue(a.diagnostics().get(0).message().startsWith("cannot use \"a\\0b.plumb\": it is not a file path here"),
+            a.diagnostics().get(0).message());
+    }
+
+    @Test
     void theFileBeingCheckedReportsTheCycleAtItsOwnUse() throws IOException {
         Path[] ab = twoFilesInACircle();
         Fixture.check(workspace().analyze(ab[0]));

@@ -1,9 +1,8 @@
 package dev.plumb.stdlib;
 
-import static dev.plumb.stdlib.PropertiesTest.Warnings.n;
+import static dev.plumb.stdlib.RangeAssertions.n;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.plumb.stdlib.PropertiesTest.Warnings;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -109,10 +108,10 @@ class AtmosphereTest {
     @Test
     void range() {
         for (String f : new String[] {"isa_temperature", "isa_pressure", "isa_density", "isa_viscosity"}) {
-            Warnings.assertClean(f + "(-5 km)");
-            Warnings.assertClean(f + "(20 km)");
-            Warnings.assertOutside(f + "(-5.1 km)", f, n(-5.1, -5100), n(-5, -5000));
-            Warnings.assertOutside(f + "(20.5 km)", f, n(20.5, 20500), n(20, 20000));
+            RangeAssertions.assertClean(f + "(-5 km)");
+            RangeAssertions.assertClean(f + "(20 km)");
+            RangeAssertions.assertOutsideShowing(f + "(-5.1 km)", f, n(-5.1, -5100), n(-5, -5000));
+            RangeAssertions.assertOutsideShowing(f + "(20.5 km)", f, n(20.5, 20500), n(20, 20000));
         }
     }
 

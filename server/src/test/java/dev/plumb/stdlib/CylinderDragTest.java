@@ -1,8 +1,8 @@
 package dev.plumb.stdlib;
 
-import static dev.plumb.stdlib.SphereDragTest.assertInRange;
-import static dev.plumb.stdlib.SphereDragTest.assertNotOffered;
-import static dev.plumb.stdlib.SphereDragTest.assertOutside;
+import static dev.plumb.stdlib.RangeAssertions.assertInRange;
+import static dev.plumb.stdlib.RangeAssertions.assertNotOffered;
+import static dev.plumb.stdlib.RangeAssertions.assertOutside;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

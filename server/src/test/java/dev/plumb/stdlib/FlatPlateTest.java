@@ -1,11 +1,10 @@
 package dev.plumb.stdlib;
 
-import static dev.plumb.stdlib.PropertiesTest.Warnings.n;
+import static dev.plumb.stdlib.RangeAssertions.n;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.plumb.diagnostics.Diagnostic;
-import dev.plumb.stdlib.PropertiesTest.Warnings;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -212,21 +211,21 @@ class FlatPlateTest {
     @MethodSource("ranges")
     void endsOfTheRangeAreQuiet(String name, double lo, double hi) {
         // A document whose Re_crit equals the end is in neither regime's warning zone there.
-        Warnings.assertCleanDocument("Re_crit = " + lo + "\nx = " + name + "(" + lo + ")\n");
-        Warnings.assertCleanDocument("Re_crit = " + hi + "\nx = " + name + "(" + hi + ")\n");
+        RangeAssertions.assertCleanDocument("Re_crit = " + lo + "\nx = " + name + "(" + lo + ")\n");
+        RangeAssertions.assertCleanDocument("Re_crit = " + hi + "\nx = " + name + "(" + hi + ")\n");
     }
 
     @ParameterizedTest(name = "{0}")
     @MethodSource("ranges")
     void justOutsideTheRangeIsWarnedWithTheNumbers(String name, double lo, double hi) {
-        Warnings.assertOutside(name + "(" + lo * 0.99 + ")", name, n(lo * 0.99), n(lo));
-        Warnings.assertOutside(name + "(" + hi * 1.01 + ")", name, n(hi * 1.01), n(hi));
+        RangeAssertions.assertOutsideShowing(name + "(" + lo * 0.99 + ")", name, n(lo * 0.99), n(lo));
+        RangeAssertions.assertOutsideShowing(name + "(" + hi * 1.01 + ")", name, n(hi * 1.01), n(hi));
     }
 
     @Test
     void theWarningListsCorrelationsThatDoCoverTheValue() {
         // Blasius beyond 3e6: the turbulent averages of the same family cover 4e6.
-        Diagnostic w = Warnings.assertOutside("cf_plate_blasius_avg(4e6)", "cf_plate_blasius_avg", n(4e6), n(3e6));
+        Diagnostic w = RangeAssertions.assertOutsideShowing("cf_plate_blasius_avg(4e6)", "cf_plate_blasius_avg", n(4e6), n(3e6));
         assertTrue(w.message().contains("cf_plate_prandtl_schlichting"), w::message);
     }
 
@@ -234,18 +233,18 @@ class FlatPlateTest {
 
     @Test
     void laminarFormulaAboveReCritPointsToTheMixedFlowCorrelation() {
-        Diagnostic w = Warnings.assertOneWarning("x = cf_plate_blasius_avg(1e6)\n", Warnings.REGIME,
+        Diagnostic w = RangeAssertions.assertOneWarning("x = cf_plate_blasius_avg(1e6)\n", RangeAssertions.REGIME,
             "cf_plate_blasius_avg", n(1e6), n(5e5));
         assertTrue(w.message().contains("cf_plate_mixed"), w::message);
-        Warnings.assertNone("x = cf_plate_blasius_avg(1e6)\n", Warnings.OUTSIDE);
+        RangeAssertions.assertNone("x = cf_plate_blasius_avg(1e6)\n", RangeAssertions.OUTSIDE);
     }
 
     @Test
     void everyLaminarFormulaIsWarnedAboveReCrit() {
         for (String f : new String[] {"cf_plate_blasius_local", "cf_plate_blasius_avg", "delta99_plate_blasius",
             "delta_star_plate_blasius", "theta_plate_blasius"}) {
-            Warnings.assertOneWarning("x = " + f + "(6e5)\n", Warnings.REGIME, f, n(6e5), n(5e5));
-            Warnings.assertClean(f + "(5e5)");
+            RangeAssertions.assertOneWarning("x = " + f + "(6e5)\n", RangeAssertions.REGIME, f, n(6e5), n(5e5));
+            RangeAssertions.assertClean(f + "(5e5)");
         }
     }
 
@@ -253,31 +252,31 @@ class FlatPlateTest {
     void turbulentFormulaBelowReCritIsWarned() {
         for (String f : new String[] {"cf_plate_turb_local", "cf_plate_turb_avg", "delta_plate_turb",
             "cf_plate_prandtl_schlichting", "cf_ittc1957"}) {
-            Warnings.assertOneWarning("x = " + f + "(4e5)\n", Warnings.REGIME, f, n(4e5), n(5e5));
+            RangeAssertions.assertOneWarning("x = " + f + "(4e5)\n", RangeAssertions.REGIME, f, n(4e5), n(5e5));
         }
         // The ITTC line reaches below Re_crit: only the regime is warned there.
-        Warnings.assertNone("x = cf_ittc1957(4e5)\n", Warnings.OUTSIDE);
+        RangeAssertions.assertNone("x = cf_ittc1957(4e5)\n", RangeAssertions.OUTSIDE);
     }
 
     @Test
     void mixedFormulasHaveNoRegime() {
-        Warnings.assertClean("cf_plate_mixed(6e5)");
-        Warnings.assertClean("cf_plate_ps_mixed_3e5(4e5)");
+        RangeAssertions.assertClean("cf_plate_mixed(6e5)");
+        RangeAssertions.assertClean("cf_plate_ps_mixed_3e5(4e5)");
     }
 
     @Test
     void aDocumentsReCritMovesTheThreshold() {
         // Laminar at 4e5: fine with the library's 5e5, warned once the document says 3e5.
-        Warnings.assertClean("cf_plate_blasius_avg(4e5)");
-        Warnings.assertOneWarning("Re_crit = 3e5\nx = cf_plate_blasius_avg(4e5)\n", Warnings.REGIME,
+        RangeAssertions.assertClean("cf_plate_blasius_avg(4e5)");
+        RangeAssertions.assertOneWarning("Re_crit = 3e5\nx = cf_plate_blasius_avg(4e5)\n", RangeAssertions.REGIME,
             "cf_plate_blasius_avg", n(4e5), n(3e5));
         // Turbulent at 4e5: warned with 5e5, not with 3e5 (the range warning of the 1/7 law stays).
-        Warnings.assertOneWarning("x = cf_plate_turb_avg(4e5)\n", Warnings.REGIME, "cf_plate_turb_avg", n(4e5), n(5e5));
-        Warnings.assertNone("Re_crit = 3e5\nx = cf_plate_turb_avg(4e5)\n", Warnings.REGIME);
-        Warnings.assertOneWarning("Re_crit = 3e5\nx = cf_plate_turb_avg(4e5)\n", Warnings.OUTSIDE,
+        RangeAssertions.assertOneWarning("x = cf_plate_turb_avg(4e5)\n", RangeAssertions.REGIME, "cf_plate_turb_avg", n(4e5), n(5e5));
+        RangeAssertions.assertNone("Re_crit = 3e5\nx = cf_plate_turb_avg(4e5)\n", RangeAssertions.REGIME);
+        RangeAssertions.assertOneWarning("Re_crit = 3e5\nx = cf_plate_turb_avg(4e5)\n", RangeAssertions.OUTSIDE,
             "cf_plate_turb_avg", n(4e5), n(5e5));
         // And upwards: a document with Re_crit = 1e6 may use Blasius at 8e5 without a warning.
-        Warnings.assertCleanDocument("Re_crit = 1e6\nx = cf_plate_blasius_avg(8e5)\n");
+        RangeAssertions.assertCleanDocument("Re_crit = 1e6\nx = cf_plate_blasius_avg(8e5)\n");
     }
 
     @Test

@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.diagnostics.Diagnostic;
-import dev.plumb.stdlib.PropertiesTest.Warnings;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -81,10 +80,10 @@ class ForcesTest {
 
     @Test
     void helpersHaveNoRangeToWarnAbout() {
-        Warnings.assertClean("dynamic_pressure(1.225 kg/m^3, 300 m/s)");
-        Warnings.assertClean("reynolds(1.225 kg/m^3, 0.001 m/s, 1 mm, 1.7894e-5 Pa*s)");
-        Warnings.assertClean("drag_force(0, 1 m^2, 1 Pa)");
-        Warnings.assertClean("drag_from_resultant(1 N, 180 deg)");
+        RangeAssertions.assertClean("dynamic_pressure(1.225 kg/m^3, 300 m/s)");
+        RangeAssertions.assertClean("reynolds(1.225 kg/m^3, 0.001 m/s, 1 mm, 1.7894e-5 Pa*s)");
+        RangeAssertions.assertClean("drag_force(0, 1 m^2, 1 Pa)");
+        RangeAssertions.assertClean("drag_from_resultant(1 N, 180 deg)");
     }
 
     @Test
@@ -100,7 +99,7 @@ class ForcesTest {
             q   = dynamic_pressure(rho, V)
             F   = drag_force(1.2, 3.2 m * 1.4 m, q)   in kN
             """);
-        assertTrue(Warnings.errors(a.diagnostics()).isEmpty(), () -> "" + a.diagnostics());
+        assertTrue(RangeAssertions.errors(a.diagnostics()).isEmpty(), () -> "" + a.diagnostics());
         double rho = 99800.0 / (287.05 * 285.15);
         double expected = 1.2 * 3.2 * 1.4 * 0.5 * rho * 31 * 31;
         double f = a.rows().stream()

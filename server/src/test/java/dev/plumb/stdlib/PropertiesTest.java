@@ -2,16 +2,11 @@ package dev.plumb.stdlib;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.diagnostics.Diagnostic;
-import dev.plumb.diagnostics.Severity;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -30,7 +25,7 @@ class PropertiesTest {
     @Test
     void aDocumentMayShadowReCrit() {
         Analysis a = StdlibCheck.analyze("Re_crit = 3e5\nx = 2 * Re_crit\n");
-        assertTrue(Warnings.errors(a.diagnostics()).isEmpty(), () -> "" + a.diagnostics());
+        assertTrue(RangeAssertions.errors(a.diagnostics()).isEmpty(), () -> "" + a.diagnostics());
         double x = a.rows().stream()
             .filter(r -> r instanceof Row.ValueRow v && v.name().equals("x"))
             .mapToDouble(r -> ((Row.ValueRow) r).value().si())
@@ -64,15 +59,15 @@ class PropertiesTest {
 
     @Test
     void airDensityRange() {
-        Warnings.assertClean("air_density(200 K, 101325 Pa)");
-        Warnings.assertClean("air_density(1000 K, 101325 Pa)");
-        Warnings.assertClean("air_density(288.15 K, 1 Pa)");
-        Warnings.assertClean("air_density(288.15 K, 1 MPa)");
-        Warnings.assertOutside("air_density(199 K, 101325 Pa)", "air_density", Warnings.n(199), Warnings.n(200));
-        Warnings.assertOutside("air_density(1010 K, 101325 Pa)", "air_density", Warnings.n(1010), Warnings.n(1000));
-        Warnings.assertOutside("air_density(288.15 K, 0.99 Pa)", "air_density", Warnings.n(0.99), Warnings.n(1));
-        Warnings.assertOutside("air_density(288.15 K, 1.01 MPa)", "air_density",
-            Warnings.n(1.01e6, 1.01, 1010), Warnings.n(1e6, 1, 1000));
+        RangeAssertions.assertClean("air_density(200 K, 101325 Pa)");
+        RangeAssertions.assertClean("air_density(1000 K, 101325 Pa)");
+        RangeAssertions.assertClean("air_density(288.15 K, 1 Pa)");
+        RangeAssertions.assertClean("air_density(288.15 K, 1 MPa)");
+        RangeAssertions.assertOutsideShowing("air_density(199 K, 101325 Pa)", "air_density", RangeAssertions.n(199), RangeAssertions.n(200));
+        RangeAssertions.assertOutsideShowing("air_density(1010 K, 101325 Pa)", "air_density", RangeAssertions.n(1010), RangeAssertions.n(1000));
+        RangeAssertions.assertOutsideShowing("air_density(288.15 K, 0.99 Pa)", "air_density", RangeAssertions.n(0.99), RangeAssertions.n(1));
+        RangeAssertions.assertOutsideShowing("air_density(288.15 K, 1.01 MPa)", "air_density",
+            RangeAssertions.n(1.01e6, 1.01, 1010), RangeAssertions.n(1e6, 1, 1000));
     }
 
     @Test
@@ -131,10 +126,10 @@ class PropertiesTest {
 
     @Test
     void airViscosityRange() {
-        Warnings.assertClean("air_viscosity(170 K)");
-        Warnings.assertClean("air_viscosity(1900 K)");
-        Warnings.assertOutside("air_viscosity(169 K)", "air_viscosity", Warnings.n(169), Warnings.n(170));
-        Warnings.assertOutside("air_viscosity(1910 K)", "air_viscosity", Warnings.n(1910), Warnings.n(1900));
+        RangeAssertions.assertClean("air_viscosity(170 K)");
+        RangeAssertions.assertClean("air_viscosity(1900 K)");
+        RangeAssertions.assertOutsideShowing("air_viscosity(169 K)", "air_viscosity", RangeAssertions.n(169), RangeAssertions.n(170));
+        RangeAssertions.assertOutsideShowing("air_viscosity(1910 K)", "air_viscosity", RangeAssertions.n(1910), RangeAssertions.n(1900));
     }
 
     // ---------------------------------------------------------------- air kinematic viscosity
@@ -156,15 +151,15 @@ class PropertiesTest {
 
     @Test
     void airKinematicViscosityRange() {
-        Warnings.assertClean("air_nu(200 K, 101325 Pa)");
-        Warnings.assertClean("air_nu(1000 K, 101325 Pa)");
-        Warnings.assertClean("air_nu(288.15 K, 1 Pa)");
-        Warnings.assertClean("air_nu(288.15 K, 1 MPa)");
-        Warnings.assertOutside("air_nu(199 K, 101325 Pa)", "air_nu", Warnings.n(199), Warnings.n(200));
-        Warnings.assertOutside("air_nu(1010 K, 101325 Pa)", "air_nu", Warnings.n(1010), Warnings.n(1000));
-        Warnings.assertOutside("air_nu(288.15 K, 0.99 Pa)", "air_nu", Warnings.n(0.99), Warnings.n(1));
-        Warnings.assertOutside("air_nu(288.15 K, 1.01 MPa)", "air_nu",
-            Warnings.n(1.01e6, 1.01, 1010), Warnings.n(1e6, 1, 1000));
+        RangeAssertions.assertClean("air_nu(200 K, 101325 Pa)");
+        RangeAssertions.assertClean("air_nu(1000 K, 101325 Pa)");
+        RangeAssertions.assertClean("air_nu(288.15 K, 1 Pa)");
+        RangeAssertions.assertClean("air_nu(288.15 K, 1 MPa)");
+        RangeAssertions.assertOutsideShowing("air_nu(199 K, 101325 Pa)", "air_nu", RangeAssertions.n(199), RangeAssertions.n(200));
+        RangeAssertions.assertOutsideShowing("air_nu(1010 K, 101325 Pa)", "air_nu", RangeAssertions.n(1010), RangeAssertions.n(1000));
+        RangeAssertions.assertOutsideShowing("air_nu(288.15 K, 0.99 Pa)", "air_nu", RangeAssertions.n(0.99), RangeAssertions.n(1));
+        RangeAssertions.assertOutsideShowing("air_nu(288.15 K, 1.01 MPa)", "air_nu",
+            RangeAssertions.n(1.01e6, 1.01, 1010), RangeAssertions.n(1e6, 1, 1000));
     }
 
     // ---------------------------------------------------------------- water
@@ -292,14 +287,14 @@ class PropertiesTest {
     @Test
     void waterRange() {
         for (String f : new String[] {"water.rho", "water.mu", "water_nu"}) {
-            Warnings.assertClean(f + "(0 degC)");
-            Warnings.assertClean(f + "(99.6 degC)");
+            RangeAssertions.assertClean(f + "(0 degC)");
+            RangeAssertions.assertClean(f + "(99.6 degC)");
             // Beyond the rows: extrapolated, and warned like a range violation.
             // 272.15 K is -1 °C (a minus sign before a °C reading would negate the absolute value).
-            Warnings.assertOutside(f + "(272.15 K)", f.startsWith("water.") ? "water" : f,
-                Warnings.n(-1, 272.15), Warnings.n(0, 273.15));
-            Warnings.assertOutside(f + "(100 degC)", f.startsWith("water.") ? "water" : f,
-                Warnings.n(100, 373.15), Warnings.n(99.6, 372.75));
+            RangeAssertions.assertOutsideShowing(f + "(272.15 K)", f.startsWith("water.") ? "water" : f,
+                RangeAssertions.n(-1, 272.15), RangeAssertions.n(0, 273.15));
+            RangeAssertions.assertOutsideShowing(f + "(100 degC)", f.startsWith("water.") ? "water" : f,
+                RangeAssertions.n(100, 373.15), RangeAssertions.n(99.6, 372.75));
         }
     }
 
@@ -307,110 +302,5 @@ class PropertiesTest {
     void waterRefusesANonTemperature() {
         List<Diagnostic> d = StdlibCheck.diagnostics("water.rho(20 m)");
         assertTrue(d.stream().anyMatch(x -> x.code().id().equals("unit.mismatch")), () -> "" + d);
-    }
-
-    // ---------------------------------------------------------------- shared helpers
-
-    /** Assertions on the range and regime warnings of a standard-library call. */
-    static final class Warnings {
-        private Warnings() {
-        }
-
-        static final String OUTSIDE = "range.outside";
-        static final String REGIME = "range.regime";
-
-        /** Alternatives for one number a message must show (e.g. the value in SI or as written). */
-        static double[] n(double... alternatives) {
-            return alternatives;
-        }
-
-        static List<Diagnostic> errors(List<Diagnostic> all) {
-            return all.stream().filter(d -> d.severity() == Severity.ERROR).toList();
-        }
-
-        static List<Diagnostic> withCode(List<Diagnostic> all, String code) {
-            return all.stream().filter(d -> d.code().id().equals(code)).toList();
-        }
-
-        /** The call evaluates with no error and no warning at all. */
-        static void assertClean(String expression) {
-            assertCleanDocument("x = " + expression + "\n");
-        }
-
-        static void assertCleanDocument(String document) {
-            List<Diagnostic> d = StdlibCheck.analyze(document).diagnostics();
-            List<Diagnostic> loud = d.stream()
-                .filter(x -> x.severity() == Severity.ERROR || x.severity() == Severity.WARNING).toList();
-            assertTrue(loud.isEmpty(), () -> document.strip() + ": expected no warning, got " + loud);
-        }
-
-        /**
-         * The call evaluates without error and gives exactly one range.outside warning, whose
-         * message names the correlation and shows each of the numbers (one of each group's
-         * alternatives).
-         */
-        static Diagnostic assertOutside(String expression, String name, double[]... numbers) {
-            return assertOneWarning("x = " + expression + "\n", OUTSIDE, name, numbers);
-        }
-
-        static Diagnostic assertOneWarning(String document, String code, String name, double[]... numbers) {
-            List<Diagnostic> all = StdlibCheck.analyze(document).diagnostics();
-            assertTrue(errors(all).isEmpty(), () -> document.strip() + ": unexpected errors " + all);
-            List<Diagnostic> hits = withCode(all, code);
-            assertEquals(1, hits.size(), () -> document.strip() + ": expected one " + code + ", got " + all);
-            Diagnostic w = hits.get(0);
-            assertEquals(Severity.WARNING, w.severity(), w::toString);
-            assertTrue(w.message().contains(name), () -> "message should name " + name + ": " + w.message());
-            for (double[] group : numbers) assertMentions(w.message(), group);
-            return w;
-        }
-
-        static void assertNone(String document, String code) {
-            List<Diagnostic> all = StdlibCheck.analyze(document).diagnostics();
-            assertTrue(errors(all).isEmpty(), () -> document.strip() + ": unexpected errors " + all);
-            assertTrue(withCode(all, code).isEmpty(), () -> document.strip() + ": expected no " + code + ", got " + all);
-        }
-
-        // A number as a message may write it: 1.01, -1, 5e5, 5E+05, 5×10⁵, 5·10^5, 500000, with
-        // an ASCII or Unicode minus.
-        private static final Pattern NUMBER = Pattern.compile(
-            "([-−]?\\d+(?:\\.\\d+)?)"
-                + "(?:[eE]([-−+]?\\d+)"
-                + "|\\s?[×x·*]\\s?10(?:\\^\\(?([-−+]?\\d+)\\)?|([⁻⁺]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+)))?");
-
-        static List<Double> numbersIn(String message) {
-            List<Double> out = new ArrayList<>();
-            Matcher m = NUMBER.matcher(message);
-            while (m.find()) {
-                double mantissa = Double.parseDouble(m.group(1).replace('−', '-'));
-                int exponent = 0;
-                if (m.group(2) != null) exponent = Integer.parseInt(m.group(2).replace('−', '-').replace("+", ""));
-                else if (m.group(3) != null) exponent = Integer.parseInt(m.group(3).replace('−', '-').replace("+", ""));
-                else if (m.group(4) != null) exponent = superscript(m.group(4));
-                out.add(mantissa * Math.pow(10, exponent));
-            }
-            return out;
-        }
-
-        private static int superscript(String s) {
-            String digits = "⁰¹²³⁴⁵⁶⁷⁸⁹";
-            int sign = 1, value = 0;
-            for (char c : s.toCharArray()) {
-                if (c == '⁻') sign = -1;
-                else if (c != '⁺') value = value * 10 + digits.indexOf(c);
-            }
-            return sign * value;
-        }
-
-        /** The message shows one of the alternatives, to the 4 significant figures values are shown with. */
-        static void assertMentions(String message, double... alternatives) {
-            List<Double> found = numbersIn(message);
-            for (double want : alternatives) {
-                for (double got : found) {
-                    if (want == 0 ? Math.abs(got) < 1e-12 : Math.abs(got - want) <= 6e-4 * Math.abs(want)) return;
-                }
-            }
-            fail("message should show one of " + java.util.Arrays.toString(alternatives) + ": " + message);
-        }
     }
 }

@@ -73,6 +73,19 @@ class ReparseTest {
         assertEquals(SourceParser.parse(edited).diagnostics(), SourceParser.reparse(parsed, edited).diagnostics());
     }
 
+    @Test
+    void aLineEmptiedAfterAnInvisibleFirstCharacterCutsAsAFreshParse() {
+        // Found by the fuzzer (EngineFuzzTestInputs/anyEditReparsesAsAFreshParse/chunk-cut-after-edit):
+        // a byte-order mark or a character no token takes was the line's only text after the edit.
+        for (String first : List.of("\uFEFF", "\u0000", "!")) {
+            String text = "x = 1\n" + first + "ab\ny = 2\n";
+            String edited = "x = 1\n" + first + "\ny = 2\n";
+            ParsedSource reparsed = SourceParser.reparse(SourceParser.parse(text), edited);
+            assertEquals(SourceParser.parse(edited).chunks(), reparsed.chunks(), first);
+            assertEquals(SourceParser.parse(edited).statements(), reparsed.statements(), first);
+        }
+    }
+
     /** Replaces a random stretch (up to a few lines) with a random fragment, never inside a surrogate pair. */
     private static String edit(String text, Random random) {
         int start = boundary(text, random.nextInt(text.length() + 1));
