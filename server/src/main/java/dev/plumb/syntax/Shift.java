@@ -5,6 +5,7 @@ import dev.plumb.diagnostics.Related;
 import dev.plumb.diagnostics.Span;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 
 /**
  * Moves syntax results by a number of UTF-16 units: a statement read once keeps its meaning when
@@ -20,22 +21,23 @@ final class Shift {
     static List<Statement> statements(List<Statement> in, int by) {
         if (by == 0) return in;
         Shift s = new Shift(by);
-        List<Statement> out = new ArrayList<>(in.size());
-        for (Statement st : in) out.add(s.statement(st));
-        return out;
+        return s.each(in, s::statement);
     }
 
     static List<Diagnostic> diagnostics(List<Diagnostic> in, int by) {
         if (by == 0) return in;
         Shift s = new Shift(by);
-        List<Diagnostic> out = new ArrayList<>(in.size());
-        for (Diagnostic d : in) out.add(s.diagnostic(d));
+        return s.each(in, s::diagnostic);
+    }
+
+    private <T> List<T> each(List<T> in, Function<T, T> moved) {
+        List<T> out = new ArrayList<>(in.size());
+        for (T t : in) out.add(moved.apply(t));
         return out;
     }
 
     private Diagnostic diagnostic(Diagnostic d) {
-        List<Related> related = new ArrayList<>(d.related().size());
-        for (Related r : d.related()) related.add(new Related(r.file(), span(r.span()), r.message()));
+        List<Related> related = each(d.related(), r -> new Related(r.file(), span(r.span()), r.message()));
         return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related);
     }
 
@@ -52,21 +54,15 @@ final class Shift {
     }
 
     private List<Ident> idents(List<Ident> in) {
-        List<Ident> out = new ArrayList<>(in.size());
-        for (Ident i : in) out.add(ident(i));
-        return out;
+        return each(in, this::ident);
     }
 
     private List<Expr> exprs(List<Expr> in) {
-        List<Expr> out = new ArrayList<>(in.size());
-        for (Expr e : in) out.add(expr(e));
-        return out;
+        return each(in, this::expr);
     }
 
     private List<Statement.Bound> bounds(List<Statement.Bound> in) {
-        List<Statement.Bound> out = new ArrayList<>(in.size());
-        for (Statement.Bound b : in) out.add(bound(b));
-        return out;
+        return each(in, this::bound);
     }
 
     private Statement.Bound bound(Statement.Bound b) {
@@ -107,20 +103,15 @@ final class Shift {
                 expr(f.lhs()), expr(f.rhs()), span(f.equation()), unit(f.displayUnit()), ident(f.basis()), f.note());
         }
         if (s instanceof Statement.Correlation c) {
-            List<Statement.Param> params = new ArrayList<>(c.params().size());
-            for (Statement.Param p : c.params()) params.add(param(p));
-            List<Statement.Piece> pieces = new ArrayList<>(c.pieces().size());
-            for (Statement.Piece p : c.pieces()) {
-                pieces.add(new Statement.Piece(span(p.span()), expr(p.expr()), bound(p.condition()), p.otherwise()));
-            }
+            List<Statement.Param> params = each(c.params(), this::param);
+            List<Statement.Piece> pieces = each(c.pieces(),
+                p -> new Statement.Piece(span(p.span()), expr(p.expr()), bound(p.condition()), p.otherwise()));
             return new Statement.Correlation(span(c.span()), ident(c.name()), params, c.title(), c.source(),
                 ident(c.family()), ident(c.basis()), bounds(c.valid()), ident(c.regime()), expr(c.accuracy()), pieces);
         }
         if (s instanceof Statement.Table t) {
-            List<Statement.Column> columns = new ArrayList<>(t.columns().size());
-            for (Statement.Column c : t.columns()) columns.add(new Statement.Column(ident(c.name()), unit(c.unit())));
-            List<Statement.Row> rows = new ArrayList<>(t.rows().size());
-            for (Statement.Row r : t.rows()) rows.add(new Statement.Row(span(r.span()), r.numbers()));
+            List<Statement.Column> columns = each(t.columns(), c -> new Statement.Column(ident(c.name()), unit(c.unit())));
+            List<Statement.Row> rows = each(t.rows(), r -> new Statement.Row(span(r.span()), r.numbers()));
             return new Statement.Table(span(t.span()), ident(t.name()), param(t.param()), t.title(), t.source(),
                 ident(t.family()), ident(t.basis()), bounds(t.valid()), expr(t.accuracy()), ident(t.interpolate()),
                 columns, rows);

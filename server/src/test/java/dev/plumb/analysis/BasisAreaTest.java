@@ -1,12 +1,8 @@
 package dev.plumb.analysis;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.plumb.diagnostics.Code;
-import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Severity;
-import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -90,17 +86,6 @@ class BasisAreaTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("pairings")
     void pairing(String name, String calc, Severity severity, String fragment) {
-        Analysis a = Fixture.analyze(AIR + calc);
-        List<Diagnostic> found = a.diagnostics().stream().filter(d -> d.code() == Code.BASIS_AREA).toList();
-        List<Diagnostic> others = a.diagnostics().stream()
-            .filter(d -> d.code() != Code.BASIS_AREA && d.severity() != Severity.HINT).toList();
-        assertEquals(List.of(), others, "the calc itself is clean");
-        if (severity == null) {
-            assertEquals(List.of(), found);
-            return;
-        }
-        assertEquals(1, found.size(), found.toString());
-        assertEquals(severity, found.get(0).severity());
-        assertTrue(found.get(0).message().contains(fragment), found.get(0).message());
+        Fixture.assertOneFinding(AIR + calc, Code.BASIS_AREA, severity, fragment);
     }
 }

@@ -1,12 +1,8 @@
 package dev.plumb.analysis;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.plumb.diagnostics.Code;
-import dev.plumb.diagnostics.Diagnostic;
 import dev.plumb.diagnostics.Severity;
-import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -79,17 +75,6 @@ class BasisDensityTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("uses")
     void use(String name, String calc, boolean finding, String fragment) {
-        Analysis a = Fixture.analyze(CASE + calc);
-        List<Diagnostic> found = a.diagnostics().stream().filter(d -> d.code() == Code.BASIS_DENSITY).toList();
-        List<Diagnostic> others = a.diagnostics().stream()
-            .filter(d -> d.code() != Code.BASIS_DENSITY && d.severity() != Severity.HINT).toList();
-        assertEquals(List.of(), others, "the calc itself is clean");
-        if (!finding) {
-            assertEquals(List.of(), found);
-            return;
-        }
-        assertEquals(1, found.size(), found.toString());
-        assertEquals(Severity.WARNING, found.get(0).severity());
-        assertTrue(found.get(0).message().contains(fragment), found.get(0).message());
+        Fixture.assertOneFinding(CASE + calc, Code.BASIS_DENSITY, finding ? Severity.WARNING : null, fragment);
     }
 }

@@ -1,9 +1,12 @@
 package dev.plumb.analysis;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import dev.plumb.diagnostics.Code;
 import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Severity;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -106,6 +109,25 @@ final class Fixture {
 
     static Analysis analyze(String text) {
         return new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(FILE, text);
+    }
+
+    /**
+     * The calc has no error or warning but of {@code code}, and of that exactly one finding of
+     * {@code severity} whose message contains {@code fragment}; none at all when severity is null.
+     */
+    static void assertOneFinding(String calc, Code code, Severity severity, String fragment) {
+        Analysis a = analyze(calc);
+        List<Diagnostic> found = a.diagnostics().stream().filter(d -> d.code() == code).toList();
+        List<Diagnostic> others = a.diagnostics().stream()
+            .filter(d -> d.code() != code && d.severity() != Severity.HINT).toList();
+        assertEquals(List.of(), others, "the calc itself is clean");
+        if (severity == null) {
+            assertEquals(List.of(), found);
+            return;
+        }
+        assertEquals(1, found.size(), found.toString());
+        assertEquals(severity, found.get(0).severity());
+        assertTrue(found.get(0).message().contains(fragment), found.get(0).message());
     }
 
     /** The result row of a defined value, by name. */

@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.TimeUnit;
 import org.eclipse.lsp4j.ClientCapabilities;
+import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CodeActionContext;
 import org.eclipse.lsp4j.CodeActionParams;
 import org.eclipse.lsp4j.CompletionItem;
@@ -59,6 +60,13 @@ class FeaturesTest {
         Files.writeString(p, text);
         client.open(p.toUri().toString(), text);
         return client.remote.getTextDocumentService();
+    }
+
+    /** Opens a document and asks for the code actions over a range. */
+    private List<CodeAction> actions(String name, String text, Range range) throws Exception {
+        TextDocumentService s = open(name, text, null);
+        return s.codeAction(new CodeActionParams(doc(uri(name)), range, new CodeActionContext(List.of())))
+            .get(10, TimeUnit.SECONDS).stream().map(e -> e.getRight()).toList();
     }
 
     private String uri(String name) {
@@ -140,11 +148,8 @@ class FeaturesTest {
     void quickFixesAndTheSiRefactor() throws Exception {
         String text = "input Cd = 1.1\ninput A = 2 m^2\nF = Cd A\nL = 3 mtr\nC = cd_sphere_stokes(50)\nq = 2 kPa\n"
             + "P = q * A in m\n";
-        TextDocumentService s = open("x.plumb", text, null);
-        String u = uri("x.plumb");
-        List<String> titles = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(2, 0), new Position(6, 14)),
-            new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS).stream()
-            .map(e -> e.getRight().getTitle()).toList();
+        List<String> titles = actions("x.plumb", text, new Range(new Position(2, 0), new Position(6, 14))).stream()
+            .map(CodeAction::getTitle).toList();
         assertTrue(titles.contains("Insert '*'"), titles.toString());
         assertTrue(titles.contains("Change to 'm'"), titles.toString());
         assertTrue(titles.stream().anyMatch(t -> t.startsWith("Use cd_sphere_sn")), titles.toString());
@@ -168,12 +173,9 @@ class FeaturesTest {
     void aLateralSurfaceIsSwappedForTheProjectedArea() throws Exception {
         String text = "input d = 0.3 m\ninput L = 2 m\nq = 500 Pa\nCd = cd_cylinder(1e5)\nA_side = pi * d * L   \"tube\"\n"
             + "F = Cd * A_side * q\n";
-        TextDocumentService s = open("area.plumb", text, null);
         String u = uri("area.plumb");
-        var actions = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(5, 0), new Position(5, 18)),
-            new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS);
-        var swap = actions.stream().map(e -> e.getRight()).filter(a -> a.getTitle().startsWith("Use the frontal area"))
-            .findFirst().orElseThrow();
+        var swap = actions("area.plumb", text, new Range(new Position(5, 0), new Position(5, 18))).stream()
+            .filter(a -> a.getTitle().startsWith("Use the frontal area")).findFirst().orElseThrow();
         assertEquals("Use the frontal area d * L for A_side", swap.getTitle());
         var edit = swap.getEdit().getChanges().get(u).get(0);
         assertEquals("d * L", edit.getNewText());
@@ -184,12 +186,9 @@ class FeaturesTest {
     void aBodysDensityPassedForTheFluidsIsSwappedForTheFluids() throws Exception {
         String text = "input rho_air = 1.2 kg/m^3   as fluid\ninput rho_ice = 900 kg/m^3   as body\ninput V = 25 m/s\n"
             + "q = dynamic_pressure(rho_ice, V)\n";
-        TextDocumentService s = open("density.plumb", text, null);
         String u = uri("density.plumb");
-        var actions = s.codeAction(new CodeActionParams(doc(u), new Range(new Position(3, 21), new Position(3, 21)),
-            new CodeActionContext(List.of()))).get(10, TimeUnit.SECONDS);
-        var swap = actions.stream().map(e -> e.getRight()).filter(a -> a.getTitle().startsWith("Use rho_"))
-            .toList();
+        var swap = actions("density.plumb", text, new Range(new Position(3, 21), new Position(3, 21))).stream()
+            .filter(a -> a.getTitle().startsWith("Use rho_")).toList();
         assertEquals(List.of("Use rho_air (tagged fluid)"), swap.stream().map(a -> a.getTitle()).toList());
         var edit = swap.get(0).getEdit().getChanges().get(u).get(0);
         assertEquals("rho_air", edit.getNewText());
