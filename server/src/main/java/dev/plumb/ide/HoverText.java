@@ -50,6 +50,7 @@ public final class HoverText {
         out.append("\n\n").append(v.dimension().isDimensionless() ? "a dimensionless number"
             : v.dimension().describe() + "; in SI " + QuantityFormat.format(v.si(), DisplayUnits.defaultFor(v.dimension()), 6));
         if (b.input()) out.append("\n\ninput");
+        if (b.basis() != null) out.append("\n\n").append(tagged(b.basis()));
         if (row != null && row.note() != null) out.append("\n\n").append(row.note());
         String formula = row == null ? null : formula(a, row);
         if (formula != null) out.append("\n\n").append(formula);
@@ -65,6 +66,15 @@ public final class HoverText {
         }
         if (b.file() != null && !b.file().equals(a.file())) out.append("\n\ndefined in ").append(b.file().getFileName());
         return out.toString();
+    }
+
+    /** What an `as` tag says, in words. */
+    private static String tagged(String tag) {
+        return switch (tag) {
+            case "fluid" -> "`as fluid`: the density of the fluid (for dynamic pressure, forces, Reynolds numbers)";
+            case "body" -> "`as body`: the density of the body (for its weight; not for dynamic pressure)";
+            default -> "`as " + tag + "`: a " + tag + " area";
+        };
     }
 
     private static Row.ValueRow rowOf(Analysis a, String name, Binding.ValueBinding b) {

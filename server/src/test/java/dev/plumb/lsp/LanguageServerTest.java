@@ -136,6 +136,17 @@ class LanguageServerTest {
     }
 
     @Test
+    void hoverSaysWhoseDensityATaggedDensityIs() throws Exception {
+        start(capabilities(true, true, null));
+        Cursor c = Cursor.of("input rho_s = 2650 kg/m^3   as body\ninput rho_w = 1000 kg/m^3   as fluid\nr = rho_s$0 / rho_w\n");
+        String uri = uri("hd.plumb", c.text());
+        client.open(uri, c.text());
+        String md = client.remote.getTextDocumentService().hover(new HoverParams(new TextDocumentIdentifier(uri), c.at()))
+            .get(10, TimeUnit.SECONDS).getContents().getRight().getValue();
+        assertTrue(md.contains("`as body`: the density of the body"), md);
+    }
+
+    @Test
     void hoverOnACorrelationCallSaysWhereTheArgumentSits() throws Exception {
         start(capabilities(true, true, null));
         Cursor c = Cursor.of("a = cd_sph$0ere_sn(100)\nb = cd_sphere_sn(5000)\n");
