@@ -1,0 +1,67 @@
+;;; plumb-mode.el --- Plumb calc files, with values and checks from Plumb's language server  -*- lexical-binding: t; -*-
+
+;; A major mode for `.plumb' files and its registration with Eglot (Emacs 28 with the
+;; `elpa-eglot' package, or Emacs 29 and later where Eglot is built in).
+;;
+;; Use:
+;;   (add-to-list 'load-path "/path/to/plumb/editor-clients/emacs")
+;;   (require 'plumb-mode)
+;;   (setq plumb-server-command '("java" "-jar" "/path/to/plumb/server/target/plumb.jar" "lsp"))
+;;   (add-hook 'plumb-mode-hook #'eglot-ensure)
+;;
+;; Eglot before 1.12 shows neither inlay hints nor code lenses, so the server sends each
+;; line's value as a hint-level diagnostic (code `value'): Flymake lists them with the
+;; problems, and `M-x flymake-show-buffer-diagnostics' shows every value of the calc.
+
+;;; Code:
+
+(defgroup plumb nil
+  "Plumb calc files."
+  :group 'languages)
+
+(defcustom plumb-server-command '("plumb" "lsp")
+  "How to start Plumb's language server: a program and its arguments.
+The default expects the repository's `plumb' launcher on the PATH; `java -jar
+PLUMB_JAR lsp' works as well."
+  :type '(repeat string))
+
+(defvar plumb-mode-syntax-table
+  (let ((table (make-syntax-table)))
+    ;; `#' starts narrative or a comment that runs to the end of the line.
+    (modify-syntax-entry ?# "<" table)
+    (modify-syntax-entry ?\n ">" table)
+    (modify-syntax-entry ?\" "\"" table)
+    (modify-syntax-entry ?_ "_" table)
+    table)
+  "Syntax table of `plumb-mode'.")
+
+(defconst plumb-mode--keywords
+  '("input" "check" "find" "within" "guess" "so" "that" "use" "section" "title" "author"
+    "reviewer" "revision" "correlation" "table" "end" "when" "otherwise" "source" "family"
+    "basis" "valid" "regime" "accuracy" "interpolate" "in" "as")
+  "Statement and clause words of the Plumb language.")
+
+(defvar plumb-mode-font-lock-keywords
+  `((,(regexp-opt plumb-mode--keywords 'symbols) . font-lock-keyword-face)
+    ("^\\s-*\\(?:input\\s-+\\)?\\([[:alpha:]_][[:alnum:]_]*\\)\\s-*=" 1 font-lock-variable-name-face))
+  "Highlighting of `plumb-mode': statement words and the names being defined.")
+
+;;;###autoload
+(define-derived-mode plumb-mode prog-mode "Plumb"
+  "Major mode for Plumb calc files."
+  :syntax-table plumb-mode-syntax-table
+  (setq-local comment-start "# ")
+  (setq-local comment-start-skip "#+\\s-*")
+  (setq-local font-lock-defaults '(plumb-mode-font-lock-keywords)))
+
+;;;###autoload
+(add-to-list 'auto-mode-alist '("\\.plumb\\'" . plumb-mode))
+
+(with-eval-after-load 'eglot
+  (add-to-list 'eglot-server-programs
+               ;; A function, so that a later `setq' of `plumb-server-command' counts.
+               (cons 'plumb-mode (lambda (&rest _) plumb-server-command))))
+
+(provide 'plumb-mode)
+
+;;; plumb-mode.el ends here
