@@ -21,10 +21,13 @@ import org.eclipse.lsp4j.launch.LSPLauncher;
 import org.eclipse.lsp4j.services.LanguageClient;
 import org.eclipse.lsp4j.services.LanguageServer;
 
-/** An in-process editor: talks JSON-RPC to a real server over pipes and records what it is sent. */
+/**
+ * A test editor: talks JSON-RPC to a real server and records what it is sent. The server runs
+ * in this process over pipes, or is a separate process (then {@link #server} is null).
+ */
 final class TestClient implements LanguageClient {
     final BlockingQueue<PublishDiagnosticsParams> published = new LinkedBlockingQueue<>();
-    final PlumbLanguageServer server = new PlumbLanguageServer();
+    final PlumbLanguageServer server;
     final LanguageServer remote;
     InitializeResult initialized;
 
@@ -33,16 +36,29 @@ final class TestClient implements LanguageClient {
         PipedOutputStream clientOut = new PipedOutputStream(serverIn);
         PipedInputStream clientIn = new PipedInputStream(1 << 20);
         PipedOutputStream serverOut = new PipedOutputStream(clientIn);
+        server = new PlumbLanguageServer();
         var serverLauncher = LSPLauncher.createServerLauncher(server, serverIn, serverOut);
         server.connect(serverLauncher.getRemoteProxy());
         serverLauncher.startListening();
-        var clientLauncher = LSPLauncher.createClientLauncher(this, clientIn, clientOut);
+        remote = connect(clientIn, clientOut, capabilities, options);
+    }
+
+    /** A client of a server started as its own process ({@code plumb lsp}). */
+    TestClient(Process serverProcess, ClientCapabilities capabilities, Object options) throws Exception {
+        server = null;
+        remote = connect(serverProcess.getInputStream(), serverProcess.getOutputStream(), capabilities, options);
+    }
+
+    private LanguageServer connect(java.io.InputStream in, java.io.OutputStream out, ClientCapabilities capabilities,
+                                   Object options) throws Exception {
+        var clientLauncher = LSPLauncher.createClientLauncher(this, in, out);
         clientLauncher.startListening();
-        remote = clientLauncher.getRemoteProxy();
+        LanguageServer proxy = clientLauncher.getRemoteProxy();
         InitializeParams init = new InitializeParams();
         init.setCapabilities(capabilities);
         init.setInitializationOptions(options);
-        initialized = remote.initialize(init).get(10, TimeUnit.SECONDS);
+        initialized = proxy.initialize(init).get(60, TimeUnit.SECONDS);
+        return proxy;
     }
 
     void open(String uri, String text) {
