@@ -134,7 +134,9 @@ final class CorrelationCall {
         for (int i = 0; i < params.size(); i++) {
             Statement.Param p = params.get(i);
             BasisNotes.Density given = args.get(i).notes() == null ? null : args.get(i).notes().density();
-            if (p.role() == null || given == null || given.tag().equals(p.role().text())) continue;
+            // An unknown role word is reported where the correlation is declared.
+            if (p.role() == null || !BlockChecks.DENSITY_TAGS.contains(p.role().text())) continue;
+            if (given == null || given.tag().equals(p.role().text())) continue;
             String fix = p.role().text().equals("fluid") ? "pass the density of the fluid around the body (air, water)"
                 : "pass the density of the body itself";
             reporter.report(Code.BASIS_DENSITY, c.args().get(i).span(), name + " takes " + p.name().text()

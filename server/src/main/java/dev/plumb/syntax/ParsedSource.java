@@ -17,7 +17,10 @@ public record ParsedSource(String text, LineMap lines, List<Statement> statement
         chunks = List.copyOf(chunks);
     }
 
-    /** The text with nothing read from it: for results made without reading the text. */
+    /**
+     * The text with nothing read from it: for results made without reading the text. Its one chunk
+     * ends at the end of the text, so a reparse never reuses it and reads everything.
+     */
     public static ParsedSource unread(String text) {
         return new ParsedSource(text, new LineMap(text), List.of(), List.of(), List.of(new Chunk(0, text.length(), 0, 0, 0, 0)));
     }
