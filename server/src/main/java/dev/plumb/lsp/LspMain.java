@@ -18,6 +18,11 @@ public final class LspMain {
         InputStream in = System.in;
         OutputStream out = new FileOutputStream(FileDescriptor.out);
         System.setOut(new PrintStream(new FileOutputStream(FileDescriptor.err), true));
+        // Read and check the standard library while editor and server shake hands, so that the
+        // first document's diagnostics need not wait for it.
+        Thread library = new Thread(dev.plumb.analysis.Stdlib::get, "plumb-library");
+        library.setDaemon(true);
+        library.start();
         PlumbLanguageServer server = new PlumbLanguageServer();
         var launcher = LSPLauncher.createServerLauncher(server, in, out);
         LanguageClient client = launcher.getRemoteProxy();

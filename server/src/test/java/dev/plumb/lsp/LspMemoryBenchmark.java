@@ -10,7 +10,8 @@ import org.eclipse.lsp4j.InlayHintCapabilities;
 import org.eclipse.lsp4j.TextDocumentClientCapabilities;
 
 /**
- * Prints the resident memory of the language server as an editor runs it: {@code java -jar
+ * Prints the resident memory of the language server as an editor runs it, and how soon a
+ * freshly started server answers: {@code java -jar
  * server/target/plumb.jar lsp} as a process of its own, with 50 generated 1,000-line documents
  * open and analysed: with the JVM's default heap settings, with {@code -Xmx256m}, and with a
  * small heap and the serial collector.
@@ -39,12 +40,14 @@ public final class LspMemoryBenchmark {
         List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
         command.addAll(jvmOptions);
         command.addAll(List.of("-jar", jar.toString(), "lsp"));
+        long started = System.nanoTime();
         Process p = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD).start();
         TextDocumentClientCapabilities td = new TextDocumentClientCapabilities();
         td.setInlayHint(new InlayHintCapabilities());
         ClientCapabilities caps = new ClientCapabilities();
         caps.setTextDocument(td);
         TestClient client = new TestClient(p, caps, null);
+        long initialized = System.nanoTime();
         Path dir = Files.createTempDirectory("plumb-lsp-memory");
         Files.createDirectories(dir.resolve(".git"));
         String label = jvmOptions.isEmpty() ? "default heap" : String.join(" ", jvmOptions);
@@ -55,6 +58,10 @@ public final class LspMemoryBenchmark {
             Files.writeString(file, text);
             client.open(file.toUri().toString(), text);
             client.diagnostics(file.toUri().toString(), 1);
+            if (i == 0) {
+                System.out.printf("%-30s start → initialized %d ms; first document's diagnostics %d ms later%n", label,
+                    (initialized - started) / 1_000_000, (System.nanoTime() - initialized) / 1_000_000);
+            }
         }
         Thread.sleep(2_000);
         System.out.printf("%-30s 50 open documents of 1,000 lines:   resident %s (peak %s)%n", label, rss(p.pid()),
