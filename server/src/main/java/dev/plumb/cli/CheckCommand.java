@@ -18,12 +18,12 @@ import picocli.CommandLine.Spec;
     description = "Check calc files and folders (all *.plumb below them). Exit 0: no errors; 1: errors or "
         + "failed checks; 2: usage or file problems.")
 final class CheckCommand implements Callable<Integer> {
-    enum Format { text, json }
+    enum Format { text, json, sarif }
 
     @Parameters(arity = "1..*", paramLabel = "PATH", description = "files or folders to check")
     List<Path> paths;
 
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    @Option(names = "--format", defaultValue = "text", description = "text, json or sarif (SARIF 2.1.0, for code review hosts; default: ${DEFAULT-VALUE})")
     Format format;
 
     @Mixin
@@ -49,8 +49,11 @@ final class CheckCommand implements Callable<Integer> {
         }
         Workspace workspace = new Workspace(new FileSources(), common.settings());
         List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
-        if (format == Format.json) JsonReport.write(results, out);
-        else TextReport.write(results, out, common.style());
+        switch (format) {
+            case json -> JsonReport.write(results, out);
+            case sarif -> SarifReport.write(results, spec.root().version()[0].replaceFirst("^plumb ", ""), out);
+            default -> TextReport.write(results, out, common.style());
+        }
         out.flush();
         return TextReport.Tally.of(results).exitCode();
     }

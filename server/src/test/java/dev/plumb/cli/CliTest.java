@@ -89,6 +89,46 @@ class CliTest {
     }
 
     @Test
+    void sarifFormatIsASarifLogWithUtf16ColumnsAndRelativePaths() throws IOException {
+        // SARIF 2.1.0 (OASIS Standard, 2020): sarifLog with version and runs; columnKind
+        // utf16CodeUnits; regions with 1-based lines and columns, endColumn just past the region;
+        // artifact URIs relative to a uriBaseId (from memory).
+        Path folder = Path.of("target", "sarif-test");
+        Files.createDirectories(folder);
+        Path f = folder.resolve("ρ calc.plumb");
+        Files.writeString(f, "input 𝑥_a = 3 N\nx = 𝑥_a + 2 m\ncheck 𝑥_a > 5 N\n");
+        Cli run = Cli.run("check", "--format", "sarif", f.toString());
+        assertEquals(1, run.exitCode(), run.err());
+        JsonObject log = JsonParser.parseString(run.out()).getAsJsonObject();
+        assertEquals("2.1.0", log.get("version").getAsString());
+        assertEquals(SarifReport.SCHEMA, log.get("$schema").getAsString());
+        JsonObject sarifRun = log.getAsJsonArray("runs").get(0).getAsJsonObject();
+        assertEquals("utf16CodeUnits", sarifRun.get("columnKind").getAsString());
+        var rules = sarifRun.getAsJsonObject("tool").getAsJsonObject("driver").getAsJsonArray("rules");
+        var results = sarifRun.getAsJsonArray("results");
+        assertEquals(2, results.size(), results.toString());
+        for (var r : results) {
+            JsonObject result = r.getAsJsonObject();
+            assertEquals(result.get("ruleId").getAsString(),
+                rules.get(result.get("ruleIndex").getAsInt()).getAsJsonObject().get("id").getAsString());
+        }
+        JsonObject mismatch = results.get(0).getAsJsonObject();
+        assertEquals("unit.mismatch", mismatch.get("ruleId").getAsString());
+        assertEquals("error", mismatch.get("level").getAsString());
+        JsonObject physical = mismatch.getAsJsonArray("locations").get(0).getAsJsonObject()
+            .getAsJsonObject("physicalLocation");
+        assertEquals("target/sarif-test/%CF%81%20calc.plumb", physical.getAsJsonObject("artifactLocation").get("uri").getAsString());
+        assertEquals("%SRCROOT%", physical.getAsJsonObject("artifactLocation").get("uriBaseId").getAsString());
+        JsonObject region = physical.getAsJsonObject("region");
+        // "x = " is 4 units; "𝑥_a + 2 m" is 10 (𝑥 is a surrogate pair).
+        assertEquals(2, region.get("startLine").getAsInt());
+        assertEquals(5, region.get("startColumn").getAsInt());
+        assertEquals(15, region.get("endColumn").getAsInt());
+        assertEquals("check.failed", results.get(1).getAsJsonObject().get("ruleId").getAsString());
+        assertTrue(sarifRun.getAsJsonObject("properties").get("notice").getAsString().contains("licensed engineer"));
+    }
+
+    @Test
     void noColourUnlessAskedOrOnATerminal() throws IOException {
         Path f = write("c.plumb", "x = 1 +\n");
         assertFalse(Cli.run("check", f.toString()).out().contains("\u001b["), "tests do not run on a terminal");
