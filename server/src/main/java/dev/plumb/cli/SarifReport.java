@@ -37,6 +37,14 @@ final class SarifReport {
         for (Code c : Code.values()) {
             JsonObject rule = new JsonObject();
             rule.addProperty("id", c.id());
+            DiagnosticsGuide.Section guide = DiagnosticsGuide.of(c.id());
+            if (guide != null) {
+                rule.add("shortDescription", text("text", guide.firstSentence()));
+                rule.add("fullDescription", text("text", guide.summary()));
+                JsonObject help = text("text", guide.fix().isEmpty() ? guide.summary() : guide.summary() + " Fix: " + guide.fix());
+                help.addProperty("markdown", guide.markdown());
+                rule.add("help", help);
+            }
             JsonObject config = new JsonObject();
             config.addProperty("level", level(c.severity()));
             rule.add("defaultConfiguration", config);
@@ -133,6 +141,12 @@ final class SarifReport {
         } catch (URISyntaxException e) {
             return path;
         }
+    }
+
+    private static JsonObject text(String key, String value) {
+        JsonObject o = new JsonObject();
+        o.addProperty(key, value);
+        return o;
     }
 
     private static String level(Severity s) {

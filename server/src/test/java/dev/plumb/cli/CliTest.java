@@ -125,6 +125,12 @@ class CliTest {
         assertEquals(5, region.get("startColumn").getAsInt());
         assertEquals(15, region.get("endColumn").getAsInt());
         assertEquals("check.failed", results.get(1).getAsJsonObject().get("ruleId").getAsString());
+        // Each rule carries its section of docs/diagnostics.md as help.
+        for (var r : rules) assertTrue(r.getAsJsonObject().has("shortDescription"), r.toString());
+        JsonObject rule = rules.get(mismatch.get("ruleIndex").getAsInt()).getAsJsonObject();
+        assertTrue(rule.getAsJsonObject("shortDescription").get("text").getAsString()
+            .startsWith("Two things that must have one dimension do not"), rule.toString());
+        assertTrue(rule.getAsJsonObject("help").get("markdown").getAsString().contains("**Fix:**"), rule.toString());
         assertTrue(sarifRun.getAsJsonObject("properties").get("notice").getAsString().contains("licensed engineer"));
     }
 
