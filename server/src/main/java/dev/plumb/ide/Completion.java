@@ -9,13 +9,21 @@ import java.util.Locale;
 import java.util.TreeSet;
 
 /**
- * What may be typed at the cursor: units after a number or after `in`, else names in scope
- * (with their values), functions and correlations (with parameter snippets) and statement words.
+ * What may be typed at the cursor: units after a number or after `in`, tags after `as`, else
+ * names in scope (with their values), functions and correlations (with parameter snippets) and
+ * statement words.
  */
 public final class Completion {
     public static final int LIMIT = 200;
     private static final List<String> STATEMENT_WORDS = List.of("input", "check", "section", "use", "find", "correlation",
         "table", "title", "author", "reviewer", "revision");
+    /** The words `as` takes, with what each says. */
+    private static final List<String[]> TAGS = List.of(
+        new String[] {"frontal", "area: projected on a plane normal to the flow"},
+        new String[] {"wetted", "area: the surface the flow runs over"},
+        new String[] {"planform", "area: the plan area of a wing or plate"},
+        new String[] {"fluid", "density: the fluid's (dynamic pressure, forces, Reynolds number)"},
+        new String[] {"body", "density: the body's own (its weight)"});
 
     private Completion() {
     }
@@ -31,6 +39,12 @@ public final class Completion {
         while (wordStart > 0 && isNameChar(text.charAt(wordStart - 1))) wordStart--;
         String word = text.substring(wordStart, offset);
         List<CompletionEntry> out = new ArrayList<>();
+        if (afterWord(text, wordStart, "as")) {
+            for (String[] tag : TAGS) {
+                if (matches(tag[0], word)) out.add(new CompletionEntry(tag[0], CompletionEntry.Kind.KEYWORD, tag[1], tag[0], false));
+            }
+            return out;
+        }
         if (lineStartsAt(text, wordStart)) {
             for (String k : STATEMENT_WORDS) {
                 if (matches(k, word)) out.add(new CompletionEntry(k, CompletionEntry.Kind.KEYWORD, "statement", k + " ", false));
@@ -80,13 +94,17 @@ public final class Completion {
     /** After a number (and optional blanks) or after the word `in`, a unit is expected. */
     private static boolean unitExpected(String text, int start) {
         int i = start;
-        boolean blank = false;
-        while (i > 0 && (text.charAt(i - 1) == ' ' || text.charAt(i - 1) == '\t')) {
-            i--;
-            blank = true;
-        }
+        while (i > 0 && (text.charAt(i - 1) == ' ' || text.charAt(i - 1) == '\t')) i--;
         if (i > 0 && Character.isDigit(text.charAt(i - 1))) return true;
-        return blank && i >= 2 && text.startsWith("in", i - 2) && (i < 3 || !isNameChar(text.charAt(i - 3)));
+        return afterWord(text, start, "in");
+    }
+
+    /** Whether blanks and then {@code word}, standing alone, come just before {@code start}. */
+    private static boolean afterWord(String text, int start, String word) {
+        int i = start;
+        while (i > 0 && (text.charAt(i - 1) == ' ' || text.charAt(i - 1) == '\t')) i--;
+        int w = i - word.length();
+        return i < start && w >= 0 && text.startsWith(word, w) && (w == 0 || !isNameChar(text.charAt(w - 1)));
     }
 
     private static boolean lineStartsAt(String text, int i) {

@@ -92,6 +92,17 @@ class FeaturesTest {
     }
 
     @Test
+    void completionAfterAsOffersTheTagsThatFit() throws Exception {
+        TextDocumentService s = open("tags.plumb", "input b = 2 m\nA = b * 1 m   as \nrho_s = 2650 kg/m^3   as b\n", null);
+        List<String> all = s.completion(new CompletionParams(doc(uri("tags.plumb")), new Position(1, 17)))
+            .get(10, TimeUnit.SECONDS).getRight().getItems().stream().map(CompletionItem::getLabel).toList();
+        assertEquals(List.of("frontal", "wetted", "planform", "fluid", "body"), all);
+        List<String> b = s.completion(new CompletionParams(doc(uri("tags.plumb")), new Position(2, 26)))
+            .get(10, TimeUnit.SECONDS).getRight().getItems().stream().map(CompletionItem::getLabel).toList();
+        assertEquals(List.of("body"), b);
+    }
+
+    @Test
     void signatureHelpShowsParametersAndTheValidRange() throws Exception {
         TextDocumentService s = open("sig.plumb", "x = cd_sphere_sn(\n", null);
         var help = s.signatureHelp(new SignatureHelpParams(doc(uri("sig.plumb")), new Position(0, 17)))
