@@ -13,23 +13,15 @@ set -euo pipefail
 
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
 client_dir="$(cd "$here/.." && pwd)"
-repo="$(cd "$here/../../.." && pwd)"
+# shellcheck source=../../lib/test-setup.sh
+. "$here/../../lib/test-setup.sh"
 
 if ! command -v emacs >/dev/null 2>&1; then
   echo "eglot lsp test: emacs not found (Debian: apt-get install -y emacs-nox elpa-eglot)" >&2
   exit 2
 fi
 
-jar="${PLUMB_JAR:-$repo/server/target/plumb.jar}"
-if [ ! -f "$jar" ]; then
-  echo "eglot lsp test: $jar missing, building it once via ./plumb --help" >&2
-  (cd "$repo" && ./plumb --help >/dev/null)
-fi
-
-work="$(mktemp -d "${TMPDIR:-/tmp}/plumb-eglot-test.XXXXXX")"
-trap 'rm -rf "$work"' EXIT
-ws="$work/workspace"
-mkdir -p "$ws/.git"
+plumb_test_setup "eglot lsp test"
 
 # An invented calc: wind on the lamp housing of a survey buoy's mast. The last line holds the
 # deliberate unit mismatch after non-ASCII names (𝑥 is outside the BMP: two UTF-16 units); the

@@ -13,27 +13,15 @@ set -euo pipefail
 
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
 client_dir="$(cd "$here/.." && pwd)"
-repo="$(cd "$here/../../.." && pwd)"
+# shellcheck source=../../lib/test-setup.sh
+. "$here/../../lib/test-setup.sh"
 
 if ! command -v nvim >/dev/null 2>&1; then
   echo "neovim lsp test: nvim not found (Debian: apt-get install -y neovim)" >&2
   exit 2
 fi
 
-jar="${PLUMB_JAR:-$repo/server/target/plumb.jar}"
-if [ ! -f "$jar" ]; then
-  echo "neovim lsp test: $jar missing, building it once via ./plumb --help" >&2
-  (cd "$repo" && ./plumb --help >/dev/null)
-fi
-if [ ! -f "$jar" ]; then
-  echo "neovim lsp test: no server jar at $jar" >&2
-  exit 2
-fi
-
-work="$(mktemp -d "${TMPDIR:-/tmp}/plumb-nvim-test.XXXXXX")"
-trap 'rm -rf "$work"' EXIT
-ws="$work/workspace"
-mkdir -p "$ws/.git"
+plumb_test_setup "neovim lsp test"
 
 # An invented calc: drag on a camera pod in a rig's air stream. The last line holds the
 # deliberate unit mismatch, after non-ASCII names (𝑥 is outside the BMP: two UTF-16 units).
