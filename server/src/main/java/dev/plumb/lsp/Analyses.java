@@ -3,6 +3,7 @@ package dev.plumb.lsp;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Settings;
 import dev.plumb.analysis.Workspace;
+import dev.plumb.syntax.ParsedSource;
 import java.nio.file.Path;
 import java.util.ArrayDeque;
 import java.util.Deque;
@@ -15,6 +16,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.ScheduledFuture;
 import java.util.concurrent.TimeUnit;
+import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 
@@ -32,6 +34,8 @@ final class Analyses {
     private final DocumentStore documents;
     private final Supplier<ServerSettings> settings;
     private final Consumer<OpenDocumentResult> publisher;
+    /** Told when an analysis fails outright (a fault of ours): the editor should say so. */
+    private final Consumer<String> trouble;
     private final ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(daemon("plumb-debounce"));
     private final ExecutorService workers = Executors.newFixedThreadPool(
         Math.max(1, Runtime.getRuntime().availableProcessors()), Workspace.threadFactory());
@@ -42,10 +46,26 @@ final class Analyses {
     record OpenDocumentResult(OpenDocument document, Analysis analysis) {
     }
 
-    Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher) {
+    /** What runs the engine on a document's text: the workspace of open buffers and files. */
+    interface Engine {
+        Analysis analyze(Path file, String text, ParsedSource earlier, BooleanSupplier superseded, Settings settings);
+    }
+
+    private final Engine engine;
+
+    Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher,
+             Consumer<String> trouble) {
+        this(documents, settings, publisher, trouble, (file, text, earlier, superseded, s) ->
+            new Workspace(new OverlaySources(documents), s).analyzeText(file, text, earlier, superseded));
+    }
+
+    Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher,
+             Consumer<String> trouble, Engine engine) {
+        this.engine = engine;
         this.documents = documents;
         this.settings = settings;
         this.publisher = publisher;
+        this.trouble = trouble;
     }
 
     private static java.util.concurrent.ThreadFactory daemon(String name) {
@@ -94,6 +114,8 @@ final class Analyses {
             for (String user : usersOf(d.path(), uri)) schedule(user);
         } catch (RuntimeException | StackOverflowError e) {
             System.err.println("plumb: analysis of " + uri + " failed: " + e);
+            trouble.accept("Plumb could not check " + d.path().getFileName() + " (" + e
+                + "); the problems shown for it may be out of date. Please report this, with the file.");
         }
     }
 
@@ -110,13 +132,12 @@ final class Analyses {
     }
 
     /** The engine on a document's text; null when a newer edit made the run pointless on the way. */
-    private Analysis analyze(OpenDocument d, java.util.function.BooleanSupplier superseded) {
+    private Analysis analyze(OpenDocument d, BooleanSupplier superseded) {
         Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance(),
             settings.get().criticalReynolds());
         // The last result's parse, whatever version it was: only the edited part is read again.
         Result last = latest.get(d.uri());
-        return new Workspace(new OverlaySources(documents), s).analyzeText(d.path(), d.text(),
-            last == null ? null : last.analysis().syntax(), superseded);
+        return engine.analyze(d.path(), d.text(), last == null ? null : last.analysis().syntax(), superseded, s);
     }
 
     /** Open documents that use this path, directly or through other files. */

@@ -38,7 +38,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     });
     private volatile ServerSettings settings = ServerSettings.DEFAULT;
     private volatile LanguageClient client;
-    private final Analyses analyses = new Analyses(documents, () -> settings, this::publish);
+    private final Analyses analyses = new Analyses(documents, () -> settings, this::publish, this::warn);
     private final PlumbTextDocumentService text = new PlumbTextDocumentService(this, requests);
     private final PlumbWorkspaceService workspace = new PlumbWorkspaceService(this);
     private boolean shutdown;
@@ -190,6 +190,13 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
             ProtocolMapping.diagnostics(r.analysis(), encoding.value, settings), r.document().version()));
         if (settings.codeLens() && refreshLenses) c.refreshCodeLenses();
         if (settings.inlayHints() && refreshHints) c.refreshInlayHints();
+    }
+
+    /** A message the engineer should see: the editor shows it, and keeps it in its log. */
+    private void warn(String message) {
+        LanguageClient c = client;
+        if (c == null) return;
+        c.showMessage(new org.eclipse.lsp4j.MessageParams(org.eclipse.lsp4j.MessageType.Warning, message));
     }
 
     void clearDiagnostics(String uri) {
