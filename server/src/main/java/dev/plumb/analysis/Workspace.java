@@ -20,15 +20,27 @@ public final class Workspace {
     private final Map<Path, Imported> cache = new ConcurrentHashMap<>();
     /** The names every document sees besides its own and built-ins: the standard library. */
     private final Scope library;
+    /** Used files' analyses kept from earlier workspaces (an editor's), or null. */
+    private final ImportMemory memory;
 
     public Workspace(Sources sources, Settings settings) {
-        this(sources, settings, Stdlib.get().scope());
+        this(sources, settings, Stdlib.get().scope(), null);
+    }
+
+    /** A workspace that takes used files' analyses from {@code memory} while they still hold, and adds to it. */
+    public Workspace(Sources sources, Settings settings, ImportMemory memory) {
+        this(sources, settings, Stdlib.get().scope(), memory);
     }
 
     Workspace(Sources sources, Settings settings, Scope library) {
+        this(sources, settings, library, null);
+    }
+
+    private Workspace(Sources sources, Settings settings, Scope library, ImportMemory memory) {
         this.sources = sources;
         this.settings = settings;
         this.library = library;
+        this.memory = memory;
     }
 
     Scope library() {
@@ -96,6 +108,12 @@ public final class Workspace {
     Imported analyzeImport(Path file, List<Path> chain) {
         Imported cached = cache.get(file);
         if (cached != null) return cached;
+        Map<Path, Analysis> kept = memory == null ? null : memory.recall(file, sources, settings);
+        if (kept != null) {
+            // The whole group goes in, so that circles through it are still found (importPath).
+            kept.forEach((p, a) -> cache.putIfAbsent(p, new Imported(a, null)));
+            return cache.get(file);
+        }
         Sources.Loaded loaded = sources.load(file);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
@@ -107,7 +125,27 @@ public final class Workspace {
             fresh = new Imported(null, ((Sources.Missing) loaded).reason());
         }
         Imported raced = cache.putIfAbsent(file, fresh);
-        return raced != null ? raced : fresh;
+        if (raced != null) return raced;
+        if (memory != null && fresh.analysis() != null && loaded instanceof Sources.Text) {
+            Map<Path, Analysis> used = usedBy(file);
+            if (used != null) memory.remember(file, settings, used);
+        }
+        return fresh;
+    }
+
+    /** A file's analysis with those of every file it uses in turn, or null if one is not text. */
+    private Map<Path, Analysis> usedBy(Path file) {
+        Map<Path, Analysis> out = new java.util.HashMap<>();
+        java.util.ArrayDeque<Path> todo = new java.util.ArrayDeque<>(List.of(file));
+        while (!todo.isEmpty()) {
+            Path p = todo.poll();
+            if (out.containsKey(p)) continue;
+            Imported done = cache.get(p);
+            if (done == null || done.analysis() == null || !(sources.load(p) instanceof Sources.Text)) return null;
+            out.put(p, done.analysis());
+            todo.addAll(done.analysis().imports());
+        }
+        return out;
     }
 
     /**

@@ -1,6 +1,7 @@
 package dev.plumb.lsp;
 
 import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.ImportMemory;
 import dev.plumb.analysis.Settings;
 import dev.plumb.analysis.Workspace;
 import dev.plumb.syntax.ParsedSource;
@@ -16,6 +17,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.ScheduledFuture;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
@@ -49,14 +51,36 @@ final class Analyses {
     /** What runs the engine on a document's text: the workspace of open buffers and files. */
     interface Engine {
         Analysis analyze(Path file, String text, ParsedSource earlier, BooleanSupplier superseded, Settings settings);
+
+        /** Drops whatever it keeps between runs (settings or files outside the editor changed). */
+        default void forgetKept() {
+        }
+    }
+
+    /**
+     * The engine over the open buffers and the files, keeping used files' analyses between runs
+     * ({@link ImportMemory}): typing in a calc does not analyse the files it uses again.
+     */
+    static Engine workspaceEngine(DocumentStore documents) {
+        AtomicReference<ImportMemory> kept = new AtomicReference<>(new ImportMemory());
+        return new Engine() {
+            @Override
+            public Analysis analyze(Path file, String text, ParsedSource earlier, BooleanSupplier superseded, Settings s) {
+                return new Workspace(new OverlaySources(documents), s, kept.get()).analyzeText(file, text, earlier, superseded);
+            }
+
+            @Override
+            public void forgetKept() {
+                kept.set(new ImportMemory());
+            }
+        };
     }
 
     private final Engine engine;
 
     Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher,
              Consumer<String> trouble) {
-        this(documents, settings, publisher, trouble, (file, text, earlier, superseded, s) ->
-            new Workspace(new OverlaySources(documents), s).analyzeText(file, text, earlier, superseded));
+        this(documents, settings, publisher, trouble, workspaceEngine(documents));
     }
 
     Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher,
@@ -163,6 +187,7 @@ final class Analyses {
     /** Every open document again (settings or files on disk changed): earlier results are void. */
     void scheduleAll() {
         latest.clear();
+        engine.forgetKept();
         for (OpenDocument d : documents.all()) schedule(d.uri());
     }
 
