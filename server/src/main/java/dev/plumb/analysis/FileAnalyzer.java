@@ -398,12 +398,9 @@ final class FileAnalyzer {
         Value v = evaluator.eval(d.expr());
         if (inCycle) v = Value.UNKNOWN;
         Unit display = displayUnit(d, v, evaluator);
-        String basis = basis(d);
-        if (basis != null && v.known()) {
-            Value tagged = tagged(d, v, basis);
-            if (tagged == null) basis = null;
-            else v = tagged;
-        }
+        Tagged tagged = tagged(d.name(), d.basis(), v);
+        v = tagged.value();
+        String basis = tagged.tag();
         Origin origin = BlockChecks.origin(d.expr(), scope, units);
         if (!duplicates.contains(s)) {
             scope.put(d.name().text(), new Binding.ValueBinding(file, d.name().span(), v, display, basis, d.input(), origin));
@@ -412,17 +409,24 @@ final class FileAnalyzer {
         rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), v, shown, basis, d.note(), origin, null));
     }
 
-    /** The value with its `as` tag, or null (reported) when the tag does not fit what the value is. */
-    private Value tagged(Statement.Definition d, Value v, String tag) {
-        String name = d.name().text();
+    /** A value with the tag its `as` gave it; the tag is null when there is none or it was refused. */
+    private record Tagged(Value value, String tag) {
+    }
+
+    /** Applies `as TAG` (the word, or null) to a value; a tag that does not fit what the value is, is reported. */
+    private Tagged tagged(Ident named, Ident word, Value v) {
+        String tag = basisOf(word);
+        if (tag == null || !v.known()) return new Tagged(v, tag);
+        String name = named.text();
         boolean density = BlockChecks.DENSITY_TAGS.contains(tag);
         if (v.dimension().equals(density ? BasisRules.DENSITY : BasisRules.AREA)) {
-            return v.noted(density ? BasisRules.densityTagged(v, tag, name) : BasisRules.tagged(v, tag, name));
+            return new Tagged(v.noted(density ? BasisRules.densityTagged(v, tag, name) : BasisRules.tagged(v, tag, name)),
+                tag);
         }
-        reporter.report(density ? Code.BASIS_DENSITY : Code.BASIS_AREA, d.basis().span(), "`as " + tag + "` "
+        reporter.report(density ? Code.BASIS_DENSITY : Code.BASIS_AREA, word.span(), "`as " + tag + "` "
             + (density ? "says whose density a value is" : "tags areas") + ", but " + name + " is "
             + v.dimension().describe() + ": remove the tag");
-        return null;
+        return new Tagged(v, null);
     }
 
     private void evaluateFind(Statement.Find f, boolean inCycle) {
@@ -436,7 +440,9 @@ final class FileAnalyzer {
         Value v = outcome.value();
         Evaluator evaluator = new Evaluator(scope, reporter, text, units);
         Unit display = v.known() ? displayUnit(f, v, evaluator) : null;
-        String basis = basisOf(f.basis());
+        Tagged tagged = tagged(f.name(), f.basis(), v);
+        v = tagged.value();
+        String basis = tagged.tag();
         scope.put(name, new Binding.ValueBinding(file, f.name().span(), v, display, basis, false, null));
         String shown = Shown.value(v, display, settings.significantFigures());
         rows.put(f, new Row.ValueRow(f.span(), name, false, v, shown, basis, f.note(), null, outcome.solution()));
@@ -484,10 +490,6 @@ final class FileAnalyzer {
             return ok.unit();
         }
         return fallback;
-    }
-
-    private String basis(Statement.Definition d) {
-        return basisOf(d.basis());
     }
 
     private String basisOf(Ident word) {
