@@ -24,7 +24,7 @@ public final class SourceParser {
 
     public static ParsedSource parse(String text) {
         Assembly out = new Assembly();
-        out.read(read(text), 0, text.length());
+        out.read(read(text, true), 0, text.length());
         return out.build(text);
     }
 
@@ -49,12 +49,12 @@ public final class SourceParser {
         int delta = text.length() - old.length();
         int start = keep == 0 ? 0 : chunks.get(keep - 1).end();
         int end = from == chunks.size() ? text.length() : chunks.get(from).start() + delta;
-        Reading middle = read(text.substring(start, end));
+        Reading middle = read(text.substring(start, end), start == 0);
         if (middle.blockOpenAtEnd() && from < chunks.size()) {
             // A block opened in the edited part runs on into what follows: read the rest afresh.
             from = chunks.size();
             end = text.length();
-            middle = read(text.substring(start));
+            middle = read(text.substring(start), start == 0);
         }
         Assembly out = new Assembly();
         out.reuse(previous, 0, keep, 0);
@@ -68,7 +68,8 @@ public final class SourceParser {
                            boolean blockOpenAtEnd) {
     }
 
-    private static Reading read(String text) {
+    /** Reads a stretch of text: the whole document, or a part of it from one of its fresh starts. */
+    private static Reading read(String text, boolean documentStart) {
         LineMap lines = new LineMap(text);
         PlumbLexer lexer = new PlumbLexer(CharStreams.fromString(text));
         lexer.removeErrorListeners();
@@ -76,7 +77,7 @@ public final class SourceParser {
         List<Token> all = new ArrayList<>(raw);
         all.add(lexer.nextToken()); // getAllTokens() leaves out EOF; asking again returns it
 
-        StatementTokens arranged = new StatementTokens(lines);
+        StatementTokens arranged = new StatementTokens(lines, documentStart);
         List<Token> tokens = arranged.arrange(all);
 
         SyntaxErrors errors = new SyntaxErrors(lines);

@@ -37,8 +37,12 @@ final class StatementTokens {
     private final List<Integer> freshStarts = new ArrayList<>();
     private boolean blockOpenAtEnd;
 
-    StatementTokens(LineMap lines) {
+    /** Whether the tokens start the document (else they start at one of its fresh starts). */
+    private final boolean documentStart;
+
+    StatementTokens(LineMap lines, boolean documentStart) {
         this.lines = lines;
+        this.documentStart = documentStart;
     }
 
     List<Diagnostic> diagnostics() {
@@ -67,7 +71,9 @@ final class StatementTokens {
         List<Token> out = new ArrayList<>(tokens.size());
         boolean inStatement = false;
         boolean narrative = false;
-        int statementIndent = leadingIndent(tokens);
+        // Byte-order marks before the first line's blanks are an encoding marker at the start of a
+        // document only; a fresh start inside it begins at column 0 by definition.
+        int statementIndent = documentStart ? leadingIndent(tokens) : 0;
         int statementStart = 0;
         // Block state: opened by a `correlation NAME(` or `table NAME(` line, closed by `end`.
         boolean inBlock = false;

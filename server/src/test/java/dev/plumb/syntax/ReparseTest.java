@@ -86,6 +86,17 @@ class ReparseTest {
         }
     }
 
+    @Test
+    void aLineOfByteOrderMarksAndBlanksInsideTheDocumentReadsAsInAFreshParse() {
+        // Found by the fuzzer (EngineFuzzTestInputs/anyEditReparsesAsAFreshParse/byte-order-marks-then-blanks-
+        // mid-document): blanks after byte-order marks indent only the document's first line.
+        String text = "x = 1\n\uFEFF\uFEFFy = 2\n  + 3\n z = 4\n";
+        String edited = "x = 1\n\uFEFF\uFEFF  y2 = 2\n  + 3\n z = 4\n";
+        ParsedSource reparsed = SourceParser.reparse(SourceParser.parse(text), edited);
+        assertEquals(SourceParser.parse(edited).statements(), reparsed.statements());
+        assertEquals(SourceParser.parse(edited).diagnostics(), reparsed.diagnostics());
+    }
+
     /** Replaces a random stretch (up to a few lines) with a random fragment, never inside a surrogate pair. */
     private static String edit(String text, Random random) {
         int start = boundary(text, random.nextInt(text.length() + 1));
