@@ -97,14 +97,19 @@ local function range_text(bufnr, range)
   return line:sub(a + 1, b)
 end
 
--- The 0-based row of the first line of a buffer that starts with `prefix`.
-local function row_of(bufnr, prefix)
-  for i, l in ipairs(vim.api.nvim_buf_get_lines(bufnr, 0, -1, false)) do
+-- The 0-based row of the first of `lines` that starts with `prefix`.
+local function row_in(lines, prefix)
+  for i, l in ipairs(lines) do
     if l:sub(1, #prefix) == prefix then
       return i - 1
     end
   end
   fatal('fixture: no line starts with ' .. prefix)
+end
+
+-- The 0-based row of the first line of a buffer that starts with `prefix`.
+local function row_of(bufnr, prefix)
+  return row_in(vim.api.nvim_buf_get_lines(bufnr, 0, -1, false), prefix)
 end
 
 -- A request through the client; the result, or nil and a description of what came back instead.
@@ -526,13 +531,9 @@ local function run()
   check('position encoding is utf-16', client.offset_encoding == 'utf-16', tostring(client.offset_encoding))
 
   local lines = vim.api.nvim_buf_get_lines(buf, 0, -1, false)
+  -- Rows as the buffer was first read (the rename below changes the text, not these rows).
   local function line_index(prefix)
-    for i, l in ipairs(lines) do
-      if l:sub(1, #prefix) == prefix then
-        return i - 1
-      end
-    end
-    fatal('fixture: no line starts with ' .. prefix)
+    return row_in(lines, prefix)
   end
   local function diag_ready(code)
     local p = published[uri]

@@ -8,7 +8,6 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.CompletionParams;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.Position;
@@ -57,22 +56,14 @@ public final class LspBenchmark {
         JsonObject options = new JsonObject();
         options.addProperty("debounceMs", 0);
         // A client with inlay hints, as current editors are: values are not sent as diagnostics.
-        org.eclipse.lsp4j.TextDocumentClientCapabilities td = new org.eclipse.lsp4j.TextDocumentClientCapabilities();
-        td.setInlayHint(new org.eclipse.lsp4j.InlayHintCapabilities());
-        ClientCapabilities caps = new ClientCapabilities();
-        caps.setTextDocument(td);
-        TestClient client = new TestClient(caps, options);
+        TestClient client = new TestClient(TestClient.withInlayHints(), options);
         Path dir = Files.createTempDirectory("plumb-lsp-bench");
         Files.createDirectories(dir.resolve(".git"));
         System.out.printf("Plumb language server benchmark — %d cores, %s %s%n", Runtime.getRuntime().availableProcessors(),
             System.getProperty("java.vm.name"), System.getProperty("java.version"));
         for (int lines : new int[] {1_000, 10_000}) {
             String text = GeneratedCalc.of(lines);
-            Path file = dir.resolve("doc" + lines + ".plumb");
-            Files.writeString(file, text);
-            String uri = file.toUri().toString();
-            client.open(uri, text);
-            client.diagnostics(uri, 1);
+            String uri = client.openAnalysed(dir.resolve("doc" + lines + ".plumb"), text);
             int[] version = {1};
             int runs = lines >= 10_000 ? 30 : 60;
             // The first edits after opening run while the JIT is still compiling: report them
@@ -96,22 +87,13 @@ public final class LspBenchmark {
         Files.writeString(dir.resolve("lib.plumb"), GeneratedCalc.of(1_000));
         String small = "use \"lib.plumb\"\ntitle \"Uses a long file\"\nsection \"Here\"\n# A short calc on a long one.\n"
             + "x_0 = q_0 * 2   in Pa\ny_0 = F_0 + 1 kN\ninput Z_0 = 20 m/s \"gust\"\ncheck Z_0 < 40 m/s\n";
-        Path user = dir.resolve("user.plumb");
-        Files.writeString(user, small);
-        client.open(user.toUri().toString(), small);
-        client.diagnostics(user.toUri().toString(), 1);
+        String user = client.openAnalysed(dir.resolve("user.plumb"), small);
         int[] userVersion = {1};
-        edits(client, user.toUri().toString(), userVersion, 300, 0);
+        edits(client, user, userVersion, 300, 0);
         System.out.printf("didChange → publishDiagnostics, %6d lines using a file of 1,004 lines, warm: ", small.split("\n").length);
-        double[] using = edits(client, user.toUri().toString(), userVersion, 0, 60);
+        double[] using = edits(client, user, userVersion, 0, 60);
         System.out.printf("median %6.1f ms  p90 %6.1f ms%n", using[30], using[54]);
-        for (int i = 0; i < 50; i++) {
-            Path file = dir.resolve("open" + i + ".plumb");
-            String text = GeneratedCalc.of(1_000);
-            Files.writeString(file, text);
-            client.open(file.toUri().toString(), text);
-            client.diagnostics(file.toUri().toString(), 1);
-        }
+        for (int i = 0; i < 50; i++) client.openAnalysed(dir.resolve("open" + i + ".plumb"), GeneratedCalc.of(1_000));
         for (int i = 0; i < 3; i++) {
             System.gc();
             Thread.sleep(200);

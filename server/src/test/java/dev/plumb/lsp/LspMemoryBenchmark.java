@@ -5,9 +5,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.eclipse.lsp4j.ClientCapabilities;
-import org.eclipse.lsp4j.InlayHintCapabilities;
-import org.eclipse.lsp4j.TextDocumentClientCapabilities;
 
 /**
  * Prints the resident memory of the language server as an editor runs it, and how soon a
@@ -42,22 +39,14 @@ public final class LspMemoryBenchmark {
         command.addAll(List.of("-jar", jar.toString(), "lsp"));
         long started = System.nanoTime();
         Process p = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD).start();
-        TextDocumentClientCapabilities td = new TextDocumentClientCapabilities();
-        td.setInlayHint(new InlayHintCapabilities());
-        ClientCapabilities caps = new ClientCapabilities();
-        caps.setTextDocument(td);
-        TestClient client = new TestClient(p, caps, null);
+        TestClient client = new TestClient(p, TestClient.withInlayHints(), null);
         long initialized = System.nanoTime();
         Path dir = Files.createTempDirectory("plumb-lsp-memory");
         Files.createDirectories(dir.resolve(".git"));
         String label = jvmOptions.isEmpty() ? "default heap" : String.join(" ", jvmOptions);
         System.out.printf("%-30s server started:                     resident %s%n", label, rss(p.pid()));
         for (int i = 0; i < 50; i++) {
-            Path file = dir.resolve("doc" + i + ".plumb");
-            String text = GeneratedCalc.of(1_000);
-            Files.writeString(file, text);
-            client.open(file.toUri().toString(), text);
-            client.diagnostics(file.toUri().toString(), 1);
+            client.openAnalysed(dir.resolve("doc" + i + ".plumb"), GeneratedCalc.of(1_000));
             if (i == 0) {
                 System.out.printf("%-30s start → initialized %d ms; first document's diagnostics %d ms later%n", label,
                     (initialized - started) / 1_000_000, (System.nanoTime() - initialized) / 1_000_000);

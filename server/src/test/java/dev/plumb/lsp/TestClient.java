@@ -61,6 +61,24 @@ final class TestClient implements LanguageClient {
         return proxy;
     }
 
+    /** A client that shows values as inlay hints, as current editors do. */
+    static ClientCapabilities withInlayHints() {
+        org.eclipse.lsp4j.TextDocumentClientCapabilities td = new org.eclipse.lsp4j.TextDocumentClientCapabilities();
+        td.setInlayHint(new org.eclipse.lsp4j.InlayHintCapabilities());
+        ClientCapabilities caps = new ClientCapabilities();
+        caps.setTextDocument(td);
+        return caps;
+    }
+
+    /** Writes a file, opens it, and waits for its first diagnostics; its URI. */
+    String openAnalysed(java.nio.file.Path file, String text) throws Exception {
+        java.nio.file.Files.writeString(file, text);
+        String uri = file.toUri().toString();
+        open(uri, text);
+        diagnostics(uri, 1);
+        return uri;
+    }
+
     void open(String uri, String text) {
         remote.getTextDocumentService().didOpen(new DidOpenTextDocumentParams(new TextDocumentItem(uri, "plumb", 1, text)));
     }
