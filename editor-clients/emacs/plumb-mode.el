@@ -36,7 +36,7 @@ PLUMB_JAR lsp' works as well."
   "Syntax table of `plumb-mode'.")
 
 (defconst plumb-mode--keywords
-  '("input" "check" "find" "within" "guess" "so" "that" "use" "section" "title" "author"
+  '("input" "check" "seek" "from" "where" "use" "section" "title" "author"
     "reviewer" "revision" "correlation" "table" "end" "when" "otherwise" "source" "family"
     "basis" "valid" "regime" "accuracy" "interpolate" "in" "as")
   "Statement and clause words of the Plumb language.")

@@ -18,9 +18,40 @@ tokens { NARRATIVE }
     /** Absolute char index just past the unit that UNIT_MODE must take. */
     private int unitEnd = -1;
 
-    /** Words that end an expression; after a number they are keywords, not units. */
+    /**
+     * Words that end an expression; after a number they are keywords, not units. `so`, `within`
+     * and `guess` belong to the solve statement's former spelling, still read so that its error
+     * can show the new one.
+     */
     private static final java.util.Set<String> CLAUSE_WORDS =
-        java.util.Set.of("in", "as", "when", "otherwise", "so", "within", "guess");
+        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess");
+
+    /**
+     * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
+     * after `seek` as the line's first token, 2 after the name that follows it. At 2, `in` starts
+     * the search range (`seek V in V_lo .. V_hi`), not a unit.
+     */
+    private int seekHead = 0;
+    /** Whether no token but blanks and comments has been read on the current line yet. */
+    private boolean lineStart = true;
+
+    @Override
+    public Token nextToken() {
+        Token t = super.nextToken();
+        int type = t.getType();
+        if (type == NEWLINE) {
+            // An indented line may continue the statement: the head carries on across it.
+            boolean continues = t.getText().endsWith(" ") || t.getText().endsWith("\t");
+            if (!continues) seekHead = 0;
+            lineStart = true;
+        } else if (t.getChannel() == Token.DEFAULT_CHANNEL && type != COMMENT) {
+            if (type == SEEK && lineStart) seekHead = 1;
+            else if (seekHead == 1 && (type == IDENT || type >= TITLE && type <= INTERPOLATE)) seekHead = 2;
+            else seekHead = 0;
+            lineStart = false;
+        }
+        return t;
+    }
 
     private static boolean isUnitStart(int c) {
         return Character.isLetter(c) || c == '°' || c == '%';
@@ -83,11 +114,12 @@ tokens { NARRATIVE }
         pushMode(UNIT_MODE);
     }
 
-    /** After the keyword `in` (a display unit) or a '[' (a table column's unit): a unit follows. */
+    /** After the keyword `in` (a display unit or a table column's unit) or a '[' (the old column form): a unit follows. */
     private void unitAfterKeyword() {
         int i = skipBlanks(1);
         boolean reciprocal = _input.LA(i) == '1' && _input.LA(i + 1) == '/';   // `in 1/s`
         boolean needsGap = getText().equals("in");
+        if (needsGap && seekHead == 2) return;   // `seek V in LOW .. HIGH`: a value follows
         if ((needsGap && i == 1) || !(isUnitStart(_input.LA(i)) || reciprocal)) return;
         unitEnd = _input.index() + scanUnit(i) - 1;
         pushMode(UNIT_MODE);
@@ -108,6 +140,9 @@ SECTION     : 'section';
 INPUT       : 'input';
 CHECK       : 'check';
 USE         : 'use';
+SEEK        : 'seek';
+FROM        : 'from';
+WHERE       : 'where';
 FIND        : 'find';
 WITHIN      : 'within';
 GUESS       : 'guess';

@@ -24,7 +24,8 @@ statement
     | functionDef
     | definition
     | check
-    | find
+    | seek
+    | oldSolve
     | correlationHead
     | tableHead
     | blockLine
@@ -38,7 +39,9 @@ input       : INPUT name ASSIGN expr tail;
 definition  : name ASSIGN expr tail;
 functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN expr note?;
 check       : CHECK expr ( comparator expr )+ note?;
-find        : FIND name ( WITHIN expr DOTDOT expr | GUESS expr ) SO THAT expr ASSIGN expr tail;
+seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
+/** The solve statement's former spelling: read only to say how it is written now. */
+oldSolve    : FIND name ( WITHIN expr DOTDOT expr | GUESS expr ) SO THAT expr ASSIGN expr tail;
 
 /*
  * Correlation and table blocks. The parser reads their lines one by one; the engine groups
@@ -61,7 +64,8 @@ blockLine
     | signedNumber+                                         # rowLine
     | END                                                   # endLine
     ;
-column          : name ( LBRACK UNIT RBRACK )?;
+/** A column and the unit of its numbers; `T[degC]` is the former spelling, read only to say so. */
+column          : name ( IN UNIT | LBRACK UNIT RBRACK )?;
 signedNumber    : MINUS? NUMBER;
 
 tail        : ( IN UNIT )? ( AS name )? note?;
@@ -81,7 +85,7 @@ expr
 
 /** Statement keywords are reserved only where a statement starts; elsewhere they are names. */
 name
-    : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | FIND
+    : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
     ;

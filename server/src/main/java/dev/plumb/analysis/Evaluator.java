@@ -113,6 +113,8 @@ final class Evaluator {
         String name = c.callee().text();
         Binding b = locals.containsKey(name) ? null : scope.lookup(name);
         if (locals.containsKey(name) || b instanceof Binding.ValueBinding) {
+            // A name whose statement could not be read (a broken table, say) is already reported.
+            if (b instanceof Binding.ValueBinding v && !v.value().known() && !locals.containsKey(name)) return Value.UNKNOWN;
             reporter.report(Code.NAME_KIND, c.callee().span(),
                 name + " is a value, not a function: write `" + name + " * (…)` to multiply");
             return Value.UNKNOWN;

@@ -50,7 +50,7 @@ final class FileAnalyzer {
     private final Set<String> used = new HashSet<>();
     private final List<Analysis.Reference> references = new ArrayList<>();
     private final Map<Statement, Row> rows = new java.util.IdentityHashMap<>();
-    /** For each `find`, the definitions re-evaluated with each trial value, in order. */
+    /** For each `seek`, the definitions re-evaluated with each trial value, in order. */
     private final Map<String, List<Statement.Definition>> dependents = new HashMap<>();
 
     FileAnalyzer(Workspace workspace, Path file, String text, ParsedSource earlier, List<Path> chain, Settings settings) {
@@ -74,7 +74,7 @@ final class FileAnalyzer {
         }
         for (Statement s : parsed.statements()) declare(s);
         Map<String, Set<String>> uses = resolveNames(parsed.statements());
-        Map<String, Set<String>> solvedWith = FindDependents.adjust(own, uses);
+        Map<String, Set<String>> solvedWith = SeekDependents.adjust(own, uses);
         DependencyOrder.Result order = DependencyOrder.of(uses);
         for (var entry : solvedWith.entrySet()) {
             List<Statement.Definition> inOrder = new ArrayList<>();
@@ -253,7 +253,7 @@ final class FileAnalyzer {
         if (s instanceof Statement.Function f) return f.name();
         if (s instanceof Statement.Correlation c) return c.name();
         if (s instanceof Statement.Table t) return t.name();
-        if (s instanceof Statement.Find f) return f.name();
+        if (s instanceof Statement.Seek f) return f.name();
         if (s instanceof Statement.Broken b) return b.name();
         return null;
     }
@@ -289,11 +289,11 @@ final class FileAnalyzer {
                 params.add(t.param().name().text());
                 t.valid().forEach(b -> exprs.addAll(b.operands()));
             }
-            if (s instanceof Statement.Find f) {
+            if (s instanceof Statement.Seek f) {
                 // The unknown is not a dependency of its own equation.
                 params.add(f.name().text());
                 used.add(f.name().text());
-                for (Expr e : new Expr[] {f.low(), f.high(), f.guess(), f.lhs(), f.rhs()}) {
+                for (Expr e : new Expr[] {f.low(), f.high(), f.start(), f.lhs(), f.rhs()}) {
                     if (e != null) exprs.add(e);
                 }
             }
@@ -389,8 +389,8 @@ final class FileAnalyzer {
             rows.put(s, new Row.FunctionRow(t.span(), signature, "table", t.title()));
             return;
         }
-        if (s instanceof Statement.Find f) {
-            evaluateFind(f, inCycle);
+        if (s instanceof Statement.Seek f) {
+            evaluateSeek(f, inCycle);
             return;
         }
         if (!(s instanceof Statement.Definition d)) return;
@@ -429,13 +429,13 @@ final class FileAnalyzer {
         return new Tagged(v, null);
     }
 
-    private void evaluateFind(Statement.Find f, boolean inCycle) {
+    private void evaluateSeek(Statement.Seek f, boolean inCycle) {
         String name = f.name().text();
         if (inCycle || duplicates.contains(f)) {
             rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null));
             return;
         }
-        FindRunner.Outcome outcome = new FindRunner(scope, reporter, text, file, units)
+        SeekRunner.Outcome outcome = new SeekRunner(scope, reporter, text, file, units)
             .run(f, dependents.getOrDefault(name, List.of()));
         Value v = outcome.value();
         Evaluator evaluator = new Evaluator(scope, reporter, text, units);
@@ -448,7 +448,7 @@ final class FileAnalyzer {
         rows.put(f, new Row.ValueRow(f.span(), name, false, v, shown, basis, f.note(), null, outcome.solution()));
     }
 
-    private Unit displayUnit(Statement.Find f, Value v, Evaluator evaluator) {
+    private Unit displayUnit(Statement.Seek f, Value v, Evaluator evaluator) {
         if (f.displayUnit() != null) {
             Unit u = evaluator.resolveUnit(f.displayUnit(), false);
             if (u != null && u.dimension().equals(v.dimension())) return u;
@@ -458,7 +458,7 @@ final class FileAnalyzer {
             }
             return DisplayUnits.defaultFor(v.dimension());
         }
-        Expr end = f.low() != null ? f.low() : f.guess();
+        Expr end = f.low() != null ? f.low() : f.start();
         if (end instanceof Expr.Unary u) end = u.operand();
         if (end instanceof Expr.Quantity q && q.unit() != null && units.resolve(q.unit().text()) instanceof UnitResult.Ok ok
             && ok.unit().dimension().equals(v.dimension())) {

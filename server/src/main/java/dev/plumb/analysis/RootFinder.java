@@ -20,7 +20,7 @@ import org.apache.commons.math3.exception.TooManyEvaluationsException;
 final class RootFinder {
     static final int SCAN_POINTS = 60;
     static final int MAX_EVALUATIONS = 200;
-    static final int GUESS_STEPS = 40;
+    static final int OUTWARD_STEPS = 40;
 
     enum Status { SOLVED, NO_ROOT, NOT_CONVERGED, NO_VALUE }
 
@@ -43,18 +43,18 @@ final class RootFinder {
     }
 
     /** Searches from a starting value: the bracket doubles on each side until the residual changes sign. */
-    static Result fromGuess(DoubleUnaryOperator f, double guess) {
-        double fGuess = f.applyAsDouble(guess);
-        for (int k = 1; k <= GUESS_STEPS; k++) {
+    static Result outwardFrom(DoubleUnaryOperator f, double start) {
+        double fStart = f.applyAsDouble(start);
+        for (int k = 1; k <= OUTWARD_STEPS; k++) {
             double factor = Math.pow(2, k);
-            double low = guess > 0 ? guess / factor : guess < 0 ? guess * factor : -factor;
-            double high = guess > 0 ? guess * factor : guess < 0 ? guess / factor : factor;
+            double low = start > 0 ? start / factor : start < 0 ? start * factor : -factor;
+            double high = start > 0 ? start * factor : start < 0 ? start / factor : factor;
             double fl = f.applyAsDouble(low);
             double fh = f.applyAsDouble(high);
-            if (changes(fl, fGuess) || changes(fGuess, fh) || changes(fl, fh)) return within(f, low, high);
+            if (changes(fl, fStart) || changes(fStart, fh) || changes(fl, fh)) return within(f, low, high);
         }
-        double low = guess > 0 ? guess / Math.pow(2, GUESS_STEPS) : guess < 0 ? guess * Math.pow(2, GUESS_STEPS) : -1e12;
-        double high = guess > 0 ? guess * Math.pow(2, GUESS_STEPS) : guess < 0 ? guess / Math.pow(2, GUESS_STEPS) : 1e12;
+        double low = start > 0 ? start / Math.pow(2, OUTWARD_STEPS) : start < 0 ? start * Math.pow(2, OUTWARD_STEPS) : -1e12;
+        double high = start > 0 ? start * Math.pow(2, OUTWARD_STEPS) : start < 0 ? start / Math.pow(2, OUTWARD_STEPS) : 1e12;
         return within(f, low, high);
     }
 

@@ -3,7 +3,7 @@ package dev.plumb.analysis;
 import java.util.List;
 
 /**
- * How a {@code find} was solved, for the reviewer: the root's residual (LHS − RHS, SI, in the
+ * How a {@code seek} was solved, for the reviewer: the root's residual (LHS − RHS, SI, in the
  * equation's dimension) and every evaluation of the refinement with the bracket after it.
  */
 public record Solution(double residual, dev.plumb.units.Dimension residualDimension, List<Step> steps) {

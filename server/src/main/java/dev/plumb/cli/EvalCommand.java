@@ -25,7 +25,7 @@ final class EvalCommand implements Callable<Integer> {
     CommonOptions common;
 
     @picocli.CommandLine.Option(names = "--steps",
-        description = "also print each `find`'s iterations: trial value, residual and bracket (SI)")
+        description = "also print each `seek`'s iterations: trial value, residual and bracket (SI)")
     boolean steps;
 
     @Spec

@@ -50,7 +50,7 @@ final class EvalReport {
         }
     }
 
-    /** For a solved `find`: how many evaluations and the residual left at the root. */
+    /** For a solved `seek`: how many evaluations and the residual left at the root. */
     private static String solved(Row.ValueRow v) {
         if (v.solution() == null) return "";
         Unit unit = DisplayUnits.defaultFor(v.solution().residualDimension());

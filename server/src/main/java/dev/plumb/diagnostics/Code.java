@@ -7,6 +7,7 @@ package dev.plumb.diagnostics;
 public enum Code {
     SYNTAX_ERROR("syntax.error", Severity.ERROR),
     SYNTAX_NESTING("syntax.nesting", Severity.ERROR),
+    SYNTAX_RENAMED("syntax.renamed", Severity.ERROR),
     FILE_NOT_TEXT("file.not-text", Severity.ERROR),
     FILE_UNREADABLE("file.unreadable", Severity.ERROR),
     UNIT_UNKNOWN("unit.unknown", Severity.ERROR),

@@ -15,7 +15,7 @@ import java.util.TreeSet;
  */
 public final class Completion {
     public static final int LIMIT = 200;
-    private static final List<String> STATEMENT_WORDS = List.of("input", "check", "section", "use", "find", "correlation",
+    private static final List<String> STATEMENT_WORDS = List.of("input", "check", "section", "use", "seek", "correlation",
         "table", "title", "author", "reviewer", "revision");
     /** The words `as` takes, with what each says. */
     private static final List<String[]> TAGS = List.of(
@@ -48,6 +48,12 @@ public final class Completion {
         if (lineStartsAt(text, wordStart)) {
             for (String k : STATEMENT_WORDS) {
                 if (matches(k, word)) out.add(new CompletionEntry(k, CompletionEntry.Kind.KEYWORD, "statement", k + " ", false));
+            }
+            if (matches("seek", word)) {
+                out.add(new CompletionEntry("seek … in … where …", CompletionEntry.Kind.KEYWORD,
+                    "solve for a value in a range", "seek ${1:x} in ${2:low} .. ${3:high} where ${4:lhs} = ${5:rhs}", true));
+                out.add(new CompletionEntry("seek … from … where …", CompletionEntry.Kind.KEYWORD,
+                    "solve for a value from a start value", "seek ${1:x} from ${2:start} where ${3:lhs} = ${4:rhs}", true));
             }
         }
         for (String name : new TreeSet<>(a.scope().visibleNames())) {
@@ -96,7 +102,16 @@ public final class Completion {
         int i = start;
         while (i > 0 && (text.charAt(i - 1) == ' ' || text.charAt(i - 1) == '\t')) i--;
         if (i > 0 && Character.isDigit(text.charAt(i - 1))) return true;
-        return afterWord(text, start, "in");
+        return afterWord(text, start, "in") && !SEEK_RANGE.matcher(lineBefore(text, start)).matches();
+    }
+
+    /** {@code seek NAME in }: a value follows that `in`, not a unit. */
+    private static final java.util.regex.Pattern SEEK_RANGE =
+        java.util.regex.Pattern.compile("\\s*seek\\s+[\\p{L}_][\\p{L}\\p{Nd}_]*\\s+in\\s*");
+
+    private static String lineBefore(String text, int offset) {
+        int lineStart = text.lastIndexOf('\n', offset - 1) + 1;
+        return text.substring(lineStart, offset);
     }
 
     /** Whether blanks and then {@code word}, standing alone, come just before {@code start}. */

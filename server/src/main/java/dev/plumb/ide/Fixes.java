@@ -65,6 +65,11 @@ public final class Fixes {
 
     private static List<Action> quickFixes(Analysis a, Diagnostic d) {
         List<Action> out = new ArrayList<>();
+        if (d.fix() != null) {
+            // A finding that carries its own repair: offered as it is, first.
+            out.add(new Action(d.fix().title(), true, List.of(new Edit(d.fix().span().start(), d.fix().span().length(),
+                d.fix().text())), d));
+        }
         String m = d.message();
         if (d.code() == Code.SYNTAX_ERROR && m.startsWith("missing operator between")) {
             out.add(new Action("Insert '*'", true, List.of(new Edit(d.span().start(), 0, "* ")), d));

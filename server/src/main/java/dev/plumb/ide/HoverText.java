@@ -62,7 +62,7 @@ public final class HoverText {
             }
         }
         if (row != null && row.solution() != null) {
-            out.append("\n\nsolved by `find` in ").append(row.solution().iterations()).append(" iterations");
+            out.append("\n\nsolved by `seek` in ").append(row.solution().iterations()).append(" iterations");
         }
         if (b.file() != null && !b.file().equals(a.file())) out.append("\n\ndefined in ").append(b.file().getFileName());
         return out.toString();

@@ -5,7 +5,7 @@ import dev.plumb.analysis.Row;
 import java.util.ArrayList;
 import java.util.List;
 
-/** The values an editor shows inline: one per definition, check and solved `find`. */
+/** The values an editor shows inline: one per definition, check and solved `seek`. */
 public final class InlayValues {
     private InlayValues() {
     }

@@ -44,8 +44,8 @@ public final class SemanticSpans {
             c.operands().forEach(e -> expr(e, out));
         } else if (s instanceof Statement.Function f) {
             expr(f.body(), out);
-        } else if (s instanceof Statement.Find f) {
-            for (Expr e : new Expr[] {f.low(), f.high(), f.guess(), f.lhs(), f.rhs()}) if (e != null) expr(e, out);
+        } else if (s instanceof Statement.Seek f) {
+            for (Expr e : new Expr[] {f.low(), f.high(), f.start(), f.lhs(), f.rhs()}) if (e != null) expr(e, out);
             if (f.displayUnit() != null) out.add(new Token(f.displayUnit().span(), Type.UNIT));
         }
     }

@@ -1,13 +1,18 @@
 package dev.plumb.syntax;
 
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.diagnostics.Span;
 import dev.plumb.grammar.PlumbLexer;
 import dev.plumb.grammar.PlumbParser;
 import dev.plumb.grammar.PlumbParserBaseVisitor;
 import java.util.ArrayList;
 import java.util.List;
+import org.antlr.v4.runtime.CharStream;
 import org.antlr.v4.runtime.ParserRuleContext;
 import org.antlr.v4.runtime.Token;
+import org.antlr.v4.runtime.misc.Interval;
 import org.antlr.v4.runtime.tree.TerminalNode;
 
 /**
@@ -132,20 +137,73 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     }
 
     @Override
-    public Object visitFind(PlumbParser.FindContext ctx) {
+    public Object visitSeek(PlumbParser.SeekContext ctx) {
         List<PlumbParser.ExprContext> e = ctx.expr();
-        boolean bracket = ctx.WITHIN() != null;
-        Expr low = bracket ? expr(e.get(0)) : null;
-        Expr high = bracket ? expr(e.get(1)) : null;
-        Expr guess = bracket ? null : expr(e.get(0));
-        int k = bracket ? 2 : 1;
+        boolean range = ctx.IN() != null;
+        Expr low = range ? expr(e.get(0)) : null;
+        Expr high = range ? expr(e.get(1)) : null;
+        Expr start = range ? null : expr(e.get(0));
+        int k = range ? 2 : 1;
         Expr lhs = expr(e.get(k));
         Expr rhs = expr(e.get(k + 1));
         PlumbParser.TailContext tail = ctx.tail();
         UnitText unit = tail.UNIT() == null ? null : unitText(tail.UNIT().getSymbol());
         Ident basis = tail.name() == null ? null : ident(tail.name());
-        return new Statement.Find(span(ctx), ident(ctx.name()), low, high, guess, lhs, rhs,
+        return new Statement.Seek(span(ctx), ident(ctx.name()), low, high, start, lhs, rhs,
             Span.cover(lhs.span(), rhs.span()), unit, basis, note(tail.note()));
+    }
+
+    /** The former `find … within … so that …`: an error that shows the statement in today's words. */
+    @Override
+    public Object visitOldSolve(PlumbParser.OldSolveContext ctx) {
+        Respelling r = new Respelling(ctx);
+        r.replace(ctx.FIND().getSymbol(), "seek");
+        if (ctx.WITHIN() != null) r.replace(ctx.WITHIN().getSymbol(), "in");
+        if (ctx.GUESS() != null) r.replace(ctx.GUESS().getSymbol(), "from");
+        r.replaceSpan(ctx.SO().getSymbol(), ctx.THAT().getSymbol(), "where");
+        String now = r.text();
+        String changed = "`find` became `seek`, " + (ctx.WITHIN() != null ? "`within` became `in`" : "`guess` became `from`")
+            + " and `so that` became `where`";
+        errors.add(Diagnostic.of(Code.SYNTAX_RENAMED, span(ctx), "the solve statement is now written `" + oneLine(now)
+            + "`: " + changed).withFix(new Fix("Write it as `seek …`", span(ctx), now)), ctx.getStart().getStartIndex());
+        return new Statement.Broken(span(ctx), ident(ctx.name()));
+    }
+
+    /** The statement's text with some of its tokens written anew, keeping the user's spacing. */
+    private final class Respelling {
+        private final ParserRuleContext ctx;
+        private final java.util.TreeMap<Integer, int[]> cuts = new java.util.TreeMap<>();
+        private final java.util.Map<Integer, String> words = new java.util.HashMap<>();
+
+        Respelling(ParserRuleContext ctx) {
+            this.ctx = ctx;
+        }
+
+        void replace(Token t, String word) {
+            replaceSpan(t, t, word);
+        }
+
+        void replaceSpan(Token first, Token last, String word) {
+            cuts.put(first.getStartIndex(), new int[] {first.getStartIndex(), last.getStopIndex() + 1});
+            words.put(first.getStartIndex(), word);
+        }
+
+        String text() {
+            CharStream in = ctx.getStart().getInputStream();
+            int from = ctx.getStart().getStartIndex();
+            int to = ctx.getStop().getStopIndex() + 1;
+            StringBuilder b = new StringBuilder();
+            int at = from;
+            for (int[] cut : cuts.values()) {
+                b.append(in.getText(Interval.of(at, cut[0] - 1))).append(words.get(cut[0]));
+                at = cut[1];
+            }
+            return b.append(in.getText(Interval.of(at, to - 1))).toString();
+        }
+    }
+
+    private static String oneLine(String statement) {
+        return statement.replaceAll("\\s*\\R\\s*", " ");
     }
 
     // ---- correlation and table blocks ------------------------------------------------
@@ -213,8 +271,20 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     @Override
     public Object visitColumnsLine(PlumbParser.ColumnsLineContext ctx) {
         List<Statement.Column> columns = new ArrayList<>();
+        Respelling bracketed = new Respelling(ctx);
+        boolean old = false;
         for (PlumbParser.ColumnContext c : ctx.column()) {
             columns.add(new Statement.Column(ident(c.name()), c.UNIT() == null ? null : unitText(c.UNIT().getSymbol())));
+            if (c.LBRACK() != null) {
+                old = true;
+                bracketed.replaceSpan(c.LBRACK().getSymbol(), c.RBRACK().getSymbol(), " in " + c.UNIT().getText());
+            }
+        }
+        if (old) {
+            String now = bracketed.text();
+            errors.add(Diagnostic.of(Code.SYNTAX_RENAMED, span(ctx), "a column names its unit with `in`: write `"
+                + now + "`").withFix(new Fix("Write the units with `in`", span(ctx), now)), ctx.getStart().getStartIndex());
+            return new Statement.Broken(span(ctx), null);
         }
         return new BlockLine.Columns(span(ctx), columns);
     }

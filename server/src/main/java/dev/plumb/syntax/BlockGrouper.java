@@ -187,7 +187,7 @@ final class BlockGrouper {
             + head.name().text());
         if (columns == null) {
             if (!b.broken) error(head.span(), "table " + head.name().text() + " has no header row: add a line of column "
-                + "names, the argument first, e.g. `T[degC]  rho[kg/m^3]`");
+                + "names, the argument first, e.g. `T in degC   rho in kg/m^3`");
         } else {
             checkRows(head, columns, rows);
         }

@@ -1,6 +1,7 @@
 package dev.plumb.syntax;
 
 import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.diagnostics.Related;
 import dev.plumb.diagnostics.Span;
 import java.util.ArrayList;
@@ -38,7 +39,8 @@ final class Shift {
 
     private Diagnostic diagnostic(Diagnostic d) {
         List<Related> related = each(d.related(), r -> new Related(r.file(), span(r.span()), r.message()));
-        return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related);
+        Fix fix = d.fix() == null ? null : new Fix(d.fix().title(), span(d.fix().span()), d.fix().text());
+        return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related, fix);
     }
 
     private Span span(Span s) {
@@ -98,8 +100,8 @@ final class Shift {
         if (s instanceof Statement.Check c) {
             return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note());
         }
-        if (s instanceof Statement.Find f) {
-            return new Statement.Find(span(f.span()), ident(f.name()), expr(f.low()), expr(f.high()), expr(f.guess()),
+        if (s instanceof Statement.Seek f) {
+            return new Statement.Seek(span(f.span()), ident(f.name()), expr(f.low()), expr(f.high()), expr(f.start()),
                 expr(f.lhs()), expr(f.rhs()), span(f.equation()), unit(f.displayUnit()), ident(f.basis()), f.note());
         }
         if (s instanceof Statement.Correlation c) {

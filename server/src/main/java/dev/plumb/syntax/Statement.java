@@ -42,10 +42,10 @@ public sealed interface Statement {
     }
 
     /**
-     * {@code find NAME within LOW .. HIGH so that LHS = RHS} (or {@code guess START} instead of the
-     * bracket): NAME is the value that makes both sides equal. low/high or guess is null.
+     * {@code seek NAME in LOW .. HIGH where LHS = RHS} (or {@code from START} instead of the
+     * range): NAME is the value that makes both sides equal. low/high or start is null.
      */
-    record Find(Span span, Ident name, Expr low, Expr high, Expr guess, Expr lhs, Expr rhs, Span equation,
+    record Seek(Span span, Ident name, Expr low, Expr high, Expr start, Expr lhs, Expr rhs, Span equation,
                 UnitText displayUnit, Ident basis, String note) implements Statement {
     }
 

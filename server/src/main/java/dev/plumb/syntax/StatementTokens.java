@@ -247,12 +247,15 @@ final class StatementTokens {
     }
 
     static Ident nameFromHead(List<Token> head, LineMap lines) {
-        int k = !head.isEmpty() && head.get(0).getType() == PlumbLexer.INPUT ? 1 : 0;
+        int first = head.isEmpty() ? -1 : head.get(0).getType();
+        int k = first == PlumbLexer.INPUT || first == PlumbLexer.SEEK ? 1 : 0;
         if (head.size() < k + 2) return null;
         Token name = head.get(k);
         int after = head.get(k + 1).getType();
         boolean nameLike = name.getType() == PlumbLexer.IDENT;
-        if (!nameLike || (after != PlumbLexer.ASSIGN && after != PlumbLexer.LPAREN)) return null;
+        // `seek NAME in|from …`: the name is the unknown being solved for.
+        boolean solved = first == PlumbLexer.SEEK && (after == PlumbLexer.IN || after == PlumbLexer.FROM);
+        if (!nameLike || (after != PlumbLexer.ASSIGN && after != PlumbLexer.LPAREN && !solved)) return null;
         Span span = new Span(lines.fromCodePoint(name.getStartIndex()), lines.fromCodePoint(name.getStopIndex() + 1));
         return new Ident(name.getText(), span);
     }

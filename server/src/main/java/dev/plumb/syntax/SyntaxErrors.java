@@ -33,6 +33,12 @@ final class SyntaxErrors extends BaseErrorListener {
         positions.add(startCp);
     }
 
+    /** An error found while building the tree, at code-point index {@code cp}. */
+    void add(Diagnostic d, int cp) {
+        diagnostics.add(d);
+        positions.add(cp);
+    }
+
     List<Diagnostic> diagnostics() {
         return diagnostics;
     }

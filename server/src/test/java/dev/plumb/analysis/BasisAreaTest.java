@@ -73,7 +73,7 @@ class BasisAreaTest {
                 "drag(C, A, p) = C * A * p\nCd = cd_sphere(1e4)\nF = drag(Cd, pi * d^2, q)\n", Severity.WARNING,
                 "in drag(…): C (from cd_sphere) is referenced to frontal area"),
             Arguments.of("an area solved by find keeps its tag",
-                "find S within 0.01 m^2 .. 10 m^2 so that 2 * S = 3 m^2   as wetted\nCd = cd_sphere(1e4)\nF = Cd * S * q\n",
+                "seek S in 0.01 m^2 .. 10 m^2 where 2 * S = 3 m^2   as wetted\nCd = cd_sphere(1e4)\nF = Cd * S * q\n",
                 Severity.WARNING, "Cd (from cd_sphere) is referenced to frontal area, but S is tagged wetted"),
             Arguments.of("a plain input coefficient says nothing",
                 "input Cd = 1.2\nA = pi * d * L\nF = Cd * A * q\n", null, null),

@@ -53,7 +53,7 @@ class BasisDensityTest {
             Arguments.of("buoyant weight of the grain",
                 "W_b = (rho_s - rho_w) * g * Vol\n", false, null),
             Arguments.of("buoyant weight balanced against drag",
-                "find U within 1 mm/s .. 2 m/s so that Cd * A * 0.5 * rho_w * U^2 = (rho_s - rho_w) * g * Vol\n",
+                "seek U in 1 mm/s .. 2 m/s where Cd * A * 0.5 * rho_w * U^2 = (rho_s - rho_w) * g * Vol\n",
                 false, null),
             Arguments.of("relative density",
                 "s = rho_s / rho_w\nF = Cd * A * s * 0.5 * rho_w * V^2\n", false, null),

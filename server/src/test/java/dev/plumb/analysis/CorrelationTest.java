@@ -108,7 +108,7 @@ class CorrelationTest {
     void tableColumnsCarryTheirUnits() {
         Analysis a = Fixture.analyze("""
             table fluid(T: temperature)
-                T[degC]   rho[kg/m^3]   mu[mPa*s]
+                T in degC   rho in kg/m^3   mu in mPa*s
                 10        1000          1.3
                 20        998           1.0
             end

@@ -30,6 +30,26 @@ class SyntaxDiagnosticsTest {
     }
 
     @Test
+    void formerSpellingsAreErrorsThatShowTheNewOne() {
+        Fixture.checkResource("syntax.renamed.plumb");
+    }
+
+    @Test
+    void theFormerSolveSpellingCarriesItsRewriteAsAFix() {
+        String text = "W = 2 N\nfind V within 1 m/s .. 10 m/s\n    so that V * 1 N*s/m = W   \"note\"\n";
+        Analysis a = Fixture.analyze(text);
+        Diagnostic d = a.diagnostics().get(0);
+        assertEquals(Code.SYNTAX_RENAMED, d.code());
+        String mended = text.substring(0, d.fix().span().start()) + d.fix().text() + text.substring(d.fix().span().end());
+        // The user's own line break and spacing are kept; only the four words change.
+        assertEquals("W = 2 N\nseek V in 1 m/s .. 10 m/s\n    where V * 1 N*s/m = W   \"note\"\n", mended);
+        Analysis again = Fixture.analyze(mended);
+        assertEquals(List.of(), again.diagnostics(), "the mended text reads clean");
+        // by hand: V * 1 N·s/m = 2 N gives V = 2 m/s
+        assertEquals(2.0, Fixture.value(again, "V").value().si(), 1e-9);
+    }
+
+    @Test
     void aStrayTokenInTheMiddleOfALineCostsOnlyThatLine() {
         Fixture.checkResource("syntax.error.mid-line.plumb");
     }

@@ -279,7 +279,7 @@ class FormatterTest {
         unchanged("""
             title   "Survey buoy whip"
             drag(Cd, A, q)=Cd * A * q    "drag on a reference area"
-            find V within 1 mm/s .. 10 m/s so that drag = W    in mm/s
+            seek V in 1 mm/s .. 10 m/s where drag = W    in mm/s
             """);
     }
 

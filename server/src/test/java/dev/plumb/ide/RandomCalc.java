@@ -73,7 +73,7 @@ public final class RandomCalc {
         if (kind < 71) return indent + "check" + gap() + pick(EXPRESSIONS) + gap() + pick(List.of("<", "<=", "≤", "==", "!="))
             + gap() + pick(QUANTITIES) + optional(gap() + pick(NOTES));
         if (kind < 73) return "drag(Cd, A, q)" + gap() + "=" + gap() + "Cd * A * q" + optional(gap() + pick(NOTES));
-        if (kind < 75) return "find V within 1 mm/s .. 10 m/s so that drag = W" + optional(gap() + "in mm/s");
+        if (kind < 75) return "seek V in 1 mm/s .. 10 m/s where drag = W" + optional(gap() + "in mm/s");
         if (kind < 80) return continued();
         if (kind < 83) return "    " + pick(COMMENTS);
         if (kind < 86) return block();

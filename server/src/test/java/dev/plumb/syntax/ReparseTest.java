@@ -19,7 +19,7 @@ class ReparseTest {
     private static final List<String> INSERTS = List.of("\n", "\n", "\r\n", "\r", "  ", "    ", "\t", "x", "= 2 m",
         " * ", "(", ")", "#", "# note\n", "\"", "correlation f(Re)\n", "    = 24 / Re\n", "end\n", "end",
         "table t(x)\n", "  x   y\n  1   2\n", "input ", "check ", "ρ", "😀", "°C", "\n  ", "\nsection \"S\"\n", "use \"a.plumb\"\n",
-        "find V within 1 m/s .. 2 m/s so that V = 1.5 m/s\n", "title \"T\"\n", "\n\n", "  valid 0 < Re < 10\n");
+        "seek V in 1 m/s .. 2 m/s where V = 1.5 m/s\n", "title \"T\"\n", "\n\n", "  valid 0 < Re < 10\n");
 
     @Test
     void reparseAfterRandomEditsEqualsAFreshParse() {

@@ -11,8 +11,8 @@ import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
 
-/** `find`: terminal velocities against independent results, and the solver's reporting. */
-class FindTest {
+/** `seek`: terminal velocities against independent results, and the solver's reporting. */
+class SeekTest {
     private static final double G = 9.80665; // standard gravity, exact (3rd CGPM, 1901)
 
     private static List<Code> codes(Analysis a) {
@@ -23,7 +23,7 @@ class FindTest {
     private static String settling(String d, String rhoP, String rhoF, String mu, String cd, String bracket) {
         return "input d = " + d + "\ninput rho_p = " + rhoP + "\ninput rho_f = " + rhoF + "\ninput mu = " + mu + "\n"
             + "W = (rho_p - rho_f) * g_n * pi * d^3 / 6\n"
-            + "find V " + bracket + "\n    so that drag = W\n"
+            + "seek V " + bracket + "\n    where drag = W\n"
             + "Re = rho_f * V * d / mu\n"
             + "Cd = " + cd + "(Re)\n"
             + "drag = Cd * pi * d^2 / 4 * 0.5 * rho_f * V^2\n";
@@ -34,7 +34,7 @@ class FindTest {
         // Stokes' law (Stokes 1851): V = (rho_p - rho_f) g d² / (18 mu), the closed form of
         // 24/Re drag; a 20 µm quartz grain in water at 20 °C settles at Re ≈ 0.007.
         Analysis a = Fixture.analyze(settling("20 um", "2650 kg/m^3", "998.2 kg/m^3", "1.002 mPa*s",
-            "cd_sphere_stokes", "within 1 um/s .. 1 m/s"));
+            "cd_sphere_stokes", "in 1 um/s .. 1 m/s"));
         assertEquals(List.of(), codes(a));
         double expected = (2650 - 998.2) * G * 20e-6 * 20e-6 / (18 * 1.002e-3);
         assertEquals(expected, Fixture.value(a, "V").value().si(), expected * 1e-9);
@@ -58,9 +58,9 @@ class FindTest {
         // A 1 mm glass bead (2500 kg/m³) in water at 20 °C (998.2 kg/m³, 1.002 mPa·s: IAPWS
         // values, from memory) settles at Re ≈ 150, inside the Schiller–Naumann range.
         Analysis a = Fixture.analyze(settling("1 mm", "2500 kg/m^3", "998.2 kg/m^3", "1.002 mPa*s", "cd_sphere_sn",
-            "within 1 mm/s .. 10 m/s"));
+            "in 1 mm/s .. 10 m/s"));
         assertEquals(List.of(), codes(a), "Re at the root lies in the correlation's range");
-        double expected = terminalVelocity(1e-3, 2500, 998.2, 1.002e-3, FindTest::schillerNaumann);
+        double expected = terminalVelocity(1e-3, 2500, 998.2, 1.002e-3, SeekTest::schillerNaumann);
         assertEquals(expected, Fixture.value(a, "V").value().si(), expected * 1e-9);
         double re = Fixture.value(a, "Re").value().si();
         assertTrue(re > 50 && re < 800, "Re = " + re);
@@ -72,7 +72,7 @@ class FindTest {
         // Re ≈ 1e4. Clift–Gauvin (1970) as restated in Clift, Grace and Weber (1978):
         // Cd = 24/Re (1 + 0.15 Re^0.687) + 0.42 / (1 + 4.25e4 Re^-1.16), coded here independently.
         Analysis a = Fixture.analyze(settling("10 mm", "917 kg/m^3", "1.2 kg/m^3", "1.8e-5 Pa*s",
-            "cd_sphere_clift_gauvin", "guess 5 m/s"));
+            "cd_sphere_clift_gauvin", "from 5 m/s"));
         assertEquals(List.of(), codes(a));
         double expected = terminalVelocity(10e-3, 917, 1.2, 1.8e-5,
             re -> schillerNaumann(re) + 0.42 / (1 + 4.25e4 * Math.pow(re, -1.16)));
@@ -84,7 +84,7 @@ class FindTest {
         // The same bead with the Stokes law: the root's Re (≈ 400) is far outside Stokes' range;
         // one warning, with the Re of the root, not of any trial value.
         Analysis a = Fixture.analyze(settling("1 mm", "2500 kg/m^3", "998.2 kg/m^3", "1.002 mPa*s",
-            "cd_sphere_stokes", "within 1 mm/s .. 10 m/s"));
+            "cd_sphere_stokes", "in 1 mm/s .. 10 m/s"));
         assertEquals(List.of(Code.RANGE_OUTSIDE), codes(a));
         double re = Fixture.value(a, "Re").value().si();
         String shown = dev.plumb.units.QuantityFormat.number(re, 4);
@@ -93,7 +93,7 @@ class FindTest {
 
     @Test
     void theSolutionRecordsItsIterations() {
-        Analysis a = Fixture.analyze("find x within 0 .. 3 so that x^2 = 2\n");
+        Analysis a = Fixture.analyze("seek x in 0 .. 3 where x^2 = 2\n");
         Row.ValueRow row = Fixture.value(a, "x");
         assertEquals(Math.sqrt(2), row.value().si(), 1e-12);
         Solution s = row.solution();
@@ -105,8 +105,25 @@ class FindTest {
     }
 
     @Test
-    void aGuessBracketsOutward() {
-        Analysis a = Fixture.analyze("find h guess 1 m so that h^3 = 8 m^3\n");
+    void theBracketMayBeNamedValuesAndTheHeadMayContinueOnTheNextLine() {
+        // `in` right after `seek NAME` starts the bracket: the names after it are values, not units.
+        Analysis a = Fixture.analyze("""
+            input x_lo = 1 m
+            input x_hi = 4 m
+            seek x in x_lo .. x_hi where x^2 = 4 m^2   in mm
+            seek y
+                in x_lo .. x_hi
+                where y^3 = 8 m^3
+            """);
+        assertEquals(List.of(), codes(a));
+        // by hand: x² = 4 m² and y³ = 8 m³ give x = y = 2 m, x shown in mm
+        assertEquals("2000 mm", Fixture.value(a, "x").shown());
+        assertEquals(2, Fixture.value(a, "y").value().si(), 1e-12);
+    }
+
+    @Test
+    void aStartValueBracketsOutward() {
+        Analysis a = Fixture.analyze("seek h from 1 m where h^3 = 8 m^3\n");
         assertEquals(List.of(), codes(a));
         assertEquals(2, Fixture.value(a, "h").value().si(), 1e-12);
         assertEquals("2 m", Fixture.value(a, "h").shown());
@@ -121,7 +138,7 @@ class FindTest {
 
     @Test
     void noRootSuggestsAWiderBracket() {
-        Analysis a = Fixture.analyze("find c within 2 .. 5 so that c^2 = 1\n");
+        Analysis a = Fixture.analyze("seek c in 2 .. 5 where c^2 = 1\n");
         assertEquals(List.of(Code.SOLVE_NO_ROOT), codes(a));
         String m = a.diagnostics().get(0).message();
         assertTrue(m.contains("LHS − RHS is 3 at 2 and 24 at 5"), m);
@@ -130,7 +147,7 @@ class FindTest {
 
     @Test
     void severalRootsAreAllReported() {
-        Analysis a = Fixture.analyze("find b within -3 .. 3 so that b^2 = 1\n");
+        Analysis a = Fixture.analyze("seek b in -3 .. 3 where b^2 = 1\n");
         assertEquals(List.of(Code.SOLVE_MULTIPLE_ROOTS), codes(a));
         assertEquals(-1, Fixture.value(a, "b").value().si(), 1e-12);
         assertTrue(a.diagnostics().get(0).message().contains("has 2 roots"));
@@ -138,20 +155,20 @@ class FindTest {
 
     @Test
     void aJumpIsNotARoot() {
-        Analysis a = Fixture.analyze("find a within -1 .. 2 so that 1 / a = 0\n");
+        Analysis a = Fixture.analyze("seek a in -1 .. 2 where 1 / a = 0\n");
         assertEquals(List.of(Code.SOLVE_NOT_CONVERGED), codes(a));
         assertTrue(a.diagnostics().get(0).message().contains("jump"));
     }
 
     @Test
     void errorsInTheEquationAreReportedOnceAtTheirPlace() {
-        Analysis a = Fixture.analyze("find e within 1 m .. 2 m so that e = 3 s\nfind f within 1 .. 2 so that f = spedd\n");
+        Analysis a = Fixture.analyze("seek e in 1 m .. 2 m where e = 3 s\nseek f in 1 .. 2 where f = spedd\n");
         assertEquals(List.of(Code.UNIT_MISMATCH, Code.NAME_UNKNOWN), codes(a));
     }
 
     @Test
     void theBracketMustHaveOneDimension() {
-        Analysis a = Fixture.analyze("find x within 1 m .. 2 s so that x = 1.5 m\n");
+        Analysis a = Fixture.analyze("seek x in 1 m .. 2 s where x = 1.5 m\n");
         assertEquals(List.of(Code.UNIT_MISMATCH), codes(a));
         assertTrue(a.diagnostics().get(0).message().contains("the bracket's ends differ"));
     }

@@ -12,21 +12,21 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * For each {@code find NAME …}: the definitions its equation reaches that depend on NAME
+ * For each {@code seek NAME …}: the definitions its equation reaches that depend on NAME
  * themselves (a Reynolds number from the unknown speed, a drag coefficient from that Reynolds
  * number …). They are re-evaluated for every trial value, so the solve must come before them,
- * and after everything else they use: the find's dependencies are adjusted to say exactly that.
+ * and after everything else they use: the seek's dependencies are adjusted to say exactly that.
  */
-final class FindDependents {
-    private FindDependents() {
+final class SeekDependents {
+    private SeekDependents() {
     }
 
-    /** Adjusts {@code uses} in place and returns, for each find, the names re-evaluated with it. */
+    /** Adjusts {@code uses} in place and returns, for each seek, the names re-evaluated with it. */
     static Map<String, Set<String>> adjust(Map<String, Statement> own, Map<String, Set<String>> uses) {
         Map<String, Set<String>> out = new LinkedHashMap<>();
         Map<String, Set<String>> usedBy = reverse(uses);
         for (var entry : own.entrySet()) {
-            if (!(entry.getValue() instanceof Statement.Find f)) continue;
+            if (!(entry.getValue() instanceof Statement.Seek f)) continue;
             String unknown = entry.getKey();
             Set<String> dependsOnUnknown = closure(unknown, usedBy);
             Set<String> fromEquation = new LinkedHashSet<>();

@@ -14,13 +14,13 @@ import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 
 /**
- * Solves one {@code find}: NAME is given trial values; the definitions that depend on it (and
+ * Solves one {@code seek}: NAME is given trial values; the definitions that depend on it (and
  * that the equation uses) are re-evaluated for each trial, quietly; the residual LHS − RHS goes
  * to {@link RootFinder}. At the root everything is evaluated once more for real, so range
  * warnings speak of the solution, never of an intermediate trial, and errors in the equation
  * are reported once.
  */
-final class FindRunner {
+final class SeekRunner {
     /** What solving gave: the value (UNKNOWN on failure) and, when solved, how. */
     record Outcome(Value value, Solution solution) {
     }
@@ -31,7 +31,7 @@ final class FindRunner {
     private final Path file;
     private final UnitRegistry units;
 
-    FindRunner(Scope scope, Reporter reporter, String text, Path file, UnitRegistry units) {
+    SeekRunner(Scope scope, Reporter reporter, String text, Path file, UnitRegistry units) {
         this.scope = scope;
         this.reporter = reporter;
         this.text = text;
@@ -40,18 +40,18 @@ final class FindRunner {
     }
 
     /** @param dependents the definitions that depend on NAME and feed the equation, in evaluation order */
-    Outcome run(Statement.Find f, List<Statement.Definition> dependents) {
+    Outcome run(Statement.Seek f, List<Statement.Definition> dependents) {
         Evaluator real = new Evaluator(scope, reporter, text, units);
         String name = f.name().text();
         Dimension dim;
         DoubleUnaryOperator residual;
         RootFinder.Result result;
-        if (f.guess() != null) {
-            Value guess = real.eval(f.guess());
-            if (!guess.known()) return failed(name);
-            dim = guess.dimension();
+        if (f.start() != null) {
+            Value start = real.eval(f.start());
+            if (!start.known()) return failed(name);
+            dim = start.dimension();
             residual = residual(name, dim, dependents, f);
-            result = RootFinder.fromGuess(residual, guess.si());
+            result = RootFinder.outwardFrom(residual, start.si());
         } else {
             Value low = real.eval(f.low());
             Value high = real.eval(f.high());
@@ -104,7 +104,7 @@ final class FindRunner {
 
     /** The residual LHS − RHS for a trial value of NAME (SI); NaN where it cannot be computed. */
     private DoubleUnaryOperator residual(String name, Dimension dim, List<Statement.Definition> dependents,
-                                         Statement.Find f) {
+                                         Statement.Seek f) {
         return x -> {
             Value[] sides = evaluateAt(name, Value.of(x, dim), dependents, new Reporter(), f);
             if (sides == null || !sides[0].dimension().equals(sides[1].dimension())) return Double.NaN;
@@ -113,7 +113,7 @@ final class FindRunner {
     }
 
     /** Binds NAME, re-evaluates its dependents, and evaluates both sides of the equation. */
-    private Value[] evaluateAt(String name, Value x, List<Statement.Definition> dependents, Reporter r, Statement.Find f) {
+    private Value[] evaluateAt(String name, Value x, List<Statement.Definition> dependents, Reporter r, Statement.Seek f) {
         bind(name, x, null);
         Evaluator e = new Evaluator(scope, r, text, units);
         for (Statement.Definition d : dependents) bind(d.name().text(), e.eval(d.expr()), null);
@@ -124,7 +124,7 @@ final class FindRunner {
 
     /** Once, for real, at the root (or the bracket's middle when there is none): reports the equation's own findings. */
     private Value[] finalSides(String name, Dimension dim, double at, List<Statement.Definition> dependents,
-                               Statement.Find f) {
+                               Statement.Seek f) {
         bind(name, Value.of(at, dim), null);
         Evaluator quiet = new Evaluator(scope, new Reporter(), text, units);
         for (Statement.Definition d : dependents) bind(d.name().text(), quiet.eval(d.expr()), null);
@@ -150,7 +150,7 @@ final class FindRunner {
         return new Outcome(Value.UNKNOWN, null);
     }
 
-    private void reportNoRoot(Statement.Find f, RootFinder.Result r, Dimension dim, Unit unit, Dimension residualDim) {
+    private void reportNoRoot(Statement.Seek f, RootFinder.Result r, Dimension dim, Unit unit, Dimension residualDim) {
         Unit ru = DisplayUnits.defaultFor(residualDim);
         String ends = "LHS − RHS is " + showResidual(r.fLow(), residualDim, ru) + " at " + show(r.low(), dim, unit) + " and "
             + showResidual(r.fHigh(), residualDim, ru) + " at " + show(r.high(), dim, unit);
@@ -158,12 +158,12 @@ final class FindRunner {
             ? "; a wider search finds a sign change between " + show(r.wider()[0], dim, unit) + " and "
                 + show(r.wider()[1], dim, unit) + ": widen the bracket to include it"
             : "; no sign change either in a range a thousand times wider: check the equation";
-        String where = f.guess() != null ? " searching outward from the guess" : " in the bracket";
+        String where = f.start() != null ? " searching outward from the start value" : " in the bracket";
         reporter.report(Code.SOLVE_NO_ROOT, f.name().span(), "no root of " + f.name().text() + where
             + ": the two sides do not cross (" + ends + ")" + fix);
     }
 
-    private void reportMultiple(Statement.Find f, RootFinder.Result r, Dimension dim, Unit unit) {
+    private void reportMultiple(Statement.Seek f, RootFinder.Result r, Dimension dim, Unit unit) {
         List<String> all = new ArrayList<>();
         for (double[] b : r.brackets()) all.add(show(b[0], dim, unit) + " .. " + show(b[1], dim, unit));
         reporter.report(Code.SOLVE_MULTIPLE_ROOTS, f.name().span(), f.name().text() + " has " + r.brackets().size()
@@ -171,12 +171,12 @@ final class FindRunner {
             + show(r.root(), dim, unit) + ", is taken: narrow the bracket to choose another");
     }
 
-    private Unit unitOf(Statement.Find f, Dimension dim) {
+    private Unit unitOf(Statement.Seek f, Dimension dim) {
         if (f.displayUnit() != null && units.resolve(f.displayUnit().text()) instanceof dev.plumb.units.UnitResult.Ok ok
             && ok.unit().dimension().equals(dim)) {
             return ok.unit();
         }
-        Expr end = f.low() != null ? f.low() : f.guess();
+        Expr end = f.low() != null ? f.low() : f.start();
         if (end instanceof Expr.Unary u) end = u.operand();
         if (end instanceof Expr.Quantity q && q.unit() != null
             && units.resolve(q.unit().text()) instanceof dev.plumb.units.UnitResult.Ok ok) {
