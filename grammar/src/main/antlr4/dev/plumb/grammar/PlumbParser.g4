@@ -36,8 +36,16 @@ narrative   : NARRATIVE;
 section     : SECTION STRING;
 useFile     : USE STRING;
 input       : INPUT name ASSIGN expr tail;
-definition  : name ASSIGN expr tail;
-functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN expr note?;
+definition  : name ASSIGN value tail;
+functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN value note?;
+/**
+ * A formula, or a piecewise one: `a when COND otherwise b`, or, as in correlation blocks, one
+ * branch a line (`= a when COND` … `= b otherwise`; the lines after the first are indented, so
+ * the token filter has joined them).
+ */
+value       : expr ( WHEN condition ( ( OTHERWISE | ASSIGN ) expr WHEN condition )*
+                     ( OTHERWISE expr | ASSIGN expr OTHERWISE )? )?;
+condition   : expr ( comparator expr )+;
 check       : CHECK expr ( comparator expr )+ note?;
 seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
 /** The solve statement's former spelling: read only to say how it is written now. */

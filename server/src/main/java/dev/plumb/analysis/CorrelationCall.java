@@ -53,20 +53,11 @@ final class CorrelationCall {
                 : "inside its range, " + range));
         regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
-        for (Statement.Piece piece : def.pieces()) {
-            if (piece.otherwise() || piece.condition() == null) return noted(inside.eval(piece.expr()), basis, name);
-            List<Value> sides = piece.condition().operands().stream().map(inside::eval).toList();
-            if (sides.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
-            boolean holds = true;
-            for (int i = 0; i < piece.condition().comparators().size(); i++) {
-                holds &= sides.get(i).dimension().equals(sides.get(i + 1).dimension())
-                    && RangeCheck.holds(sides.get(i).si(), piece.condition().comparators().get(i), sides.get(i + 1).si());
-            }
-            if (holds) return noted(inside.eval(piece.expr()), basis, name);
-        }
-        reporter.report(Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
-            + ": every `when` condition is false; add a last line `= … otherwise` to " + name);
-        return Value.UNKNOWN;
+        // Findings inside the formula go to the correlation's own reporter; none applying is the call's.
+        Value v = new Pieces(inside, inner, b.scope().text()).choose(def.pieces(), why -> reporter.report(
+            Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
+                + ": every `when` condition is false; add a last line `= … otherwise` to " + name));
+        return noted(v, basis, name);
     }
 
     Value table(Expr.Call c, Binding.TableBinding t, List<Value> args) {

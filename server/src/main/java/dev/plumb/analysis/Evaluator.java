@@ -46,7 +46,17 @@ final class Evaluator {
         if (e instanceof Expr.Reference r) return reference(r);
         if (e instanceof Expr.Quantity q) return quantity(q);
         if (e instanceof Expr.Call c) return call(c);
+        if (e instanceof Expr.Piecewise p) {
+            return new Pieces(this, reporter, text).choose(p.pieces(), why -> reporter.report(Code.RANGE_NO_FORMULA,
+                p.span(), "no piece of this formula applies: " + why
+                    + "; add a last piece `otherwise …`, or a `when` that covers this case"));
+        }
         return unary((Expr.Unary) e);
+    }
+
+    /** The same evaluation, reporting nothing: to learn what a formula gives without judging it. */
+    Evaluator quiet() {
+        return new Evaluator(scope, locals, new Reporter(), text, units);
     }
 
     // ---- leaves ----------------------------------------------------------------------

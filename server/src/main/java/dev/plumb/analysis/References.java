@@ -21,6 +21,11 @@ final class References {
         } else if (e instanceof Expr.Binary b) {
             each(b.left(), visit);
             each(b.right(), visit);
+        } else if (e instanceof Expr.Piecewise p) {
+            for (var piece : p.pieces()) {
+                each(piece.expr(), visit);
+                if (piece.condition() != null) piece.condition().operands().forEach(o -> each(o, visit));
+            }
         }
     }
 }

@@ -57,6 +57,11 @@ public final class SemanticSpans {
         else if (e instanceof Expr.Binary b) {
             expr(b.left(), out);
             expr(b.right(), out);
+        } else if (e instanceof Expr.Piecewise p) {
+            for (var piece : p.pieces()) {
+                expr(piece.expr(), out);
+                if (piece.condition() != null) piece.condition().operands().forEach(o -> expr(o, out));
+            }
         }
     }
 }

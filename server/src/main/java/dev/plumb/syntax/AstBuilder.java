@@ -97,7 +97,7 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     @Override
     public Object visitInput(PlumbParser.InputContext ctx) {
-        return definition(ctx, true, ctx.name(), ctx.expr(), ctx.tail());
+        return definition(ctx, true, ctx.name(), expr(ctx.expr()), ctx.tail());
     }
 
     @Override
@@ -105,19 +105,45 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         List<PlumbParser.NameContext> names = ctx.name();
         List<Ident> params = new ArrayList<>();
         for (int i = 1; i < names.size(); i++) params.add(ident(names.get(i)));
-        return new Statement.Function(span(ctx), ident(names.get(0)), params, expr(ctx.expr()), note(ctx.note()));
+        return new Statement.Function(span(ctx), ident(names.get(0)), params, value(ctx.value()), note(ctx.note()));
     }
 
     @Override
     public Object visitDefinition(PlumbParser.DefinitionContext ctx) {
-        return definition(ctx, false, ctx.name(), ctx.expr(), ctx.tail());
+        return definition(ctx, false, ctx.name(), value(ctx.value()), ctx.tail());
     }
 
     private Statement definition(ParserRuleContext ctx, boolean input, PlumbParser.NameContext name,
-                                 PlumbParser.ExprContext expr, PlumbParser.TailContext tail) {
+                                 Expr expr, PlumbParser.TailContext tail) {
         UnitText unit = tail.UNIT() == null ? null : unitText(tail.UNIT().getSymbol());
         Ident basis = tail.name() == null ? null : ident(tail.name());
-        return new Statement.Definition(span(ctx), input, ident(name), expr(expr), unit, basis, note(tail.note()));
+        return new Statement.Definition(span(ctx), input, ident(name), expr, unit, basis, note(tail.note()));
+    }
+
+    /**
+     * A formula, or a piecewise one read branch by branch: an expression followed by `when` is a
+     * branch; one after `otherwise` with no `when`, or before a closing `otherwise`, is the last.
+     */
+    private Expr value(PlumbParser.ValueContext ctx) {
+        if (ctx.WHEN().isEmpty()) return expr(ctx.expr(0));
+        List<Statement.Piece> pieces = new ArrayList<>();
+        Expr pending = null;
+        for (int i = 0; i < ctx.getChildCount(); i++) {
+            var child = ctx.getChild(i);
+            if (child instanceof PlumbParser.ExprContext e) {
+                pending = expr(e);
+            } else if (child instanceof PlumbParser.ConditionContext c) {
+                Statement.Bound when = bound(c, c.expr(), c.comparator());
+                pieces.add(new Statement.Piece(Span.cover(pending.span(), when.span()), pending, when, false));
+                pending = null;
+            } else if (child instanceof TerminalNode t && t.getSymbol().getType() == PlumbLexer.OTHERWISE && pending != null) {
+                pieces.add(new Statement.Piece(Span.cover(pending.span(), span(t.getSymbol())), pending, null, true));
+                pending = null;
+            }
+        }
+        if (pending != null) pieces.add(new Statement.Piece(pending.span(), pending, null, true));
+        Span all = Span.cover(pieces.get(0).span(), pieces.get(pieces.size() - 1).span());
+        return new Expr.Piecewise(all, pieces);
     }
 
     @Override

@@ -26,6 +26,16 @@ public sealed interface Expr {
     record Binary(Span span, Op op, Expr left, Expr right) implements Expr {
     }
 
+    /**
+     * A piecewise formula, the whole right side of a definition or function: the first piece whose
+     * {@code when} condition holds gives the value; an {@code otherwise} piece, last, has none.
+     */
+    record Piecewise(Span span, List<Statement.Piece> pieces) implements Expr {
+        public Piecewise {
+            pieces = List.copyOf(pieces);
+        }
+    }
+
     enum Op {
         ADD("+"), SUBTRACT("-"), MULTIPLY("*"), DIVIDE("/"), POWER("^"), NEGATE("-"), PLUS("+");
 

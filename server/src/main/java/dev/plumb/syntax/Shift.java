@@ -71,6 +71,10 @@ final class Shift {
         return b == null ? null : new Statement.Bound(span(b.span()), exprs(b.operands()), b.comparators());
     }
 
+    private Statement.Piece piece(Statement.Piece p) {
+        return new Statement.Piece(span(p.span()), expr(p.expr()), bound(p.condition()), p.otherwise());
+    }
+
     private Statement.Param param(Statement.Param p) {
         return new Statement.Param(ident(p.name()), ident(p.dimension()), ident(p.role()));
     }
@@ -81,6 +85,7 @@ final class Shift {
         if (e instanceof Expr.Reference r) return new Expr.Reference(span(r.span()), r.name());
         if (e instanceof Expr.Call c) return new Expr.Call(span(c.span()), ident(c.callee()), exprs(c.args()));
         if (e instanceof Expr.Unary u) return new Expr.Unary(span(u.span()), u.op(), expr(u.operand()));
+        if (e instanceof Expr.Piecewise p) return new Expr.Piecewise(span(p.span()), each(p.pieces(), this::piece));
         Expr.Binary b = (Expr.Binary) e;
         return new Expr.Binary(span(b.span()), b.op(), expr(b.left()), expr(b.right()));
     }
@@ -106,8 +111,7 @@ final class Shift {
         }
         if (s instanceof Statement.Correlation c) {
             List<Statement.Param> params = each(c.params(), this::param);
-            List<Statement.Piece> pieces = each(c.pieces(),
-                p -> new Statement.Piece(span(p.span()), expr(p.expr()), bound(p.condition()), p.otherwise()));
+            List<Statement.Piece> pieces = each(c.pieces(), this::piece);
             return new Statement.Correlation(span(c.span()), ident(c.name()), params, c.title(), c.source(),
                 ident(c.family()), ident(c.basis()), bounds(c.valid()), ident(c.regime()), expr(c.accuracy()), pieces);
         }

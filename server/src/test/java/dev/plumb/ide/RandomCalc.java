@@ -86,6 +86,13 @@ public final class RandomCalc {
         if (input) b.append("input").append(pick(List.of(" ", " ", "  ", "\t")));
         b.append(pick(NAMES)).append(gap()).append('=').append(gap());
         b.append(random.nextBoolean() ? pick(QUANTITIES) : pick(EXPRESSIONS));
+        if (!input && random.nextInt(6) == 0) {
+            // A piecewise formula, on one line or one piece a line.
+            b.append(nonEmptyGap()).append("when").append(nonEmptyGap()).append(pick(EXPRESSIONS)).append(gap())
+                .append(pick(List.of("<", "<=", ">"))).append(gap()).append(pick(QUANTITIES));
+            b.append(random.nextBoolean() ? nonEmptyGap() + "otherwise" + nonEmptyGap() + pick(QUANTITIES)
+                : "\n    = " + pick(QUANTITIES) + " otherwise");
+        }
         if (random.nextInt(3) == 0) b.append(nonEmptyGap()).append("in").append(nonEmptyGap()).append(pick(UNITS));
         if (random.nextInt(5) == 0) b.append(nonEmptyGap()).append("as").append(nonEmptyGap()).append(pick(BASES));
         if (random.nextInt(2) == 0) b.append(gap()).append(pick(NOTES));
