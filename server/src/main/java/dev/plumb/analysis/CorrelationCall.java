@@ -145,10 +145,14 @@ final class CorrelationCall {
         }
     }
 
-    /** Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below. */
+    /**
+     * Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below.
+     * A tripped formula is turbulent because the layer is stimulated, whatever Re_crit says: its
+     * valid lines alone bound it.
+     */
     private void regime(Expr.Call c, Binding.CorrelationBinding b, Map<String, Value> params, List<Value> args) {
         Statement.Correlation def = b.def();
-        if (def.regime() == null) return;
+        if (def.regime() == null || def.regime().text().equals("tripped")) return;
         String reName = def.params().stream().map(p -> p.name().text()).filter(n -> n.startsWith("Re")).findFirst()
             .orElse(null);
         if (reName == null || !(caller.lookup("Re_crit") instanceof Binding.ValueBinding crit)
@@ -172,8 +176,7 @@ final class CorrelationCall {
                 + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely laminar there";
         List<String> better = new ArrayList<>();
         for (Binding other : familyMembers(b)) {
-            if (other instanceof Binding.CorrelationBinding oc && covers(oc, args)
-                && (oc.def().regime() == null || !oc.def().regime().text().equals(def.regime().text()))) {
+            if (other instanceof Binding.CorrelationBinding oc && covers(oc, args) && suitsOtherRegime(oc, laminar)) {
                 better.add(oc.def().name().text());
             }
         }
@@ -181,6 +184,17 @@ final class CorrelationCall {
             : "; use " + (laminar ? "a mixed-flow or turbulent" : "a laminar or mixed-flow") + " correlation: "
                 + listed(better);
         reporter.report(Code.RANGE_REGIME, c.span(), message + fix);
+    }
+
+    /**
+     * Whether a correlation fits where a laminar (or turbulent) one was warned: one for the other
+     * regime, or for both (mixed flow). A tripped one never replaces a turbulent one below
+     * Re_crit: the layer there is laminar unless someone trips it.
+     */
+    private static boolean suitsOtherRegime(Binding.CorrelationBinding other, boolean warnedLaminar) {
+        String regime = other.def().regime() == null ? null : other.def().regime().text();
+        if (regime == null) return true;
+        return warnedLaminar ? !regime.equals("laminar") : regime.equals("laminar");
     }
 
     /** "; within range: a, b" — the library's members of the same family that cover these arguments. */

@@ -251,11 +251,42 @@ class FlatPlateTest {
     @Test
     void turbulentFormulaBelowReCritIsWarned() {
         for (String f : new String[] {"cf_plate_turb_local", "cf_plate_turb_avg", "delta_plate_turb",
-            "cf_plate_prandtl_schlichting", "cf_ittc1957"}) {
+            "cf_plate_prandtl_schlichting"}) {
             RangeAssertions.assertOneWarning("x = " + f + "(4e5)\n", RangeAssertions.REGIME, f, n(4e5), n(5e5));
         }
-        // The ITTC line reaches below Re_crit: only the regime is warned there.
-        RangeAssertions.assertNone("x = cf_ittc1957(4e5)\n", RangeAssertions.OUTSIDE);
+    }
+
+    @Test
+    void ittcLineIsQuietInItsWholeRangeBecauseItAssumesATrippedLayer() {
+        // The ITTC-1957 line is applied to models whose layer is tripped by turbulence
+        // stimulators, from Re of about 1e5 on model scale (ITTC Recommended Procedure 7.5-02-02-01,
+        // Resistance Test, turbulence stimulation; from memory; common practice in towing tanks).
+        // So a model at Re = 1e5 .. Re_crit is inside both its range and its premise.
+        for (double re : new double[] {1e5, 2e5, 4e5, 4.99e5}) RangeAssertions.assertClean("cf_ittc1957(" + re + ")");
+        // The premise is in the title, which hover and the README show.
+        String title = ((dev.plumb.analysis.Binding.CorrelationBinding) dev.plumb.analysis.Stdlib.get().entries()
+            .get("cf_ittc1957")).def().title();
+        assertTrue(title.contains("tripped"), title);
+    }
+
+    @Test
+    void aTurbulentWarningDoesNotOfferTheTrippedLine() {
+        // A document with Re_crit = 1e6 and a 1/7-law plate at 8e5: the layer is laminar there
+        // unless tripped, so the fix is a laminar or mixed-flow law, not the ITTC line (which
+        // covers 8e5 but assumes a trip).
+        Diagnostic w = RangeAssertions.assertOneWarning("Re_crit = 1e6\nx = cf_plate_turb_avg(8e5)\n",
+            RangeAssertions.REGIME, "cf_plate_turb_avg", n(8e5), n(1e6));
+        assertTrue(w.message().contains("cf_plate_blasius_avg"), w::message);
+        RangeAssertions.assertNotOffered(w, "cf_ittc1957");
+    }
+
+    @Test
+    void aLaminarWarningOffersTheTrippedLineAmongTheTurbulentOnes() {
+        // Blasius at 1e6 (above Re_crit): a turbulent layer is the likely case, and a tripped
+        // one is turbulent too.
+        Diagnostic w = RangeAssertions.assertOneWarning("x = cf_plate_blasius_avg(1e6)\n", RangeAssertions.REGIME,
+            "cf_plate_blasius_avg", n(1e6), n(5e5));
+        assertTrue(w.message().contains("cf_ittc1957"), w::message);
     }
 
     @Test
