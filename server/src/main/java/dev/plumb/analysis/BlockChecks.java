@@ -22,7 +22,11 @@ final class BlockChecks {
     static final Set<String> BASES = Set.of("frontal", "wetted", "planform");
     /** Whose density a value is: the fluid's (drag, lift, Reynolds number) or the body's (weight). */
     static final Set<String> DENSITY_TAGS = Set.of("fluid", "body");
-    private static final Set<String> REGIMES = Set.of("laminar", "turbulent");
+    /**
+     * A boundary-layer formula's regime: laminar, turbulent, or tripped (turbulent because the
+     * layer is stimulated at the leading edge, as on towed ship models, so Re_crit does not apply).
+     */
+    private static final Set<String> REGIMES = Set.of("laminar", "turbulent", "tripped");
     private static final Set<String> INTERPOLATIONS = Set.of("linear", "loglog");
 
     private final Reporter reporter;

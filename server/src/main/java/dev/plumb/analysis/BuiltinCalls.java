@@ -21,18 +21,20 @@ final class BuiltinCalls {
     Value call(String name, Expr.Call c, List<Value> args) {
         return switch (name) {
             case "sqrt" -> sqrt(c, args.get(0));
-            case "abs" -> new Value(Math.abs(args.get(0).si()), args.get(0).dimension(), args.get(0).temperature());
+            case "abs" -> new Value(Math.abs(args.get(0).si()), args.get(0).dimension(), args.get(0).temperature())
+                .asAngle(args.get(0).angle());
             case "min", "max" -> extreme(name, c, args);
-            case "atan2" -> atan2(c, args.get(0), args.get(1));
+            case "atan2" -> atan2(c, args.get(0), args.get(1)).asAngle(true);
             case "exp" -> plain(name, c, args.get(0), Math::exp);
             case "ln" -> positive(name, c, args.get(0), Math::log);
             case "log10" -> positive(name, c, args.get(0), Math::log10);
             case "sin" -> plain(name, c, args.get(0), Math::sin);
             case "cos" -> plain(name, c, args.get(0), Math::cos);
             case "tan" -> plain(name, c, args.get(0), Math::tan);
-            case "asin" -> unitInterval(name, c, args.get(0), Math::asin);
-            case "acos" -> unitInterval(name, c, args.get(0), Math::acos);
-            case "atan" -> plain(name, c, args.get(0), Math::atan);
+            // The inverse functions give angles (in radians): they may be passed where an angle is declared.
+            case "asin" -> unitInterval(name, c, args.get(0), Math::asin).asAngle(true);
+            case "acos" -> unitInterval(name, c, args.get(0), Math::acos).asAngle(true);
+            case "atan" -> plain(name, c, args.get(0), Math::atan).asAngle(true);
             default -> throw new IllegalStateException("no built-in function " + name);
         };
     }

@@ -5,6 +5,7 @@ import dev.plumb.syntax.Expr;
 import dev.plumb.syntax.Statement;
 import dev.plumb.units.Dimension;
 import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.QuantityFormat;
 import dev.plumb.units.UnitRegistry;
 import java.util.ArrayList;
 import java.util.List;
@@ -35,6 +36,7 @@ final class CorrelationCall {
         String name = def.name().text();
         if (b.circular() || !dimensionsFit(c, name, def.params(), args)) return Value.UNKNOWN;
         roles(c, name, def.params(), args);
+        bareAngles(c, name, def.params(), args);
         Map<String, Value> params = RangeCheck.bind(def.params(), args);
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
         Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
@@ -63,6 +65,7 @@ final class CorrelationCall {
     Value table(Expr.Call c, Binding.TableBinding t, List<Value> args) {
         Statement.Table def = t.def();
         if (!dimensionsFit(c, t.name(), List.of(def.param()), args)) return Value.UNKNOWN;
+        bareAngles(c, t.name(), List.of(def.param()), args);
         TableData data = t.data();
         Value x = args.get(0);
         if (!x.dimension().equals(data.argument)) {
@@ -120,6 +123,29 @@ final class CorrelationCall {
         return true;
     }
 
+    /**
+     * Warns where a parameter declared {@code : angle} gets a number with no angle unit: angles
+     * are dimensionless, so a bare 30 is 30 rad (1719°), and that is seldom what was meant.
+     */
+    private void bareAngles(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {
+        for (int i = 0; i < params.size(); i++) {
+            Statement.Param p = params.get(i);
+            Value v = args.get(i);
+            if (p.dimension() == null || !p.dimension().text().equals("angle") || v.angle()) continue;
+            Expr arg = c.args().get(i);
+            String rad = QuantityFormat.number(v.si(), 4);
+            String deg = QuantityFormat.number(Math.toDegrees(v.si()), 4);
+            String head = name + " takes " + p.name().text() + " as an angle, but ";
+            String message = arg instanceof Expr.Quantity q && q.unit() == null
+                ? head + q.numberText() + " is a plain number, read as " + rad + " rad (" + deg + "°): write "
+                    + q.numberText() + " deg, or " + q.numberText() + " rad when radians are meant"
+                : head + operand.apply(arg, v) + " carries no angle unit, so it is read as " + rad + " rad (" + deg
+                    + "°): give it its unit where it is defined (`30 deg`, `0.5 rad`), or write `* 1 rad` when it"
+                    + " is a number of radians";
+            reporter.report(Code.UNIT_BARE_ANGLE, arg.span(), message);
+        }
+    }
+
     /** Warns where a parameter declared `as fluid` gets a density tagged body, or the other way round. */
     private void roles(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {
         for (int i = 0; i < params.size(); i++) {
@@ -136,10 +162,14 @@ final class CorrelationCall {
         }
     }
 
-    /** Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below. */
+    /**
+     * Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below.
+     * A tripped formula is turbulent because the layer is stimulated, whatever Re_crit says: its
+     * valid lines alone bound it.
+     */
     private void regime(Expr.Call c, Binding.CorrelationBinding b, Map<String, Value> params, List<Value> args) {
         Statement.Correlation def = b.def();
-        if (def.regime() == null) return;
+        if (def.regime() == null || def.regime().text().equals("tripped")) return;
         String reName = def.params().stream().map(p -> p.name().text()).filter(n -> n.startsWith("Re")).findFirst()
             .orElse(null);
         if (reName == null || !(caller.lookup("Re_crit") instanceof Binding.ValueBinding crit)
@@ -163,8 +193,7 @@ final class CorrelationCall {
                 + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely laminar there";
         List<String> better = new ArrayList<>();
         for (Binding other : familyMembers(b)) {
-            if (other instanceof Binding.CorrelationBinding oc && covers(oc, args)
-                && (oc.def().regime() == null || !oc.def().regime().text().equals(def.regime().text()))) {
+            if (other instanceof Binding.CorrelationBinding oc && covers(oc, args) && suitsOtherRegime(oc, laminar)) {
                 better.add(oc.def().name().text());
             }
         }
@@ -172,6 +201,17 @@ final class CorrelationCall {
             : "; use " + (laminar ? "a mixed-flow or turbulent" : "a laminar or mixed-flow") + " correlation: "
                 + listed(better);
         reporter.report(Code.RANGE_REGIME, c.span(), message + fix);
+    }
+
+    /**
+     * Whether a correlation fits where a laminar (or turbulent) one was warned: one for the other
+     * regime, or for both (mixed flow). A tripped one never replaces a turbulent one below
+     * Re_crit: the layer there is laminar unless someone trips it.
+     */
+    private static boolean suitsOtherRegime(Binding.CorrelationBinding other, boolean warnedLaminar) {
+        String regime = other.def().regime() == null ? null : other.def().regime().text();
+        if (regime == null) return true;
+        return warnedLaminar ? !regime.equals("laminar") : regime.equals("laminar");
     }
 
     /** "; within range: a, b" — the library's members of the same family that cover these arguments. */

@@ -80,7 +80,7 @@ final class Evaluator {
         if (unit == null) return Value.UNKNOWN;
         Value.Temperature kind = unit.isOffsetScale() ? Value.Temperature.POINT : Value.Temperature.EITHER;
         Value v = new Value(unit.toSi(sign * q.number()), unit.dimension(), kind);
-        return v.noted(BasisRules.quantity(v, q));
+        return v.noted(BasisRules.quantity(v, q)).asAngle(Angles.isAngleUnit(q.unit().text(), unit));
     }
 
     /** Resolves a unit written in the source, reporting unknown ones with a fix. */
@@ -183,7 +183,7 @@ final class Evaluator {
         Value v = eval(u.operand());
         if (!v.known() || u.op() == Expr.Op.PLUS) return v;
         return new Value(-v.si(), v.dimension(), v.difference() ? Value.Temperature.DIFFERENCE : Value.Temperature.EITHER,
-            BasisRules.negate(v));
+            BasisRules.negate(v), v.angle());
     }
 
     /** True while evaluating the factors of a product: only its top is judged as a whole. */
@@ -208,7 +208,8 @@ final class Evaluator {
             case ADD, SUBTRACT -> addOrSubtract(b, l, r);
             case MULTIPLY -> {
                 Dimension d = l.dimension().times(r.dimension());
-                yield finite(b, l, r, Value.of(l.si() * r.si(), d).noted(basis.multiply(b, l, r, d)));
+                yield finite(b, l, r, Value.of(l.si() * r.si(), d).noted(basis.multiply(b, l, r, d))
+                    .asAngle(Angles.scaled(l, r) || Angles.scaled(r, l)));
             }
             case DIVIDE -> divide(b, l, r);
             case POWER -> power(b, l, r);
@@ -241,7 +242,8 @@ final class Evaluator {
             return Value.UNKNOWN;
         }
         double si = add ? l.si() + r.si() : l.si() - r.si();
-        return finite(b, l, r, new Value(si, l.dimension(), Temperatures.sum(add, l, r), BasisRules.sum(l, r)));
+        return finite(b, l, r, new Value(si, l.dimension(), Temperatures.sum(add, l, r), BasisRules.sum(l, r),
+            l.angle() && r.angle()));
     }
 
     private Value divide(Expr.Binary b, Value l, Value r) {
@@ -251,7 +253,7 @@ final class Evaluator {
             return Value.UNKNOWN;
         }
         Dimension d = l.dimension().divide(r.dimension());
-        return finite(b, l, r, Value.of(l.si() / r.si(), d).noted(basis.divide(l, r, d)));
+        return finite(b, l, r, Value.of(l.si() / r.si(), d).noted(basis.divide(l, r, d)).asAngle(Angles.scaled(l, r)));
     }
 
     private Value power(Expr.Binary b, Value base, Value exponent) {

@@ -25,7 +25,8 @@ final class Reporter {
     private final Path definingFile;
     /**
      * Inside a correlation's formula the range warnings of the correlations it calls stay quiet:
-     * the outer correlation's own range is what the reviewer is told about.
+     * the outer correlation's own range is what the reviewer is told about. So does a bare angle
+     * handed on inside (cd_cone's half_angle to the table of its rows): the outer call warns it.
      */
     private final boolean quietRanges;
 
@@ -52,7 +53,9 @@ final class Reporter {
     }
 
     void report(Code code, Severity severity, Span span, String message) {
-        if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME)) return;
+        if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME || code == Code.UNIT_BARE_ANGLE)) {
+            return;
+        }
         if (caller == null) {
             diagnostics.add(new Diagnostic(code, severity, span, message, List.of()));
             return;

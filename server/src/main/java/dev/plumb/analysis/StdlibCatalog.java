@@ -19,11 +19,11 @@ public final class StdlibCatalog {
             if (binding instanceof Binding.CorrelationBinding c) {
                 Statement.Correlation def = c.def();
                 String params = String.join(", ", def.params().stream().map(p -> p.name().text()).toList());
-                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), def.basis(), validText(binding), def.source());
+                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), def.basis(), withRegime(c), def.source());
             } else if (binding instanceof Binding.TableBinding t) {
                 Statement.Table def = t.def();
                 String x = def.param().name().text();
-                row(b, "`" + e.getKey() + "(" + x + ")`", def.title(), def.basis(), validText(binding), def.source());
+                row(b, "`" + e.getKey() + "(" + x + ")`", gives(t), def.basis(), validText(binding), def.source());
             }
         }
         return b.toString();
@@ -40,6 +40,58 @@ public final class StdlibCatalog {
         String more = ranges(t.def().valid(), t.scope().text());
         if (!more.isEmpty()) valid.add(more);
         return String.join("; ", valid);
+    }
+
+    /**
+     * The valid range and, for a boundary-layer formula, the regime condition the call is also
+     * warned against, so that "valid to 3e6" is not read without "laminar only below Re_crit".
+     */
+    static String withRegime(Binding.CorrelationBinding c) {
+        String valid = validText(c);
+        String regime = regimeText(c);
+        if (regime.isEmpty()) return valid;
+        return valid.isEmpty() ? regime : valid + "; " + regime;
+    }
+
+    /** "laminar: Re ≤ Re_crit (5e5)", "turbulent: Re ≥ Re_crit (5e5)", "tripped: …"; "" for none. */
+    static String regimeText(Binding.CorrelationBinding c) {
+        Statement.Correlation def = c.def();
+        if (def.regime() == null) return "";
+        String regime = def.regime().text();
+        if (regime.equals("tripped")) return "tripped: turbulent by stimulation, no Re_crit condition";
+        String re = def.params().stream().map(p -> p.name().text()).filter(n -> n.startsWith("Re")).findFirst()
+            .orElse(null);
+        if (re == null) return regime;
+        String crit = c.scope().lookup("Re_crit") instanceof Binding.ValueBinding v && v.value().known()
+            ? " (" + compact(v.value().si()) + ")" : "";
+        return regime + ": " + re + (regime.equals("laminar") ? " ≤ " : " ≥ ") + "Re_crit" + crit;
+    }
+
+    /** 5e5 for 500000, as the library writes its ranges; other numbers as they are. */
+    private static String compact(double x) {
+        if (x >= 1e4 && x == Math.rint(x)) {
+            int exponent = (int) Math.floor(Math.log10(x));
+            double mantissa = x / Math.pow(10, exponent);
+            if (Math.abs(mantissa - Math.rint(mantissa)) < 1e-9) return (long) Math.rint(mantissa) + "e" + exponent;
+        }
+        return dev.plumb.units.QuantityFormat.number(x, 4);
+    }
+
+    /**
+     * What a table column gives. A table with one output column gives what its title says; a
+     * column of a wider table names itself, its quantity and its unit before the table's title,
+     * so that water.rho and water.mu do not read alike.
+     */
+    public static String gives(Binding.TableBinding t) {
+        Statement.Table def = t.def();
+        if (def.columns().size() <= 2 || def.title() == null) return def.title();
+        String column = t.name().substring(t.name().lastIndexOf('.') + 1);
+        Statement.Column col = def.columns().stream().filter(k -> k.name().text().equals(column)).findFirst()
+            .orElse(null);
+        if (col == null) return def.title();
+        String quantity = t.data().result.name() == null ? "" : ", " + t.data().result.name();
+        String unit = col.unit() == null ? "" : " in " + col.unit().text();
+        return "Column " + column + quantity + unit + ", of the table " + def.name().text() + ": " + def.title();
     }
 
     private static String ranges(List<Statement.Bound> bounds, String text) {

@@ -3,21 +3,33 @@ package dev.plumb.analysis;
 import dev.plumb.units.Dimension;
 
 /**
- * A computed quantity: its SI magnitude as a double, its dimension, and for temperatures
- * whether it is a point on a scale or a difference (see {@link Temperature}).
+ * A computed quantity: its SI magnitude as a double, its dimension, for temperatures whether it
+ * is a point on a scale or a difference (see {@link Temperature}), and whether it is an angle.
+ * Angles are dimensionless (rad is 1), so {@code angle} is the only record that a value was
+ * written with an angle unit or came from an inverse trigonometric function: a parameter
+ * declared {@code : angle} warns when it is missing (a bare 30 would be 30 rad).
  * {@link #UNKNOWN} stands for a value that could not be computed; its error is already reported,
  * so everything built on it stays quiet.
  */
-public record Value(double si, Dimension dimension, Temperature temperature, BasisNotes notes) {
+public record Value(double si, Dimension dimension, Temperature temperature, BasisNotes notes, boolean angle) {
     public static final Value UNKNOWN = new Value(Double.NaN, null, Temperature.EITHER);
 
     public Value(double si, Dimension dimension, Temperature temperature) {
         this(si, dimension, temperature, BasisNotes.NONE);
     }
 
+    public Value(double si, Dimension dimension, Temperature temperature, BasisNotes notes) {
+        this(si, dimension, temperature, notes, false);
+    }
+
     /** The same quantity with other basis notes. */
     Value noted(BasisNotes n) {
-        return new Value(si, dimension, temperature, n == null ? BasisNotes.NONE : n);
+        return new Value(si, dimension, temperature, n == null ? BasisNotes.NONE : n, angle);
+    }
+
+    /** The same quantity, marked as an angle or not. */
+    Value asAngle(boolean isAngle) {
+        return isAngle == angle || !known() ? this : new Value(si, dimension, temperature, notes, isAngle);
     }
 
     /**

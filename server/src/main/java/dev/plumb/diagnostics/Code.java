@@ -15,6 +15,7 @@ public enum Code {
     UNIT_NOT_DIMENSIONLESS("unit.not-dimensionless", Severity.ERROR),
     UNIT_FRACTIONAL_POWER("unit.fractional-power", Severity.ERROR),
     UNIT_TEMPERATURE_SUM("unit.temperature-sum", Severity.ERROR),
+    UNIT_BARE_ANGLE("unit.bare-angle", Severity.WARNING),
     NAME_UNKNOWN("name.unknown", Severity.ERROR),
     NAME_DUPLICATE("name.duplicate", Severity.ERROR),
     NAME_CYCLE("name.cycle", Severity.ERROR),

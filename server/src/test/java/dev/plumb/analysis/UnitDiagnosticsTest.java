@@ -51,4 +51,9 @@ class UnitDiagnosticsTest {
         assertEquals(25.0, dT.value().si(), 1e-9);
         assertTrue(dT.value().difference());
     }
+
+    @Test
+    void aNumberWithoutAnAngleUnitWhereAnAngleIsDeclared() {
+        Fixture.checkResource("unit.bare-angle.plumb");
+    }
 }

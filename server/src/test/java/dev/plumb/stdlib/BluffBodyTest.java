@@ -36,13 +36,13 @@ class BluffBodyTest {
     void squarePlateAgreesWithHoerner() {
         // Hoerner (1965), square flat plate at 90 deg: 1.17, as printed in Matthews,
         // Aeronautical Engineer's Data Book, Fig. 5.13(b).
-        assertWithin(1.17, cd("cd_plate_normal(1)"), 0.02, "AR = 1");
+        assertWithin(1.17, cd("cd_plate_normal(1, 1e5)"), 0.02, "AR = 1");
     }
 
     @Test
     void squarePlateAndDiskAreAlike() {
         // Common practice: a square plate and a disk normal to the flow have nearly the same Cd.
-        assertWithin(cd("cd_disk(1e5)"), cd("cd_plate_normal(1)"), 0.03, "square plate vs disk");
+        assertWithin(cd("cd_disk(1e5)"), cd("cd_plate_normal(1, 1e5)"), 0.03, "square plate vs disk");
     }
 
     @Test
@@ -51,7 +51,7 @@ class BluffBodyTest {
         // Fig. 5.13(b), "long flat plate at 90 deg"); every tabulated aspect ratio stays below.
         double previous = 0;
         for (double ar = 1; ar <= 20; ar += 0.5) {
-            double v = cd("cd_plate_normal(" + ar + ")");
+            double v = cd("cd_plate_normal(" + ar + ", 1e5)");
             assertTrue(v >= previous && v < 1.98, "AR = " + ar + ": " + v);
             previous = v;
         }
@@ -60,7 +60,7 @@ class BluffBodyTest {
     @Test
     void plateInterpolatesLinearly() {
         // Linear interpolation halfway between the rows AR = 10 (1.3) and AR = 20 (1.5): 1.4.
-        assertWithin(1.4, cd("cd_plate_normal(15)"), 1e-9, "AR = 15");
+        assertWithin(1.4, cd("cd_plate_normal(15, 1e5)"), 1e-9, "AR = 15");
     }
 
     // ---------------------------------------------------------------- disk, cube, hemispheres
@@ -70,7 +70,7 @@ class BluffBodyTest {
         // A cone of half-angle 90 deg is a disk, and a solid hemisphere with its flat face to
         // the flow separates at the same sharp rim (Hoerner 1965, ch. 3; common practice).
         double disk = cd("cd_disk(1e5)");
-        assertWithin(disk, cd("cd_cone(90 deg)"), 0.03, "cone at 90 deg");
+        assertWithin(disk, cd("cd_cone(90 deg, 1e5)"), 0.03, "cone at 90 deg");
         assertWithin(disk, cd("cd_hemisphere_closed_flat(1e5)"), 0.03, "flat-faced hemisphere");
     }
 
@@ -105,8 +105,8 @@ class BluffBodyTest {
     void coneAgainstHoernersApexAngles() {
         // Hoerner (1965) as printed in Matthews, Fig. 5.13(b): cone with a 60 deg apex angle,
         // 0.51; with a 30 deg apex angle, 0.34. The half-angles are 30 and 15 deg.
-        assertWithin(0.51, cd("cd_cone(30 deg)"), 0.10, "half-angle 30 deg");
-        assertWithin(0.34, cd("cd_cone(15 deg)"), 0.05, "half-angle 15 deg");
+        assertWithin(0.51, cd("cd_cone(30 deg, 1e5)"), 0.10, "half-angle 30 deg");
+        assertWithin(0.34, cd("cd_cone(15 deg, 1e5)"), 0.05, "half-angle 15 deg");
     }
 
     @Test
@@ -114,7 +114,7 @@ class BluffBodyTest {
         // Common practice: a blunter cone drags more, up to the disk at 90 deg.
         double previous = 0;
         for (int deg = 10; deg <= 90; deg += 5) {
-            double v = cd("cd_cone(" + deg + " deg)");
+            double v = cd("cd_cone(" + deg + " deg, 1e5)");
             assertTrue(v > previous, deg + " deg: " + v);
             previous = v;
         }
@@ -137,22 +137,43 @@ class BluffBodyTest {
     }
 
     @ParameterizedTest
-    @CsvSource({"cd_plate_normal(1)", "cd_plate_normal(20)", "cd_cone(10 deg)", "cd_cone(90 deg)"})
+    @CsvSource({"'cd_plate_normal(1, 1e5)'", "'cd_plate_normal(20, 1e5)'", "'cd_cone(10 deg, 1e5)'",
+        "'cd_cone(90 deg, 1e5)'"})
     void noWarningAtEitherEndOfATable(String call) {
         assertInRange(call);
     }
 
     @Test
     void plateOutsideItsRows() {
-        assertOutside("cd_plate_normal(0.8)", "cd_plate_normal", 0.8, 1);
-        assertOutside("cd_plate_normal(25)", "cd_plate_normal", 25, 20);
+        assertOutside("cd_plate_normal(0.8, 1e5)", "cd_plate_normal", 0.8, 1);
+        assertOutside("cd_plate_normal(25, 1e5)", "cd_plate_normal", 25, 20);
     }
 
     @Test
     void coneOutsideItsRows() {
         // The message may give the angle in degrees or in radians.
         double deg = Math.PI / 180;
-        assertOutside("cd_cone(5 deg)", "cd_cone", new double[] {5, 5 * deg}, new double[] {10, 10 * deg});
-        assertOutside("cd_cone(100 deg)", "cd_cone", new double[] {100, 100 * deg}, new double[] {90, 90 * deg});
+        assertOutside("cd_cone(5 deg, 1e5)", "cd_cone", new double[] {5, 5 * deg}, new double[] {10, 10 * deg});
+        assertOutside("cd_cone(100 deg, 1e5)", "cd_cone", new double[] {100, 100 * deg}, new double[] {90, 90 * deg});
+    }
+
+    @Test
+    void plateAndConeBelowTheirReynoldsNumberAreWarned() {
+        // The handbook values hold for Re >= 1e4, where the flow separates at the sharp edge
+        // and Cd hardly changes (White, Fluid Mechanics, Table 7.3, from Hoerner 1965; from memory).
+        assertOutside("cd_plate_normal(5, 5e3)", "cd_plate_normal", 5e3, 1e4);
+        assertOutside("cd_cone(30 deg, 5e3)", "cd_cone", 5e3, 1e4);
+        assertInRange("cd_plate_normal(5, 1e4)");
+        assertInRange("cd_cone(30 deg, 1e4)");
+    }
+
+    @Test
+    void aConeHalfAngleWithoutItsUnitIsWarnedOnce() {
+        // cd_cone(30, Re) reads 30 rad (1719°, by hand 30*180/pi = 1718.87): one unit.bare-angle
+        // warning at the call, none repeated from the table of rows it reads.
+        var all = StdlibCheck.diagnostics("cd_cone(30, 1e5)");
+        assertEquals(1, RangeAssertions.withCode(all, "unit.bare-angle").size(), () -> "" + all);
+        RangeAssertions.assertMentions(RangeAssertions.withCode(all, "unit.bare-angle").get(0).message(), 1718.87);
+        assertInRange("cd_cone(30 deg, 1e5)");
     }
 }

@@ -162,6 +162,45 @@ class FlatPlateTest {
         assertEquals(laminar, call(name, reCrit), 0.002 * laminar);
     }
 
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({
+        // A = Re_crit*(Cf_turb(Re_crit) - Cf_lam(Re_crit)) = Re_crit*Cf_turb(Re_crit) - 1.328*sqrt(Re_crit),
+        // with Cf_lam = 1.328/sqrt(Re) (Blasius, Schlichting ch. VII) and Cf_turb = 0.074 Re^-0.2
+        // (1/7 law) or 0.455/(log10 Re)^2.58 (Prandtl-Schlichting), Schlichting ch. XXI (from memory).
+        // By hand (powers to 7 figures):
+        //   3e5: 0.074*3e5^0.8 = 0.074*24082.25 = 1782.09;  1.328*547.7226 = 727.38;  A = 1054.71
+        "cf_plate_mixed_3e5,    seventh, 3e5, 1054.71, 1050",
+        //   5e5: 0.074*36238.98 = 2681.68;  1.328*707.1068 = 939.04;  A = 1742.64
+        "cf_plate_mixed,        seventh, 5e5, 1742.64, 1700",
+        //   1e6: 0.074*63095.73 = 4669.08;  1.328*1000 = 1328;  A = 3341.08
+        "cf_plate_mixed_1e6,    seventh, 1e6, 3341.08, 3300",
+        //   3e6: 0.074*151948.7 = 11244.20;  1.328*1732.051 = 2300.16;  A = 8944.04
+        "cf_plate_mixed_3e6,    seventh, 3e6, 8944.04, 8700",
+        //   3e5: 0.455*3e5/5.477121^2.58 = 136500/80.43871 = 1696.94;  - 727.38;  A = 969.56
+        "cf_plate_ps_mixed_3e5, log,     3e5, 969.56, 1050",
+        //   5e5: 227500/89.11579 = 2552.86;  - 939.04;  A = 1613.82
+        "cf_plate_ps_mixed,     log,     5e5, 1613.82, 1700",
+        //   1e6: 455000/101.7724 = 4470.76;  - 1328;  A = 3142.76
+        "cf_plate_ps_mixed_1e6, log,     1e6, 3142.76, 3300",
+        //   3e6: 1365000/123.9840 = 11009.49;  - 2300.16;  A = 8709.33
+        "cf_plate_ps_mixed_3e6, log,     3e6, 8709.33, 8700",
+    })
+    void mixedFlowConstantDerivedByHandAndItsTitleSaysSo(String name, String law, double reCrit, double byHand,
+                                                         double tabulated) {
+        // The A the library uses, read back from a value in range; it carries 4 significant figures.
+        double re = 2 * reCrit;
+        double used = re * (turbulent(law, re) - call(name, re));
+        assertEquals(byHand, used, 0.5, name);
+        // So the curve meets the laminar one at Re_crit: the gap is (A - A_lib)/Re_crit <= 0.5/Re_crit,
+        // below 0.1 % of 1.328/sqrt(Re_crit) at every Re_crit here.
+        assertEquals(1.328 / Math.sqrt(reCrit), call(name, reCrit), 0.5 / reCrit + 1e-12, name + " at Re_crit");
+        // The title, which hover shows, names the derived A and the commonly tabulated one
+        // (Schlichting, ch. XXI: 1050, 1700, 3300, 8700 for Re_crit = 3e5, 5e5, 1e6, 3e6; from memory).
+        String title = ((dev.plumb.analysis.Binding.CorrelationBinding) dev.plumb.analysis.Stdlib.get().entries()
+            .get(name)).def().title();
+        assertTrue(title.contains("A = " + Math.round(byHand)) && title.contains("tabulated " + Math.round(tabulated)), title);
+    }
+
     @ParameterizedTest(name = "Re_crit = {0}")
     @CsvSource({
         // Schlichting, Boundary-Layer Theory, 7th ed. (1979), ch. XXI, table of A (from memory):
@@ -251,11 +290,42 @@ class FlatPlateTest {
     @Test
     void turbulentFormulaBelowReCritIsWarned() {
         for (String f : new String[] {"cf_plate_turb_local", "cf_plate_turb_avg", "delta_plate_turb",
-            "cf_plate_prandtl_schlichting", "cf_ittc1957"}) {
+            "cf_plate_prandtl_schlichting"}) {
             RangeAssertions.assertOneWarning("x = " + f + "(4e5)\n", RangeAssertions.REGIME, f, n(4e5), n(5e5));
         }
-        // The ITTC line reaches below Re_crit: only the regime is warned there.
-        RangeAssertions.assertNone("x = cf_ittc1957(4e5)\n", RangeAssertions.OUTSIDE);
+    }
+
+    @Test
+    void ittcLineIsQuietInItsWholeRangeBecauseItAssumesATrippedLayer() {
+        // The ITTC-1957 line is applied to models whose layer is tripped by turbulence
+        // stimulators, from Re of about 1e5 on model scale (ITTC Recommended Procedure 7.5-02-02-01,
+        // Resistance Test, turbulence stimulation; from memory; common practice in towing tanks).
+        // So a model at Re = 1e5 .. Re_crit is inside both its range and its premise.
+        for (double re : new double[] {1e5, 2e5, 4e5, 4.99e5}) RangeAssertions.assertClean("cf_ittc1957(" + re + ")");
+        // The premise is in the title, which hover and the README show.
+        String title = ((dev.plumb.analysis.Binding.CorrelationBinding) dev.plumb.analysis.Stdlib.get().entries()
+            .get("cf_ittc1957")).def().title();
+        assertTrue(title.contains("tripped"), title);
+    }
+
+    @Test
+    void aTurbulentWarningDoesNotOfferTheTrippedLine() {
+        // A document with Re_crit = 1e6 and a 1/7-law plate at 8e5: the layer is laminar there
+        // unless tripped, so the fix is a laminar or mixed-flow law, not the ITTC line (which
+        // covers 8e5 but assumes a trip).
+        Diagnostic w = RangeAssertions.assertOneWarning("Re_crit = 1e6\nx = cf_plate_turb_avg(8e5)\n",
+            RangeAssertions.REGIME, "cf_plate_turb_avg", n(8e5), n(1e6));
+        assertTrue(w.message().contains("cf_plate_blasius_avg"), w::message);
+        RangeAssertions.assertNotOffered(w, "cf_ittc1957");
+    }
+
+    @Test
+    void aLaminarWarningOffersTheTrippedLineAmongTheTurbulentOnes() {
+        // Blasius at 1e6 (above Re_crit): a turbulent layer is the likely case, and a tripped
+        // one is turbulent too.
+        Diagnostic w = RangeAssertions.assertOneWarning("x = cf_plate_blasius_avg(1e6)\n", RangeAssertions.REGIME,
+            "cf_plate_blasius_avg", n(1e6), n(5e5));
+        assertTrue(w.message().contains("cf_ittc1957"), w::message);
     }
 
     @Test

@@ -1,5 +1,7 @@
 package dev.plumb.stdlib;
 
+import static dev.plumb.stdlib.RangeAssertions.n;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -76,6 +78,21 @@ class ForcesTest {
         double d = StdlibCheck.si("drag_from_resultant(250 N, 37 deg)");
         double l = StdlibCheck.si("lift_from_resultant(250 N, 37 deg)");
         assertEquals(250.0, Math.hypot(d, l), 1e-9);
+    }
+
+    @Test
+    void anAngleWithoutItsUnitIsAFinding() {
+        // Angles are dimensionless, so a bare 30 is 30 rad: cos(30 rad) = 0.154, not cos 30° = 0.866
+        // (by hand: 30 rad = 30 - 4*2π = 4.867 rad = 278.9°, cos = 0.1543). Computed, and warned.
+        for (String f : new String[] {"drag_from_resultant", "lift_from_resultant"}) {
+            RangeAssertions.assertOneWarning("x = " + f + "(100 N, 30)\n", "unit.bare-angle", f,
+                n(30), n(Math.toDegrees(30)));
+            RangeAssertions.assertClean(f + "(100 N, 30 deg)");
+        }
+        assertEquals(100 * Math.cos(30), StdlibCheck.si("drag_from_resultant(100 N, 30)"), 1e-9);
+        // An angle from an inverse trigonometric function is one: atan(3/4) = 36.87° (3-4-5 triangle).
+        RangeAssertions.assertClean("drag_from_resultant(250 N, atan(0.75))");
+        assertEquals(200.0, StdlibCheck.si("drag_from_resultant(250 N, atan(0.75))"), 1e-9);
     }
 
     @Test

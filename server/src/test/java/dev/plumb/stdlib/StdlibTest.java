@@ -57,6 +57,36 @@ class StdlibTest {
         }
     }
 
+    /** The catalog's row of one entry, e.g. "| `water.rho(T)` | …". */
+    private static String row(String call) {
+        return StdlibCatalog.markdown(Stdlib.get()).lines().filter(l -> l.startsWith("| `" + call + "` |")).findFirst()
+            .orElseThrow(() -> new AssertionError("no row for " + call));
+    }
+
+    @Test
+    void theValidColumnShowsTheRegimeCondition() {
+        // Blasius is valid to 3e6 but laminar only below Re_crit (5e5 in properties.plumb, common
+        // practice): a reader of the table must see both, as the call warns on both.
+        for (String f : new String[] {"cf_plate_blasius_avg(Re)", "cf_plate_blasius_local(Re)", "theta_plate_blasius(Re)"}) {
+            assertTrue(row(f).contains("1e3 <= Re <= 3e6; laminar: Re ≤ Re_crit (5e5)"), row(f));
+        }
+        assertTrue(row("cf_plate_turb_avg(Re)").contains("5e5 <= Re <= 1e7; turbulent: Re ≥ Re_crit (5e5)"),
+            row("cf_plate_turb_avg(Re)"));
+        assertTrue(row("cf_ittc1957(Re)").contains("tripped"), row("cf_ittc1957(Re)"));
+        // A formula for both regimes carries no condition.
+        assertEquals("5e5 <= Re <= 1e7", row("cf_plate_mixed(Re)").split(" \\| ")[3], row("cf_plate_mixed(Re)"));
+    }
+
+    @Test
+    void eachTableColumnSaysWhatItGives() {
+        // Table water has two output columns, rho and mu: each row names its own.
+        String rho = row("water.rho(T)");
+        String mu = row("water.mu(T)");
+        assertTrue(rho.contains("Column rho, density in kg/m^3"), rho);
+        assertTrue(mu.contains("Column mu, dynamic viscosity in mPa*s"), mu);
+        assertFalse(rho.split("\\|")[2].contains("Column mu"), rho);
+    }
+
     @Test
     void readmeListsTheLibrary() throws IOException {
         Path readme = dev.plumb.RepoRoot.get().resolve("README.md");
