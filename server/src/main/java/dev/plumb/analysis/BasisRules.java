@@ -99,8 +99,8 @@ final class BasisRules {
     }
 
     BasisNotes multiply(Expr.Binary b, Value l, Value r, Dimension result) {
-        BasisNotes ln = notes(l);
-        BasisNotes rn = notes(r);
+        BasisNotes ln = asFactor(l);
+        BasisNotes rn = asFactor(r);
         Shape shape = ln.shape() != null && rn.shape() != null ? ln.shape().times(rn.shape(), 1) : null;
         boolean pure = ln.pure() && rn.pure();
         BasisNotes.Area area;
@@ -129,10 +129,11 @@ final class BasisRules {
     void wholeProduct(Expr.Binary b, Value v) {
         BasisNotes n = notes(v);
         if (n.coefficient() == null || n.area() != null || n.pure() || n.shape() == null || !areaLike(n.shape())) return;
-        Shape.Kind kind = n.shape().kind();
-        if (kind == null) kind = new Shape(n.shape().factor() * 2, n.shape().lengths()).kind(); // the ½ of ½·ρ·V²
-        if (kind == null) return;
-        check(n.coefficient(), new BasisNotes.Area(null, kind, "the area in " + Shown.source(text, b.span())), b);
+        Shape area = n.shape();
+        if (area.kind() == null) area = new Shape(area.factor() * 2, area.lengths()); // the ½ of ½·ρ·V²
+        if (area.kind() == null) return;
+        check(n.coefficient(), new BasisNotes.Area(null, area.kind(), "the area in " + Shown.source(text, b.span()),
+            area.frontalFormula()), b);
     }
 
     private static boolean areaLike(Shape s) {
@@ -155,8 +156,8 @@ final class BasisRules {
     }
 
     BasisNotes divide(Value l, Value r, Dimension result) {
-        BasisNotes ln = notes(l);
-        BasisNotes rn = notes(r);
+        BasisNotes ln = asFactor(l);
+        BasisNotes rn = asFactor(r);
         Shape shape = ln.shape() != null && rn.shape() != null ? ln.shape().times(rn.shape(), -1) : null;
         boolean plainDivisor = rn.area() == null && rn.coefficient() == null;
         BasisNotes.Area area = ln.area() != null && plainDivisor && (!result.equals(AREA) || r.dimensionless())
@@ -192,6 +193,20 @@ final class BasisRules {
     static BasisNotes negate(Value v) {
         BasisNotes n = notes(v);
         return n.withShape(n.shape() == null ? null : n.shape().negate());
+    }
+
+    /**
+     * A value without a shape as a factor of a product, the way {@link #reference} treats a name:
+     * a coefficient or another quantity written inline (a correlation's result, Cd·π·d·L·q)
+     * joins as one factor of its own, so the lengths around it still make up the product's
+     * shape; a plain number scales the shape. A length of unknown form stays unknown: the
+     * product's shape cannot be told then.
+     */
+    private static BasisNotes asFactor(Value v) {
+        BasisNotes n = notes(v);
+        if (n.shape() != null || Dimension.LENGTH.equals(v.dimension())) return n;
+        if (v.dimensionless() && n.coefficient() == null) return n.withShape(Shape.number(v.si()));
+        return new BasisNotes(n.area(), n.coefficient(), Shape.number(1), false, n.density());
     }
 
     private static BasisNotes notes(Value v) {
