@@ -48,25 +48,41 @@ final class CorrelationCall {
             }
         }
         String range = StdlibCatalog.validText(b);
-        reporter.call(new dev.plumb.analysis.Analysis.CallSite(c.callee().span(), name, arguments(def, args),
+        Choice choice = applicable(def, inside);
+        Statement.Piece piece = choice.piece();
+        reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args),
             !verdicts.isEmpty() ? String.join("; ", verdicts) : range.isEmpty() ? "no stated range"
-                : "inside its range, " + range));
+                : "inside its range, " + range, piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
         regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
+        if (piece != null) return noted(inside.eval(piece.expr()), basis, name);
+        if (choice.undecided()) return Value.UNKNOWN;
+        reporter.report(Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
+            + ": every `when` condition is false; add a last line `= … otherwise` to " + name);
+        return Value.UNKNOWN;
+    }
+
+    /**
+     * @param piece the formula that applies, or null
+     * @param undecided a condition could not be evaluated (its error is reported already)
+     */
+    private record Choice(Statement.Piece piece, boolean undecided) {
+    }
+
+    /** The first piece whose condition holds, or the `otherwise` piece. */
+    private static Choice applicable(Statement.Correlation def, Evaluator inside) {
         for (Statement.Piece piece : def.pieces()) {
-            if (piece.otherwise() || piece.condition() == null) return noted(inside.eval(piece.expr()), basis, name);
+            if (piece.otherwise() || piece.condition() == null) return new Choice(piece, false);
             List<Value> sides = piece.condition().operands().stream().map(inside::eval).toList();
-            if (sides.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
+            if (sides.stream().anyMatch(v -> !v.known())) return new Choice(null, true);
             boolean holds = true;
             for (int i = 0; i < piece.condition().comparators().size(); i++) {
                 holds &= sides.get(i).dimension().equals(sides.get(i + 1).dimension())
                     && RangeCheck.holds(sides.get(i).si(), piece.condition().comparators().get(i), sides.get(i + 1).si());
             }
-            if (holds) return noted(inside.eval(piece.expr()), basis, name);
+            if (holds) return new Choice(piece, false);
         }
-        reporter.report(Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
-            + ": every `when` condition is false; add a last line `= … otherwise` to " + name);
-        return Value.UNKNOWN;
+        return new Choice(null, false);
     }
 
     Value table(Expr.Call c, Binding.TableBinding t, List<Value> args) {
@@ -98,10 +114,10 @@ final class CorrelationCall {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
             if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " is " + why + alternatives(t, args));
         }
-        reporter.call(new dev.plumb.analysis.Analysis.CallSite(c.callee().span(), t.name(),
+        reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
             param + " = " + Shown.value(x, data.argumentUnit, 4), data.covers(x.si())
                 ? "inside the table, " + StdlibCatalog.validText(t) : "beyond the table's rows (extrapolated), "
-                + StdlibCatalog.validText(t)));
+                + StdlibCatalog.validText(t), null));
         double v = data.at(x.si());
         if (Double.isNaN(v)) {
             reporter.report(Code.MATH_DOMAIN, c.span(), t.name() + " interpolates log–log, so it needs a positive "

@@ -29,7 +29,8 @@ public final class HoverText {
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
         Analysis.CallSite call = a.callAt(offset);
-        String here = call == null ? "" : "\n\nat this call: " + call.arguments() + " — " + call.verdict();
+        String here = call == null ? "" : "\n\nat this call: " + call.arguments() + " — " + call.verdict()
+            + (call.used() == null ? "" : "\n\nused here: " + call.used());
         if (b instanceof Binding.CorrelationBinding c) return correlation(c) + here;
         if (b instanceof Binding.TableBinding t) return table(t) + here;
         if (b instanceof Binding.FunctionBinding f) {
