@@ -52,6 +52,7 @@ blockLine
     : SOURCE STRING                                         # sourceLine
     | FAMILY name                                           # familyLine
     | BASIS name                                            # basisLine
+    | BASIS basis=name flow=name                            # basisFlowLine
     | VALID expr ( comparator expr )+                       # validLine
     | REGIME name                                           # regimeLine
     | ACCURACY expr                                         # accuracyLine

@@ -55,7 +55,8 @@ final class CorrelationCall {
                 : "inside its range, " + range, piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
         regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
-        if (piece != null) return noted(inside.eval(piece.expr()), basis, name);
+        String flow = def.flow() == null ? null : def.flow().text();
+        if (piece != null) return noted(inside.eval(piece.expr()), basis, flow, name);
         if (choice.undecided()) return Value.UNKNOWN;
         reporter.report(Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
             + ": every `when` condition is false; add a last line `= … otherwise` to " + name);
@@ -124,12 +125,13 @@ final class CorrelationCall {
                 + param + ", but " + operand.apply(c.args().get(0), x) + " is not");
             return Value.UNKNOWN;
         }
-        return noted(Value.of(v, data.result), def.basis() == null ? null : def.basis().text(), t.name());
+        return noted(Value.of(v, data.result), def.basis() == null ? null : def.basis().text(),
+            def.flow() == null ? null : def.flow().text(), t.name());
     }
 
     /** A correlation's result carries its basis: a coefficient's, or a tagged area's. */
-    private static Value noted(Value v, String basis, String name) {
-        return v.known() ? v.noted(BasisRules.result(v, basis, name)) : v;
+    private static Value noted(Value v, String basis, String flow, String name) {
+        return v.known() ? v.noted(BasisRules.result(v, basis, flow, name)) : v;
     }
 
     private boolean dimensionsFit(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {

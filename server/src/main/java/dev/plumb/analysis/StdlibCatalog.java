@@ -19,11 +19,13 @@ public final class StdlibCatalog {
             if (binding instanceof Binding.CorrelationBinding c) {
                 Statement.Correlation def = c.def();
                 String params = String.join(", ", def.params().stream().map(p -> p.name().text()).toList());
-                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), def.basis(), validText(binding), def.source());
+                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), basisText(def.basis(), def.flow()), validText(binding),
+                    def.source());
             } else if (binding instanceof Binding.TableBinding t) {
                 Statement.Table def = t.def();
                 String x = def.param().name().text();
-                row(b, "`" + e.getKey() + "(" + x + ")`", def.title(), def.basis(), validText(binding), def.source());
+                row(b, "`" + e.getKey() + "(" + x + ")`", def.title(), basisText(def.basis(), def.flow()), validText(binding),
+                    def.source());
             }
         }
         return b.toString();
@@ -50,10 +52,15 @@ public final class StdlibCatalog {
         return String.join("; ", out);
     }
 
-    private static void row(StringBuilder b, String name, String gives, dev.plumb.syntax.Ident basis, String valid,
-                            String source) {
+    /** "frontal, crossflow" as the basis line states it; "" for none. */
+    public static String basisText(dev.plumb.syntax.Ident basis, dev.plumb.syntax.Ident flow) {
+        if (basis == null) return "";
+        return flow == null ? basis.text() : basis.text() + ", " + flow.text();
+    }
+
+    private static void row(StringBuilder b, String name, String gives, String basis, String valid, String source) {
         b.append("| ").append(name).append(" | ").append(cell(gives)).append(" | ")
-            .append(basis == null ? "" : basis.text()).append(" | ").append(cell(valid)).append(" | ")
+            .append(basis).append(" | ").append(cell(valid)).append(" | ")
             .append(cell(source)).append(" |\n");
     }
 

@@ -120,21 +120,21 @@ public final class HoverText {
         Statement.Correlation d = c.def();
         StringBuilder out = new StringBuilder("**" + d.name().text() + "**(" + String.join(", ", d.params().stream()
             .map(Statement.Param::written).toList()) + ") — correlation");
-        meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(c));
+        meta(out, d.title(), d.source(), StdlibCatalog.basisText(d.basis(), d.flow()), StdlibCatalog.validText(c));
         return out.toString();
     }
 
     private static String table(Binding.TableBinding t) {
         Statement.Table d = t.def();
         StringBuilder out = new StringBuilder("**" + t.name() + "**(" + d.param().name().text() + ") — table");
-        meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(t));
+        meta(out, d.title(), d.source(), StdlibCatalog.basisText(d.basis(), d.flow()), StdlibCatalog.validText(t));
         return out.toString();
     }
 
-    private static void meta(StringBuilder out, String title, String source, dev.plumb.syntax.Ident basis, String valid) {
+    private static void meta(StringBuilder out, String title, String source, String basis, String valid) {
         if (title != null) out.append("\n\n").append(title);
         if (source != null) out.append("\n\nsource: ").append(source);
-        if (basis != null) out.append("\n\nbasis: ").append(basis.text());
+        if (!basis.isEmpty()) out.append("\n\nbasis: ").append(basis);
         if (!valid.isEmpty()) out.append("\n\nvalid: ").append(valid).append(" (checked at every call)");
     }
 }

@@ -183,6 +183,11 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     }
 
     @Override
+    public Object visitBasisFlowLine(PlumbParser.BasisFlowLineContext ctx) {
+        return new BlockLine.Basis(span(ctx), ident(ctx.basis), ident(ctx.flow));
+    }
+
+    @Override
     public Object visitRegimeLine(PlumbParser.RegimeLineContext ctx) {
         return new BlockLine.Property(span(ctx), "regime", null, ident(ctx.name()));
     }

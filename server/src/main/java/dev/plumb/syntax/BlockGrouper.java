@@ -74,7 +74,8 @@ final class BlockGrouper {
         }
         if (line instanceof BlockLine.Row) return "a row of numbers belongs inside a `table … end` block";
         if (line instanceof BlockLine.End) return "`end` without a `correlation` or `table` to close";
-        String key = line instanceof BlockLine.Property p ? p.key() : line instanceof BlockLine.Valid ? "valid" : "accuracy";
+        String key = line instanceof BlockLine.Property p ? p.key() : line instanceof BlockLine.Valid ? "valid"
+            : line instanceof BlockLine.Basis ? "basis" : "accuracy";
         return "`" + key + "` belongs inside a `correlation … end` or `table … end` block";
     }
 
@@ -104,6 +105,7 @@ final class BlockGrouper {
         String source;
         Ident family;
         Ident basis;
+        Ident flow;
         Ident regime;
         Ident interpolate;
         Expr accuracy;
@@ -121,6 +123,9 @@ final class BlockGrouper {
                     case "regime" -> regime = once(regime, p.word(), p.span(), "regime");
                     default -> interpolate = once(interpolate, p.word(), p.span(), "interpolate");
                 }
+            } else if (line instanceof BlockLine.Basis b) {
+                basis = once(basis, b.basis(), b.span(), "basis");
+                flow = flow != null ? flow : b.flow();
             } else if (line instanceof BlockLine.Valid v) {
                 valid.add(v.bound());
             } else if (line instanceof BlockLine.Accuracy a) {
@@ -164,7 +169,7 @@ final class BlockGrouper {
             }
         }
         return new Statement.Correlation(span, head.name(), head.params(), meta.title, meta.source, meta.family,
-            meta.basis, meta.valid, meta.regime, meta.accuracy, pieces);
+            meta.basis, meta.valid, meta.regime, meta.accuracy, pieces, meta.flow);
     }
 
     private Statement table(BlockLine.TableHead head, Block b, Span span) {
@@ -192,7 +197,7 @@ final class BlockGrouper {
             checkRows(head, columns, rows);
         }
         return new Statement.Table(span, head.name(), head.param(), meta.title, meta.source, meta.family, meta.basis,
-            meta.valid, meta.accuracy, meta.interpolate, columns == null ? List.of() : columns, rows);
+            meta.valid, meta.accuracy, meta.interpolate, columns == null ? List.of() : columns, rows, meta.flow);
     }
 
     private void checkRows(BlockLine.TableHead head, List<Statement.Column> columns, List<Statement.Row> rows) {

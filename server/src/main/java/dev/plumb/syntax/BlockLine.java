@@ -20,6 +20,10 @@ sealed interface BlockLine {
     record Property(Span span, String key, String text, Ident word) implements BlockLine {
     }
 
+    /** {@code basis frontal crossflow}: a basis with the flow direction it faces. */
+    record Basis(Span span, Ident basis, Ident flow) implements BlockLine {
+    }
+
     record Valid(Span span, Statement.Bound bound) implements BlockLine {
     }
 

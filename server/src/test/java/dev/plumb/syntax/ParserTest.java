@@ -65,6 +65,20 @@ class ParserTest {
     }
 
     @Test
+    void basisLineWithAFlowDirection() {
+        String text = "correlation cd_rod(Re)\n    basis frontal crossflow\n    = 1.2\nend\n"
+            + "correlation cd_ball(Re)\n    basis frontal\n    = 0.4\nend\n";
+        List<Statement> s = statements(text);
+        var rod = assertInstanceOf(Statement.Correlation.class, s.get(0));
+        assertEquals("frontal", rod.basis().text());
+        assertEquals("crossflow", rod.flow().text());
+        assertEquals("crossflow", slice(text, rod.flow().span()));
+        var ball = assertInstanceOf(Statement.Correlation.class, s.get(1));
+        assertEquals("frontal", ball.basis().text());
+        assertEquals(null, ball.flow());
+    }
+
+    @Test
     void derivedDefinitionAndFunction() {
         var d = assertInstanceOf(Statement.Definition.class, one("q = 0.5 * rho * V^2 in Pa"));
         assertFalse(d.input());
