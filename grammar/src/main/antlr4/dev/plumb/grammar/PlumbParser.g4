@@ -54,6 +54,7 @@ blockLine
     | BASIS name                                            # basisLine
     | BASIS basis=name flow=name                            # basisFlowLine
     | VALID expr ( comparator expr )+                       # validLine
+    | DOMAIN expr ( comparator expr )+                      # domainLine
     | REGIME name                                           # regimeLine
     | ACCURACY expr                                         # accuracyLine
     | INTERPOLATE name                                      # interpolateLine
@@ -85,4 +86,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
+    | DOMAIN
     ;

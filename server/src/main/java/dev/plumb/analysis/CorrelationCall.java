@@ -39,6 +39,11 @@ final class CorrelationCall {
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
         Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
         Set<String> names = params.keySet();
+        String outside = outsideDomain(c, name, def.domain(), inside, b.scope().text(), names);
+        if (outside != null) {
+            reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args), outside, null));
+            return Value.UNKNOWN;
+        }
         List<String> verdicts = new ArrayList<>();
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
@@ -97,6 +102,15 @@ final class CorrelationCall {
             return Value.UNKNOWN;
         }
         String param = def.param().name().text();
+        Map<String, Value> params = Map.of(param, x);
+        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCorrelation(t.name(), c.span(), t.file()),
+            t.scope().text(), units);
+        String outside = outsideDomain(c, t.name(), def.domain(), inside, t.scope().text(), params.keySet());
+        if (outside != null) {
+            reporter.call(new Analysis.CallSite(c.callee().span(), t.name(), param + " = "
+                + Shown.value(x, data.argumentUnit, 4), outside, null));
+            return Value.UNKNOWN;
+        }
         if (!data.covers(x.si())) {
             String lo = Shown.value(Value.of(data.first(), data.argument), data.argumentUnit, 4);
             String hi = Shown.value(Value.of(data.last(), data.argument), data.argumentUnit, 4);
@@ -108,9 +122,6 @@ final class CorrelationCall {
                 + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows"
                 + alternatives(t, args));
         }
-        Map<String, Value> params = Map.of(param, x);
-        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCorrelation(t.name(), c.span(), t.file()),
-            t.scope().text(), units);
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
             if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " is " + why + alternatives(t, args));
@@ -127,6 +138,31 @@ final class CorrelationCall {
         }
         return noted(Value.of(v, data.result), def.basis() == null ? null : def.basis().text(),
             def.flow() == null ? null : def.flow().text(), t.name());
+    }
+
+    /**
+     * Checks the {@code domain} lines: outside them the formula has no physical meaning (a
+     * negative Reynolds number, a negative length), so the call is an error and its value unknown,
+     * and nothing downstream is computed from it. Returns the verdict for hover, or null inside.
+     */
+    private String outsideDomain(Expr.Call c, String name, List<Statement.Bound> domain, Evaluator inside, String text,
+                                 Set<String> names) {
+        for (Statement.Bound bound : domain) {
+            String unlike = RangeCheck.mismatch(bound, inside, text);
+            if (unlike != null) {
+                // The domain cannot be judged: say so rather than pass the value on unchecked.
+                reporter.report(Code.UNIT_MISMATCH, c.span(), name + "'s domain line compares unlike quantities, " + unlike
+                    + ": give the limit the argument's unit; the value is not computed");
+                return "its domain cannot be judged: " + unlike;
+            }
+            String why = RangeCheck.outsideDomain(bound, inside, text, names);
+            if (why == null) continue;
+            reporter.report(Code.MATH_DOMAIN, c.span(), name + " is defined only for " + why + ", outside its physical "
+                + "domain: the value is not computed, and nothing is computed from it; check the sign and the units of "
+                + "what this argument is made of");
+            return "outside its physical domain: " + why;
+        }
+        return null;
     }
 
     /** A correlation's result carries its basis: a coefficient's, or a tagged area's. */

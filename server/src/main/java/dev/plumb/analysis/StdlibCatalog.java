@@ -44,6 +44,13 @@ public final class StdlibCatalog {
         return String.join("; ", valid);
     }
 
+    /** The physical domain its `domain` lines state ("Re > 0"); "" for none. */
+    public static String domainText(Binding binding) {
+        if (binding instanceof Binding.CorrelationBinding c) return ranges(c.def().domain(), c.scope().text());
+        if (binding instanceof Binding.TableBinding t) return ranges(t.def().domain(), t.scope().text());
+        return "";
+    }
+
     private static String ranges(List<Statement.Bound> bounds, String text) {
         List<String> out = new ArrayList<>();
         for (Statement.Bound bound : bounds) {

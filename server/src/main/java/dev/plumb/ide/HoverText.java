@@ -121,6 +121,7 @@ public final class HoverText {
         StringBuilder out = new StringBuilder("**" + d.name().text() + "**(" + String.join(", ", d.params().stream()
             .map(Statement.Param::written).toList()) + ") — correlation");
         meta(out, d.title(), d.source(), StdlibCatalog.basisText(d.basis(), d.flow()), StdlibCatalog.validText(c));
+        domain(out, StdlibCatalog.domainText(c));
         return out.toString();
     }
 
@@ -128,7 +129,12 @@ public final class HoverText {
         Statement.Table d = t.def();
         StringBuilder out = new StringBuilder("**" + t.name() + "**(" + d.param().name().text() + ") — table");
         meta(out, d.title(), d.source(), StdlibCatalog.basisText(d.basis(), d.flow()), StdlibCatalog.validText(t));
+        domain(out, StdlibCatalog.domainText(t));
         return out.toString();
+    }
+
+    private static void domain(StringBuilder out, String domain) {
+        if (!domain.isEmpty()) out.append("\n\ndomain: ").append(domain).append(" (outside it: an error, nothing computed)");
     }
 
     private static void meta(StringBuilder out, String title, String source, String basis, String valid) {

@@ -203,6 +203,11 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     }
 
     @Override
+    public Object visitDomainLine(PlumbParser.DomainLineContext ctx) {
+        return new BlockLine.Domain(span(ctx), bound(ctx, ctx.expr(), ctx.comparator()));
+    }
+
+    @Override
     public Object visitAccuracyLine(PlumbParser.AccuracyLineContext ctx) {
         return new BlockLine.Accuracy(span(ctx), expr(ctx.expr()));
     }

@@ -27,6 +27,10 @@ sealed interface BlockLine {
     record Valid(Span span, Statement.Bound bound) implements BlockLine {
     }
 
+    /** {@code domain 0 < Re}: where the formula has a physical meaning at all. */
+    record Domain(Span span, Statement.Bound bound) implements BlockLine {
+    }
+
     record Accuracy(Span span, Expr value) implements BlockLine {
     }
 

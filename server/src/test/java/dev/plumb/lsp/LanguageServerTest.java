@@ -172,6 +172,7 @@ class LanguageServerTest {
         String md = client.remote.getTextDocumentService().hover(new HoverParams(new TextDocumentIdentifier(uri), c.at()))
             .get(10, TimeUnit.SECONDS).getContents().getRight().getValue();
         assertTrue(md.contains("used here: cd_sphere_morrison"), md);
+        assertTrue(md.contains("domain: Re > 0 (outside it: an error, nothing computed)"), md);
     }
 
     @Test
