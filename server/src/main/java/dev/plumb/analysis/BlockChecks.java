@@ -150,12 +150,12 @@ final class BlockChecks {
         if (b instanceof Binding.CorrelationBinding cb) {
             Statement.Correlation def = cb.def();
             return new Origin(def.name().text(), def.basis() == null ? null : def.basis().text(),
-                accuracyOf(def.accuracy(), cb.scope(), units));
+                accuracyOf(def.accuracy(), cb.scope(), units), def.flow() == null ? null : def.flow().text());
         }
         if (b instanceof Binding.TableBinding tb) {
             Statement.Table def = tb.def();
             return new Origin(tb.name(), def.basis() == null ? null : def.basis().text(),
-                accuracyOf(def.accuracy(), tb.scope(), units));
+                accuracyOf(def.accuracy(), tb.scope(), units), def.flow() == null ? null : def.flow().text());
         }
         return null;
     }

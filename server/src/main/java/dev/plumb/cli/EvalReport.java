@@ -73,7 +73,7 @@ final class EvalReport {
         if (v.basis() != null) return "  [" + v.basis() + "]";
         if (v.origin() == null) return "";
         List<String> parts = new ArrayList<>();
-        if (v.origin().basis() != null) parts.add(v.origin().basis() + " basis");
+        if (v.origin().basis() != null) parts.add(v.origin().basisWords());
         if (v.origin().accuracy() != null) parts.add("±" + QuantityFormat.number(v.origin().accuracy() * 100, 3) + " %");
         return "  [" + v.origin().correlation() + (parts.isEmpty() ? "" : ": " + String.join(", ", parts)) + "]";
     }

@@ -57,7 +57,7 @@ public final class HoverText {
         if (formula != null) out.append("\n\n").append(formula);
         if (b.origin() != null) {
             out.append("\n\nfrom ").append(b.origin().correlation());
-            if (b.origin().basis() != null) out.append(", ").append(b.origin().basis()).append(" basis");
+            if (b.origin().basis() != null) out.append(", ").append(b.origin().basisWords());
             if (b.origin().accuracy() != null) {
                 out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
             }

@@ -169,6 +169,14 @@ class CliTest {
     }
 
     @Test
+    void evalSaysWhichWayAFrontalBasisFaces() throws IOException {
+        // cd_cylinder is referred to the projected area d·L of a cylinder in cross-flow.
+        Path f = write("c.plumb", "Cd = cd_cylinder(1e5)\n");
+        Cli run = Cli.run("eval", "--no-color", f.toString());
+        assertTrue(run.out().contains("[cd_cylinder: frontal basis, cross-flow]"), run.out());
+    }
+
+    @Test
     void binaryFileIsAClearError() throws IOException {
         Path f = dir.resolve("image.plumb");
         Files.write(f, new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, 13});
