@@ -50,6 +50,9 @@ class BasisAreaTest {
                 "F2 = cd_cylinder_subcritical(1e4) * pi * d * L * q\n", Severity.WARNING,
                 "cd_cylinder_subcritical is referenced to frontal area, but the area in "
                     + "cd_cylinder_subcritical(1e4) * pi * d… has the shape of the lateral surface of a cylinder"),
+            Arguments.of("the same force with the surface in brackets",
+                "F2 = cd_cylinder_subcritical(1e4) * (pi * d * L) * q\n", Severity.WARNING,
+                "has the shape of the lateral surface of a cylinder (π·d·L), a wetted area"),
             Arguments.of("flat product, q and the call first",
                 "F2 = q * cd_cylinder_subcritical(1e4) * pi * d * L\n", Severity.WARNING,
                 "has the shape of the lateral surface of a cylinder (π·d·L), a wetted area: for a cylinder in "

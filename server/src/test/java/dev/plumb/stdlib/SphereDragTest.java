@@ -195,6 +195,11 @@ class SphereDragTest {
         for (String re : List.of("2e5", "2.1e5", "5e5", "1e6")) {
             assertWithin(cd("cd_sphere_morrison(" + re + ")"), cd("cd_sphere(" + re + ")"), 1e-12, re);
         }
+        // And so the outside references hold through the selector on either side of the blend:
+        // Clift, Grace & Weber (1978) Table 5.2 within Brown-Lawler's 8 % at 5e4, and within
+        // Morrison's 20 % past the crisis at 5e5 (see morrisonCapturesTheDragCrisis).
+        assertWithin(standardCurve(5e4), cd("cd_sphere(5e4)"), 0.08, "below the blend");
+        assertWithin(standardCurve(5e5), cd("cd_sphere(5e5)"), 0.20, "above the blend");
     }
 
     /** Brown & Lawler (2003), their proposed equation as quoted in sphere.plumb, for checks by hand. */
