@@ -159,6 +159,7 @@ BASIS       : 'basis';
 VALID       : 'valid';
 REGIME      : 'regime';
 ACCURACY    : 'accuracy';
+DOMAIN      : 'domain';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

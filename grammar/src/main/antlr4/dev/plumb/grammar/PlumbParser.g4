@@ -63,7 +63,9 @@ blockLine
     : SOURCE STRING                                         # sourceLine
     | FAMILY name                                           # familyLine
     | BASIS name                                            # basisLine
+    | BASIS basis=name flow=name                            # basisFlowLine
     | VALID expr ( comparator expr )+                       # validLine
+    | DOMAIN expr ( comparator expr )+                      # domainLine
     | REGIME name                                           # regimeLine
     | ACCURACY expr                                         # accuracyLine
     | INTERPOLATE name                                      # interpolateLine
@@ -96,4 +98,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
+    | DOMAIN
     ;

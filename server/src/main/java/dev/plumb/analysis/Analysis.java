@@ -25,8 +25,17 @@ public record Analysis(Path file, String text, ParsedSource syntax, Map<String, 
     /**
      * A call of a correlation or table column in this document: its arguments and where they sit
      * in the range (for hover).
+     *
+     * @param used for a correlation with several formulas, which one gave the value here (the fit
+     *     a selector chose, or the fits it blended); null when there was no choice
      */
-    public record CallSite(dev.plumb.diagnostics.Span callee, String name, String arguments, String verdict) {
+    public record CallSite(dev.plumb.diagnostics.Span callee, String name, String arguments, String verdict,
+                           String used) {
+    }
+
+    /** The correlation calls written within a span (a definition's line), in source order. */
+    public List<CallSite> callsIn(dev.plumb.diagnostics.Span span) {
+        return calls.stream().filter(c -> c.callee().start() >= span.start() && c.callee().end() <= span.end()).toList();
     }
 
     /** The correlation call whose name covers an offset, or null. */

@@ -32,15 +32,24 @@ record BasisNotes(Area area, Coefficient coefficient, Shape shape, boolean pure,
      * @param tag frontal, wetted or planform, or null
      * @param label how the message names it
      * @param frontal the frontal area's formula in the same names (d * L for π·d·L), or null
+     * @param flow the flow direction a frontal area faces, crossflow or axial (the projected area d·L
+     *     of a cylinder, or its end π·d²/4); null when not stated
      */
-    record Area(String tag, Shape.Kind kind, String label, String frontal) {
+    record Area(String tag, Shape.Kind kind, String label, String frontal, String flow) {
+        Area(String tag, Shape.Kind kind, String label, String frontal) {
+            this(tag, kind, label, frontal, null);
+        }
+
         Area(String tag, Shape.Kind kind, String label) {
-            this(tag, kind, label, null);
+            this(tag, kind, label, null, null);
         }
     }
 
-    /** @param name the value's name where it is used; @param origin the correlation it came from */
-    record Coefficient(String basis, String name, String origin) {
+    /**
+     * @param name the value's name where it is used; @param origin the correlation it came from
+     * @param flow the flow direction its basis faces (basis frontal crossflow), or null
+     */
+    record Coefficient(String basis, String name, String origin, String flow) {
         String label() {
             return origin == null || origin.equals(name) ? name : name + " (from " + origin + ")";
         }

@@ -57,9 +57,9 @@ final class BasisRules {
             pure = false;
         }
         BasisNotes.Area area = n.area() == null ? null
-            : new BasisNotes.Area(n.area().tag(), n.area().kind(), name, n.area().frontal());
+            : new BasisNotes.Area(n.area().tag(), n.area().kind(), name, n.area().frontal(), n.area().flow());
         BasisNotes.Coefficient c = n.coefficient() == null ? null
-            : new BasisNotes.Coefficient(n.coefficient().basis(), name, n.coefficient().origin());
+            : new BasisNotes.Coefficient(n.coefficient().basis(), name, n.coefficient().origin(), n.coefficient().flow());
         return new BasisNotes(area, c, shape, pure, relabelled(n.density(), name, v));
     }
 
@@ -75,13 +75,18 @@ final class BasisRules {
         return s.factor() == 1 && s.lengths().size() == 1 && s.lengths().values().iterator().next() == 1;
     }
 
-    /** The result of a correlation or table with a basis: a coefficient, or a tagged area. */
-    static BasisNotes result(Value v, String basis, String correlation) {
+    /**
+     * The result of a correlation or table with a basis: a coefficient, or a tagged area; either
+     * with the flow direction its basis line states (null for none).
+     */
+    static BasisNotes result(Value v, String basis, String flow, String correlation) {
         if (basis == null || !v.known()) return BasisNotes.NONE;
         if (v.dimension().isDimensionless()) {
-            return BasisNotes.NONE.withCoefficient(new BasisNotes.Coefficient(basis, correlation, correlation));
+            return BasisNotes.NONE.withCoefficient(new BasisNotes.Coefficient(basis, correlation, correlation, flow));
         }
-        if (v.dimension().equals(AREA)) return BasisNotes.NONE.withArea(new BasisNotes.Area(basis, null, correlation));
+        if (v.dimension().equals(AREA)) {
+            return BasisNotes.NONE.withArea(new BasisNotes.Area(basis, null, correlation, null, flow));
+        }
         return BasisNotes.NONE;
     }
 
@@ -99,8 +104,8 @@ final class BasisRules {
     }
 
     BasisNotes multiply(Expr.Binary b, Value l, Value r, Dimension result) {
-        BasisNotes ln = notes(l);
-        BasisNotes rn = notes(r);
+        BasisNotes ln = asFactor(l);
+        BasisNotes rn = asFactor(r);
         Shape shape = ln.shape() != null && rn.shape() != null ? ln.shape().times(rn.shape(), 1) : null;
         boolean pure = ln.pure() && rn.pure();
         BasisNotes.Area area;
@@ -129,10 +134,11 @@ final class BasisRules {
     void wholeProduct(Expr.Binary b, Value v) {
         BasisNotes n = notes(v);
         if (n.coefficient() == null || n.area() != null || n.pure() || n.shape() == null || !areaLike(n.shape())) return;
-        Shape.Kind kind = n.shape().kind();
-        if (kind == null) kind = new Shape(n.shape().factor() * 2, n.shape().lengths()).kind(); // the ½ of ½·ρ·V²
-        if (kind == null) return;
-        check(n.coefficient(), new BasisNotes.Area(null, kind, "the area in " + Shown.source(text, b.span())), b);
+        Shape area = n.shape();
+        if (area.kind() == null) area = new Shape(area.factor() * 2, area.lengths()); // the ½ of ½·ρ·V²
+        if (area.kind() == null) return;
+        check(n.coefficient(), new BasisNotes.Area(null, area.kind(), "the area in " + Shown.source(text, b.span()),
+            area.frontalFormula()), b);
     }
 
     private static boolean areaLike(Shape s) {
@@ -143,10 +149,10 @@ final class BasisRules {
     private BasisNotes.Area scaledArea(BasisNotes ln, BasisNotes rn, Value l, Value r, Shape shape, Expr.Binary b) {
         Shape.Kind kind = shape == null ? null : shape.kind();
         if (ln.area() != null && rn.area() == null && r.dimensionless()) {
-            return new BasisNotes.Area(ln.area().tag(), kind, Shown.source(text, b.span()));
+            return new BasisNotes.Area(ln.area().tag(), kind, Shown.source(text, b.span()), null, ln.area().flow());
         }
         if (rn.area() != null && ln.area() == null && l.dimensionless()) {
-            return new BasisNotes.Area(rn.area().tag(), kind, Shown.source(text, b.span()));
+            return new BasisNotes.Area(rn.area().tag(), kind, Shown.source(text, b.span()), null, rn.area().flow());
         }
         if (ln.area() == null && rn.area() == null) {
             return new BasisNotes.Area(null, kind, Shown.source(text, b.span()), shape == null ? null : shape.frontalFormula());
@@ -155,12 +161,13 @@ final class BasisRules {
     }
 
     BasisNotes divide(Value l, Value r, Dimension result) {
-        BasisNotes ln = notes(l);
-        BasisNotes rn = notes(r);
+        BasisNotes ln = asFactor(l);
+        BasisNotes rn = asFactor(r);
         Shape shape = ln.shape() != null && rn.shape() != null ? ln.shape().times(rn.shape(), -1) : null;
         boolean plainDivisor = rn.area() == null && rn.coefficient() == null;
         BasisNotes.Area area = ln.area() != null && plainDivisor && (!result.equals(AREA) || r.dimensionless())
-            ? new BasisNotes.Area(ln.area().tag(), shape == null ? ln.area().kind() : shape.kind(), ln.area().label())
+            ? new BasisNotes.Area(ln.area().tag(), shape == null ? ln.area().kind() : shape.kind(), ln.area().label(), null,
+                ln.area().flow())
             : null;
         if (area == null && result.equals(AREA) && ln.area() == null && shape != null && ln.pure() && rn.pure()) {
             area = new BasisNotes.Area(null, shape.kind(), null);
@@ -175,7 +182,8 @@ final class BasisRules {
         BasisNotes ln = notes(l);
         BasisNotes rn = notes(r);
         BasisNotes.Area area = ln.area() != null && rn.area() != null && ln.area().tag() != null
-            && ln.area().tag().equals(rn.area().tag()) ? new BasisNotes.Area(ln.area().tag(), null, null) : null;
+            && ln.area().tag().equals(rn.area().tag()) ? new BasisNotes.Area(ln.area().tag(), null, null, null,
+                java.util.Objects.equals(ln.area().flow(), rn.area().flow()) ? ln.area().flow() : null) : null;
         BasisNotes.Coefficient c = ln.coefficient() != null && rn.coefficient() != null
             && ln.coefficient().basis().equals(rn.coefficient().basis()) ? ln.coefficient() : null;
         BasisNotes.Density density = ln.density() != null && rn.density() != null
@@ -194,6 +202,20 @@ final class BasisRules {
         return n.withShape(n.shape() == null ? null : n.shape().negate());
     }
 
+    /**
+     * A value without a shape as a factor of a product, the way {@link #reference} treats a name:
+     * a coefficient or another quantity written inline (a correlation's result, Cd·π·d·L·q)
+     * joins as one factor of its own, so the lengths around it still make up the product's
+     * shape; a plain number scales the shape. A length of unknown form stays unknown: the
+     * product's shape cannot be told then.
+     */
+    private static BasisNotes asFactor(Value v) {
+        BasisNotes n = notes(v);
+        if (n.shape() != null || Dimension.LENGTH.equals(v.dimension())) return n;
+        if (v.dimensionless() && n.coefficient() == null) return n.withShape(Shape.number(v.si()));
+        return new BasisNotes(n.area(), n.coefficient(), Shape.number(1), false, n.density());
+    }
+
     private static BasisNotes notes(Value v) {
         return v.notes() == null ? BasisNotes.NONE : v.notes();
     }
@@ -202,7 +224,14 @@ final class BasisRules {
     private void check(BasisNotes.Coefficient c, BasisNotes.Area a, Expr.Binary b) {
         String area = a.label() == null ? "the area" : a.label();
         if (a.tag() != null) {
-            if (a.tag().equals(c.basis())) return;
+            if (a.tag().equals(c.basis())) {
+                if (c.flow() != null && a.flow() != null && !c.flow().equals(a.flow())) {
+                    warn(b, c.label() + " is referenced to " + c.basis() + " area in " + flowWords(c.flow()) + ", but "
+                        + area + " is the " + a.tag() + " area in " + flowWords(a.flow()) + ": " + flowFix(c.flow()),
+                        Severity.WARNING);
+                }
+                return;
+            }
             warn(b, c.label() + " is referenced to " + c.basis() + " area, but " + area + " is tagged " + a.tag()
                 + ": use the " + c.basis() + " area" + what(c.basis()), Severity.WARNING);
             return;
@@ -214,6 +243,9 @@ final class BasisRules {
             String here = a.frontal() == null ? "" : " (here `" + a.frontal() + "`)";
             warn(b, c.label() + " is referenced to " + c.basis() + " area, but " + area + " has the shape of " + k.words
                 + ", a wetted area: " + frontalFix(k) + here, Severity.WARNING);
+        } else if ("crossflow".equals(c.flow()) && k == Shape.Kind.CIRCLE) {
+            warn(b, c.label() + " is referenced to " + c.basis() + " area in cross-flow, but " + area + " has the shape of "
+                + k.words + ", the end of a cylinder, which faces axial flow: " + flowFix(c.flow()), Severity.WARNING);
         } else if (c.basis().equals("wetted") && k == Shape.Kind.CIRCLE) {
             warn(b, c.label() + " is referenced to wetted area, but " + area + " has the shape of " + k.words
                 + ", a frontal area: use the surface the flow runs over", Severity.WARNING);
@@ -237,6 +269,16 @@ final class BasisRules {
             case SPHERE_SURFACE -> "for a sphere use the frontal area π·d²/4";
             default -> "the frontal area of a plate is one face, b·h";
         };
+    }
+
+    private static String flowWords(String flow) {
+        return flow.equals("crossflow") ? "cross-flow (axis across the stream)" : "axial flow (along the axis)";
+    }
+
+    /** The area that faces a flow direction, and the library's helper for a cylinder. */
+    private static String flowFix(String flow) {
+        return flow.equals("crossflow") ? "use the projected area d·L, cylinder_projected_area(d, L)"
+            : "use the end area π·d²/4, cylinder_end_area(d)";
     }
 
     private static String what(String basis) {

@@ -20,6 +20,8 @@ import java.util.Set;
  */
 final class BlockChecks {
     static final Set<String> BASES = Set.of("frontal", "wetted", "planform");
+    /** The flow directions a frontal basis may name: across a long body's axis, or along it. */
+    private static final Set<String> FLOWS = Set.of("crossflow", "axial");
     /** Whose density a value is: the fluid's (drag, lift, Reynolds number) or the body's (weight). */
     static final Set<String> DENSITY_TAGS = Set.of("fluid", "body");
     /**
@@ -47,6 +49,7 @@ final class BlockChecks {
             role(p);
         }
         word(c.basis(), BASES, Code.BASIS_UNKNOWN, "area basis");
+        word(c.flow(), FLOWS, Code.BASIS_UNKNOWN, "flow direction");
         word(c.regime(), REGIMES, Code.BLOCK_INVALID, "regime");
     }
 
@@ -96,6 +99,7 @@ final class BlockChecks {
     /** The columns of a table as functions; none when its numbers cannot be read. */
     List<Binding.TableBinding> table(Statement.Table t, Path file, Scope scope) {
         word(t.basis(), BASES, Code.BASIS_UNKNOWN, "area basis");
+        word(t.flow(), FLOWS, Code.BASIS_UNKNOWN, "flow direction");
         word(t.interpolate(), INTERPOLATIONS, Code.BLOCK_INVALID, "interpolation");
         boolean logLog = t.interpolate() != null && t.interpolate().text().equals("loglog");
         Dimension declared = dimension(t.param());
@@ -150,12 +154,12 @@ final class BlockChecks {
         if (b instanceof Binding.CorrelationBinding cb) {
             Statement.Correlation def = cb.def();
             return new Origin(def.name().text(), def.basis() == null ? null : def.basis().text(),
-                accuracyOf(def.accuracy(), cb.scope(), units));
+                accuracyOf(def.accuracy(), cb.scope(), units), def.flow() == null ? null : def.flow().text());
         }
         if (b instanceof Binding.TableBinding tb) {
             Statement.Table def = tb.def();
             return new Origin(tb.name(), def.basis() == null ? null : def.basis().text(),
-                accuracyOf(def.accuracy(), tb.scope(), units));
+                accuracyOf(def.accuracy(), tb.scope(), units), def.flow() == null ? null : def.flow().text());
         }
         return null;
     }

@@ -41,6 +41,11 @@ final class CorrelationCall {
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
         Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
         Set<String> names = params.keySet();
+        String outside = outsideDomain(c, name, def.domain(), inside, b.scope().text(), names);
+        if (outside != null) {
+            reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args), outside, null));
+            return Value.UNKNOWN;
+        }
         List<String> verdicts = new ArrayList<>();
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
@@ -50,16 +55,18 @@ final class CorrelationCall {
             }
         }
         String range = StdlibCatalog.validText(b);
-        reporter.call(new dev.plumb.analysis.Analysis.CallSite(c.callee().span(), name, arguments(def, args),
-            !verdicts.isEmpty() ? String.join("; ", verdicts) : range.isEmpty() ? "no stated range"
-                : "inside its range, " + range));
         regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
+        String flow = def.flow() == null ? null : def.flow().text();
         // Findings inside the formula go to the correlation's own reporter; none applying is the call's.
-        Value v = new Pieces(inside, inner, b.scope().text()).choose(def.pieces(), why -> reporter.report(
+        Pieces.Chosen chosen = new Pieces(inside, inner, b.scope().text()).choose(def.pieces(), why -> reporter.report(
             Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
                 + ": every `when` condition is false; add a last line `= … otherwise` to " + name));
-        return noted(v, basis, name);
+        Statement.Piece piece = chosen.piece();
+        reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args),
+            !verdicts.isEmpty() ? String.join("; ", verdicts) : range.isEmpty() ? "no stated range"
+                : "inside its range, " + range, piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
+        return noted(chosen.value(), basis, flow, name);
     }
 
     Value table(Expr.Call c, Binding.TableBinding t, List<Value> args) {
@@ -74,6 +81,15 @@ final class CorrelationCall {
             return Value.UNKNOWN;
         }
         String param = def.param().name().text();
+        Map<String, Value> params = Map.of(param, x);
+        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCorrelation(t.name(), c.span(), t.file()),
+            t.scope().text(), units);
+        String outside = outsideDomain(c, t.name(), def.domain(), inside, t.scope().text(), params.keySet());
+        if (outside != null) {
+            reporter.call(new Analysis.CallSite(c.callee().span(), t.name(), param + " = "
+                + Shown.value(x, data.argumentUnit, 4), outside, null));
+            return Value.UNKNOWN;
+        }
         if (!data.covers(x.si())) {
             String lo = Shown.value(Value.of(data.first(), data.argument), data.argumentUnit, 4);
             String hi = Shown.value(Value.of(data.last(), data.argument), data.argumentUnit, 4);
@@ -85,29 +101,52 @@ final class CorrelationCall {
                 + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows"
                 + alternatives(t, args));
         }
-        Map<String, Value> params = Map.of(param, x);
-        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCorrelation(t.name(), c.span(), t.file()),
-            t.scope().text(), units);
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
             if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " is " + why + alternatives(t, args));
         }
-        reporter.call(new dev.plumb.analysis.Analysis.CallSite(c.callee().span(), t.name(),
+        reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
             param + " = " + Shown.value(x, data.argumentUnit, 4), data.covers(x.si())
                 ? "inside the table, " + StdlibCatalog.validText(t) : "beyond the table's rows (extrapolated), "
-                + StdlibCatalog.validText(t)));
+                + StdlibCatalog.validText(t), null));
         double v = data.at(x.si());
         if (Double.isNaN(v)) {
             reporter.report(Code.MATH_DOMAIN, c.span(), t.name() + " interpolates log–log, so it needs a positive "
                 + param + ", but " + operand.apply(c.args().get(0), x) + " is not");
             return Value.UNKNOWN;
         }
-        return noted(Value.of(v, data.result), def.basis() == null ? null : def.basis().text(), t.name());
+        return noted(Value.of(v, data.result), def.basis() == null ? null : def.basis().text(),
+            def.flow() == null ? null : def.flow().text(), t.name());
+    }
+
+    /**
+     * Checks the {@code domain} lines: outside them the formula has no physical meaning (a
+     * negative Reynolds number, a negative length), so the call is an error and its value unknown,
+     * and nothing downstream is computed from it. Returns the verdict for hover, or null inside.
+     */
+    private String outsideDomain(Expr.Call c, String name, List<Statement.Bound> domain, Evaluator inside, String text,
+                                 Set<String> names) {
+        for (Statement.Bound bound : domain) {
+            String unlike = RangeCheck.mismatch(bound, inside, text);
+            if (unlike != null) {
+                // The domain cannot be judged: say so rather than pass the value on unchecked.
+                reporter.report(Code.UNIT_MISMATCH, c.span(), name + "'s domain line compares unlike quantities, " + unlike
+                    + ": give the limit the argument's unit; the value is not computed");
+                return "its domain cannot be judged: " + unlike;
+            }
+            String why = RangeCheck.outsideDomain(bound, inside, text, names);
+            if (why == null) continue;
+            reporter.report(Code.MATH_DOMAIN, c.span(), name + " is defined only for " + why + ", outside its physical "
+                + "domain: the value is not computed, and nothing is computed from it; check the sign and the units of "
+                + "what this argument is made of");
+            return "outside its physical domain: " + why;
+        }
+        return null;
     }
 
     /** A correlation's result carries its basis: a coefficient's, or a tagged area's. */
-    private static Value noted(Value v, String basis, String name) {
-        return v.known() ? v.noted(BasisRules.result(v, basis, name)) : v;
+    private static Value noted(Value v, String basis, String flow, String name) {
+        return v.known() ? v.noted(BasisRules.result(v, basis, flow, name)) : v;
     }
 
     private boolean dimensionsFit(Expr.Call c, String name, List<Statement.Param> params, List<Value> args) {

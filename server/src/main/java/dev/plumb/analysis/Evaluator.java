@@ -49,7 +49,7 @@ final class Evaluator {
         if (e instanceof Expr.Piecewise p) {
             return new Pieces(this, reporter, text).choose(p.pieces(), why -> reporter.report(Code.RANGE_NO_FORMULA,
                 p.span(), "no piece of this formula applies: " + why
-                    + "; add a last piece `otherwise …`, or a `when` that covers this case"));
+                    + "; add a last piece `otherwise …`, or a `when` that covers this case")).value();
         }
         return unary((Expr.Unary) e);
     }

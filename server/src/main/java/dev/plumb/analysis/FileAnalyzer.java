@@ -283,11 +283,13 @@ final class FileAnalyzer {
                     if (piece.condition() != null) exprs.addAll(piece.condition().operands());
                 }
                 c.valid().forEach(b -> exprs.addAll(b.operands()));
+                c.domain().forEach(b -> exprs.addAll(b.operands()));
                 if (c.accuracy() != null) exprs.add(c.accuracy());
             }
             if (s instanceof Statement.Table t) {
                 params.add(t.param().name().text());
                 t.valid().forEach(b -> exprs.addAll(b.operands()));
+                t.domain().forEach(b -> exprs.addAll(b.operands()));
             }
             if (s instanceof Statement.Seek f) {
                 // The unknown is not a dependency of its own equation.

@@ -23,24 +23,28 @@ final class Pieces {
         this.text = text;
     }
 
+    /** The piece that applied (null when none did) and the value it gave. */
+    record Chosen(Value value, Statement.Piece piece) {
+    }
+
     /**
      * The value of the first piece that applies; UNKNOWN when none does, after handing
      * {@code noneApplies} the false conditions with their values, to report in its own words.
      */
-    Value choose(List<Statement.Piece> pieces, Consumer<String> noneApplies) {
+    Chosen choose(List<Statement.Piece> pieces, Consumer<String> noneApplies) {
         List<String> falseConditions = new ArrayList<>();
         for (int i = 0; i < pieces.size(); i++) {
             Statement.Piece piece = pieces.get(i);
             Boolean holds = piece.condition() == null ? Boolean.TRUE : holds(piece.condition(), falseConditions);
-            if (holds == null) return Value.UNKNOWN;
+            if (holds == null) return new Chosen(Value.UNKNOWN, null);
             if (!holds) continue;
             Value v = eval.eval(piece.expr());
             // A formula whose pieces disagree is wrong whichever applies: its value is unknown.
-            if (v.known() && pieces.size() > 1 && !sameDimension(pieces, i, v)) return Value.UNKNOWN;
-            return v;
+            if (v.known() && pieces.size() > 1 && !sameDimension(pieces, i, v)) return new Chosen(Value.UNKNOWN, piece);
+            return new Chosen(v, piece);
         }
         noneApplies.accept(String.join("; ", falseConditions));
-        return Value.UNKNOWN;
+        return new Chosen(Value.UNKNOWN, null);
     }
 
     /** Whether a condition holds; null (reported) when it cannot be judged. */

@@ -44,6 +44,37 @@ final class RangeCheck {
      * evaluated: an error in the bound itself is reported by the evaluator).
      */
     static String violation(Statement.Bound bound, Evaluator inside, String definingText, Set<String> params) {
+        Breach b = breach(bound, inside, definingText, params);
+        return b == null ? null : "valid for " + b.range() + ", but " + b.argument() + " here: " + b.distance();
+    }
+
+    /** For a {@code domain} line: "Re > 0, but Re = -1e4 here"; null when the bound holds. */
+    static String outsideDomain(Statement.Bound bound, Evaluator inside, String definingText, Set<String> params) {
+        Breach b = breach(bound, inside, definingText, params);
+        return b == null ? null : b.range() + ", but " + b.argument() + " here";
+    }
+
+    /**
+     * "d > 0: d is a length, 0 is a plain number" when two sides of a bound cannot be compared;
+     * null when they can (or one cannot be evaluated: that error is reported by the evaluator).
+     */
+    static String mismatch(Statement.Bound bound, Evaluator inside, String definingText) {
+        List<Value> values = bound.operands().stream().map(inside::eval).toList();
+        if (values.stream().anyMatch(v -> !v.known())) return null;
+        for (int i = 0; i + 1 < values.size(); i++) {
+            if (values.get(i).dimension().equals(values.get(i + 1).dimension())) continue;
+            return Shown.source(definingText, bound.span()) + ": " + Shown.source(definingText, bound.operands().get(i).span())
+                + " is " + values.get(i).dimension().describe() + ", but " + Shown.source(definingText,
+                bound.operands().get(i + 1).span()) + " is " + values.get(i + 1).dimension().describe();
+        }
+        return null;
+    }
+
+    /** @param argument "Re = 1.2e6" as the bound names it; @param distance how far past the limit */
+    private record Breach(String range, String argument, String distance) {
+    }
+
+    private static Breach breach(Statement.Bound bound, Evaluator inside, String definingText, Set<String> params) {
         List<Value> values = bound.operands().stream().map(inside::eval).toList();
         if (values.stream().anyMatch(v -> !v.known())) return null;
         for (int i = 0; i < bound.comparators().size(); i++) {
@@ -55,9 +86,9 @@ final class RangeCheck {
             boolean upper = argumentLeft == (op == Comparator.LT || op == Comparator.LE);
             Unit unit = unitOf(bound.operands().get(limit), values.get(limit).dimension());
             String argument = Shown.source(definingText, bound.operands().get(arg).span());
-            String range = Shown.source(definingText, bound.span());
-            return "valid for " + range + ", but " + argument + " = " + Shown.value(values.get(arg), unit, 4) + " here: "
-                + distance(values.get(arg), values.get(limit), upper, unit);
+            return new Breach(Shown.source(definingText, bound.span()),
+                argument + " = " + Shown.value(values.get(arg), unit, 4),
+                distance(values.get(arg), values.get(limit), upper, unit));
         }
         return null;
     }

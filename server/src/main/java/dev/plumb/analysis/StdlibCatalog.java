@@ -19,11 +19,13 @@ public final class StdlibCatalog {
             if (binding instanceof Binding.CorrelationBinding c) {
                 Statement.Correlation def = c.def();
                 String params = String.join(", ", def.params().stream().map(p -> p.name().text()).toList());
-                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), def.basis(), withRegime(c), def.source());
+                row(b, "`" + e.getKey() + "(" + params + ")`", def.title(), basisText(def.basis(), def.flow()), withRegime(c),
+                    def.source());
             } else if (binding instanceof Binding.TableBinding t) {
                 Statement.Table def = t.def();
                 String x = def.param().name().text();
-                row(b, "`" + e.getKey() + "(" + x + ")`", gives(t), def.basis(), validText(binding), def.source());
+                row(b, "`" + e.getKey() + "(" + x + ")`", gives(t), basisText(def.basis(), def.flow()), validText(binding),
+                    def.source());
             }
         }
         return b.toString();
@@ -94,6 +96,13 @@ public final class StdlibCatalog {
         return "Column " + column + quantity + unit + ", of the table " + def.name().text() + ": " + def.title();
     }
 
+    /** The physical domain its `domain` lines state ("Re > 0"); "" for none. */
+    public static String domainText(Binding binding) {
+        if (binding instanceof Binding.CorrelationBinding c) return ranges(c.def().domain(), c.scope().text());
+        if (binding instanceof Binding.TableBinding t) return ranges(t.def().domain(), t.scope().text());
+        return "";
+    }
+
     private static String ranges(List<Statement.Bound> bounds, String text) {
         List<String> out = new ArrayList<>();
         for (Statement.Bound bound : bounds) {
@@ -102,10 +111,15 @@ public final class StdlibCatalog {
         return String.join("; ", out);
     }
 
-    private static void row(StringBuilder b, String name, String gives, dev.plumb.syntax.Ident basis, String valid,
-                            String source) {
+    /** "frontal, crossflow" as the basis line states it; "" for none. */
+    public static String basisText(dev.plumb.syntax.Ident basis, dev.plumb.syntax.Ident flow) {
+        if (basis == null) return "";
+        return flow == null ? basis.text() : basis.text() + ", " + flow.text();
+    }
+
+    private static void row(StringBuilder b, String name, String gives, String basis, String valid, String source) {
         b.append("| ").append(name).append(" | ").append(cell(gives)).append(" | ")
-            .append(basis == null ? "" : basis.text()).append(" | ").append(cell(valid)).append(" | ")
+            .append(basis).append(" | ").append(cell(valid)).append(" | ")
             .append(cell(source)).append(" |\n");
     }
 

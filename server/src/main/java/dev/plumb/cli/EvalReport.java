@@ -36,7 +36,7 @@ final class EvalReport {
                 out.println(style.bold(s.title()));
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
-                String basis = tag(v);
+                String basis = tag(v) + used(a, v);
                 out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + solved(v) + note)
                     .stripTrailing());
                 if (steps && v.solution() != null) writeSteps(out, v.solution());
@@ -73,9 +73,18 @@ final class EvalReport {
         if (v.basis() != null) return "  [" + v.basis() + "]";
         if (v.origin() == null) return "";
         List<String> parts = new ArrayList<>();
-        if (v.origin().basis() != null) parts.add(v.origin().basis() + " basis");
+        if (v.origin().basis() != null) parts.add(v.origin().basisWords());
         if (v.origin().accuracy() != null) parts.add("±" + QuantityFormat.number(v.origin().accuracy() * 100, 3) + " %");
         return "  [" + v.origin().correlation() + (parts.isEmpty() ? "" : ": " + String.join(", ", parts)) + "]";
+    }
+
+    /** "[used: cd_sphere_morrison (Re = 3e5)]": which fit of a selector gave the value on this line. */
+    private static String used(Analysis a, Row.ValueRow v) {
+        List<String> parts = new ArrayList<>();
+        for (Analysis.CallSite c : a.callsIn(v.span())) {
+            if (c.used() != null) parts.add(c.used() + " at " + c.arguments());
+        }
+        return parts.isEmpty() ? "" : "  [used: " + String.join("; ", parts) + "]";
     }
 
     private static int width(String s) {

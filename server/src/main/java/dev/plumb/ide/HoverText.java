@@ -29,7 +29,8 @@ public final class HoverText {
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
         Analysis.CallSite call = a.callAt(offset);
-        String here = call == null ? "" : "\n\nat this call: " + call.arguments() + " — " + call.verdict();
+        String here = call == null ? "" : "\n\nat this call: " + call.arguments() + " — " + call.verdict()
+            + (call.used() == null ? "" : "\n\nused here: " + call.used());
         if (b instanceof Binding.CorrelationBinding c) return correlation(c) + here;
         if (b instanceof Binding.TableBinding t) return table(t) + here;
         if (b instanceof Binding.FunctionBinding f) {
@@ -56,7 +57,7 @@ public final class HoverText {
         if (formula != null) out.append("\n\n").append(formula);
         if (b.origin() != null) {
             out.append("\n\nfrom ").append(b.origin().correlation());
-            if (b.origin().basis() != null) out.append(", ").append(b.origin().basis()).append(" basis");
+            if (b.origin().basis() != null) out.append(", ").append(b.origin().basisWords());
             if (b.origin().accuracy() != null) {
                 out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
             }
@@ -119,21 +120,27 @@ public final class HoverText {
         Statement.Correlation d = c.def();
         StringBuilder out = new StringBuilder("**" + d.name().text() + "**(" + String.join(", ", d.params().stream()
             .map(Statement.Param::written).toList()) + ") — correlation");
-        meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(c));
+        meta(out, d.title(), d.source(), StdlibCatalog.basisText(d.basis(), d.flow()), StdlibCatalog.validText(c));
+        domain(out, StdlibCatalog.domainText(c));
         return out.toString();
     }
 
     private static String table(Binding.TableBinding t) {
         Statement.Table d = t.def();
         StringBuilder out = new StringBuilder("**" + t.name() + "**(" + d.param().name().text() + ") — table");
-        meta(out, d.title(), d.source(), d.basis(), StdlibCatalog.validText(t));
+        meta(out, d.title(), d.source(), StdlibCatalog.basisText(d.basis(), d.flow()), StdlibCatalog.validText(t));
+        domain(out, StdlibCatalog.domainText(t));
         return out.toString();
     }
 
-    private static void meta(StringBuilder out, String title, String source, dev.plumb.syntax.Ident basis, String valid) {
+    private static void domain(StringBuilder out, String domain) {
+        if (!domain.isEmpty()) out.append("\n\ndomain: ").append(domain).append(" (outside it: an error, nothing computed)");
+    }
+
+    private static void meta(StringBuilder out, String title, String source, String basis, String valid) {
         if (title != null) out.append("\n\n").append(title);
         if (source != null) out.append("\n\nsource: ").append(source);
-        if (basis != null) out.append("\n\nbasis: ").append(basis.text());
+        if (!basis.isEmpty()) out.append("\n\nbasis: ").append(basis);
         if (!valid.isEmpty()) out.append("\n\nvalid: ").append(valid).append(" (checked at every call)");
     }
 }

@@ -66,7 +66,9 @@ public final class Signatures {
         StringBuilder d = new StringBuilder();
         if (b instanceof Binding.CorrelationBinding c) {
             if (c.def().title() != null) d.append(c.def().title());
-            if (c.def().basis() != null) d.append("\nbasis: ").append(c.def().basis().text());
+            if (c.def().basis() != null) {
+                d.append("\nbasis: ").append(StdlibCatalog.basisText(c.def().basis(), c.def().flow()));
+            }
         } else if (b instanceof Binding.TableBinding t && t.def().title() != null) {
             d.append(t.def().title());
         } else if (b instanceof Binding.BuiltinFunction f) {

@@ -267,6 +267,11 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     }
 
     @Override
+    public Object visitBasisFlowLine(PlumbParser.BasisFlowLineContext ctx) {
+        return new BlockLine.Basis(span(ctx), ident(ctx.basis), ident(ctx.flow));
+    }
+
+    @Override
     public Object visitRegimeLine(PlumbParser.RegimeLineContext ctx) {
         return new BlockLine.Property(span(ctx), "regime", null, ident(ctx.name()));
     }
@@ -279,6 +284,11 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     @Override
     public Object visitValidLine(PlumbParser.ValidLineContext ctx) {
         return new BlockLine.Valid(span(ctx), bound(ctx, ctx.expr(), ctx.comparator()));
+    }
+
+    @Override
+    public Object visitDomainLine(PlumbParser.DomainLineContext ctx) {
+        return new BlockLine.Domain(span(ctx), bound(ctx, ctx.expr(), ctx.comparator()));
     }
 
     @Override

@@ -74,7 +74,8 @@ final class BlockGrouper {
         }
         if (line instanceof BlockLine.Row) return "a row of numbers belongs inside a `table … end` block";
         if (line instanceof BlockLine.End) return "`end` without a `correlation` or `table` to close";
-        String key = line instanceof BlockLine.Property p ? p.key() : line instanceof BlockLine.Valid ? "valid" : "accuracy";
+        String key = line instanceof BlockLine.Property p ? p.key() : line instanceof BlockLine.Valid ? "valid"
+            : line instanceof BlockLine.Basis ? "basis" : line instanceof BlockLine.Domain ? "domain" : "accuracy";
         return "`" + key + "` belongs inside a `correlation … end` or `table … end` block";
     }
 
@@ -104,10 +105,12 @@ final class BlockGrouper {
         String source;
         Ident family;
         Ident basis;
+        Ident flow;
         Ident regime;
         Ident interpolate;
         Expr accuracy;
         final List<Statement.Bound> valid = new ArrayList<>();
+        final List<Statement.Bound> domain = new ArrayList<>();
 
         /** Takes a metadata line; false when the line is not metadata. */
         boolean take(Object line) {
@@ -121,8 +124,13 @@ final class BlockGrouper {
                     case "regime" -> regime = once(regime, p.word(), p.span(), "regime");
                     default -> interpolate = once(interpolate, p.word(), p.span(), "interpolate");
                 }
+            } else if (line instanceof BlockLine.Basis b) {
+                basis = once(basis, b.basis(), b.span(), "basis");
+                flow = flow != null ? flow : b.flow();
             } else if (line instanceof BlockLine.Valid v) {
                 valid.add(v.bound());
+            } else if (line instanceof BlockLine.Domain d) {
+                domain.add(d.bound());
             } else if (line instanceof BlockLine.Accuracy a) {
                 accuracy = once(accuracy, a.value(), a.span(), "accuracy");
             } else if (line instanceof Statement.Header h) {
@@ -164,7 +172,7 @@ final class BlockGrouper {
             }
         }
         return new Statement.Correlation(span, head.name(), head.params(), meta.title, meta.source, meta.family,
-            meta.basis, meta.valid, meta.regime, meta.accuracy, pieces);
+            meta.basis, meta.valid, meta.regime, meta.accuracy, pieces, meta.flow, meta.domain);
     }
 
     private Statement table(BlockLine.TableHead head, Block b, Span span) {
@@ -192,7 +200,8 @@ final class BlockGrouper {
             checkRows(head, columns, rows);
         }
         return new Statement.Table(span, head.name(), head.param(), meta.title, meta.source, meta.family, meta.basis,
-            meta.valid, meta.accuracy, meta.interpolate, columns == null ? List.of() : columns, rows);
+            meta.valid, meta.accuracy, meta.interpolate, columns == null ? List.of() : columns, rows, meta.flow,
+            meta.domain);
     }
 
     private void checkRows(BlockLine.TableHead head, List<Statement.Column> columns, List<Statement.Row> rows) {

@@ -20,7 +20,15 @@ sealed interface BlockLine {
     record Property(Span span, String key, String text, Ident word) implements BlockLine {
     }
 
+    /** {@code basis frontal crossflow}: a basis with the flow direction it faces. */
+    record Basis(Span span, Ident basis, Ident flow) implements BlockLine {
+    }
+
     record Valid(Span span, Statement.Bound bound) implements BlockLine {
+    }
+
+    /** {@code domain 0 < Re}: where the formula has a physical meaning at all. */
+    record Domain(Span span, Statement.Bound bound) implements BlockLine {
     }
 
     record Accuracy(Span span, Expr value) implements BlockLine {

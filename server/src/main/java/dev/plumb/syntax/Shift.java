@@ -113,14 +113,15 @@ final class Shift {
             List<Statement.Param> params = each(c.params(), this::param);
             List<Statement.Piece> pieces = each(c.pieces(), this::piece);
             return new Statement.Correlation(span(c.span()), ident(c.name()), params, c.title(), c.source(),
-                ident(c.family()), ident(c.basis()), bounds(c.valid()), ident(c.regime()), expr(c.accuracy()), pieces);
+                ident(c.family()), ident(c.basis()), bounds(c.valid()), ident(c.regime()), expr(c.accuracy()), pieces,
+                ident(c.flow()), bounds(c.domain()));
         }
         if (s instanceof Statement.Table t) {
             List<Statement.Column> columns = each(t.columns(), c -> new Statement.Column(ident(c.name()), unit(c.unit())));
             List<Statement.Row> rows = each(t.rows(), r -> new Statement.Row(span(r.span()), r.numbers()));
             return new Statement.Table(span(t.span()), ident(t.name()), param(t.param()), t.title(), t.source(),
                 ident(t.family()), ident(t.basis()), bounds(t.valid()), expr(t.accuracy()), ident(t.interpolate()),
-                columns, rows);
+                columns, rows, ident(t.flow()), bounds(t.domain()));
         }
         Statement.Broken b = (Statement.Broken) s;
         return new Statement.Broken(span(b.span()), ident(b.name()));

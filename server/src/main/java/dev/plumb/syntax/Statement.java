@@ -52,24 +52,30 @@ public sealed interface Statement {
     /**
      * {@code correlation NAME(PARAMS) … end}: a published formula with what a reviewer needs to
      * trust it. Optional parts are null when absent; {@code pieces} has one entry for a single
-     * {@code = EXPR}.
+     * {@code = EXPR}; {@code flow} is the flow direction its basis faces ({@code basis frontal
+     * crossflow}); {@code domain} holds the physical domain of its parameters ({@code domain Re > 0}),
+     * apart from the fitted {@code valid} range.
      */
     record Correlation(Span span, Ident name, List<Param> params, String title, String source, Ident family,
-                       Ident basis, List<Bound> valid, Ident regime, Expr accuracy, List<Piece> pieces)
+                       Ident basis, List<Bound> valid, Ident regime, Expr accuracy, List<Piece> pieces,
+                       Ident flow, List<Bound> domain)
         implements Statement {
         public Correlation {
             params = List.copyOf(params);
             valid = List.copyOf(valid);
+            domain = List.copyOf(domain);
             pieces = List.copyOf(pieces);
         }
     }
 
     /** {@code table NAME(X) … end}: columns of data; each output column is a function. */
     record Table(Span span, Ident name, Param param, String title, String source, Ident family, Ident basis,
-                 List<Bound> valid, Expr accuracy, Ident interpolate, List<Column> columns, List<Row> rows)
+                 List<Bound> valid, Expr accuracy, Ident interpolate, List<Column> columns, List<Row> rows,
+                 Ident flow, List<Bound> domain)
         implements Statement {
         public Table {
             valid = List.copyOf(valid);
+            domain = List.copyOf(domain);
             columns = List.copyOf(columns);
             rows = List.copyOf(rows);
         }

@@ -44,6 +44,67 @@ class BasisAreaTest {
             Arguments.of("dynamic pressure written out",
                 "Cd = cd_cylinder(1e5)\nF = 0.5 * rho * V^2 * Cd * pi * d * L\n", Severity.WARNING,
                 "the shape of the lateral surface of a cylinder"),
+            // A flat product a*b*c*d parses left-nested, so the lateral surface π·d·L is spread over
+            // several nodes mixed with the coefficient and q; it is judged on the whole product.
+            Arguments.of("coefficient called in a flat product with the lateral surface",
+                "F2 = cd_cylinder_subcritical(1e4) * pi * d * L * q\n", Severity.WARNING,
+                "cd_cylinder_subcritical is referenced to frontal area, but the area in "
+                    + "cd_cylinder_subcritical(1e4) * pi * d… has the shape of the lateral surface of a cylinder"),
+            Arguments.of("the same force with the surface in brackets",
+                "F2 = cd_cylinder_subcritical(1e4) * (pi * d * L) * q\n", Severity.WARNING,
+                "has the shape of the lateral surface of a cylinder (π·d·L), a wetted area"),
+            Arguments.of("flat product, q and the call first",
+                "F2 = q * cd_cylinder_subcritical(1e4) * pi * d * L\n", Severity.WARNING,
+                "has the shape of the lateral surface of a cylinder (π·d·L), a wetted area: for a cylinder in "
+                    + "cross-flow use the projected area d·L (here `d * L`)"),
+            Arguments.of("flat product, the call last",
+                "F2 = pi * d * L * q * cd_cylinder(1e5)\n", Severity.WARNING,
+                "has the shape of the lateral surface of a cylinder"),
+            Arguments.of("flat product, lengths scattered",
+                "F2 = L * cd_cylinder(1e5) * q * d * pi\n", Severity.WARNING,
+                "has the shape of the lateral surface of a cylinder"),
+            Arguments.of("flat product with the dynamic pressure written out",
+                "F2 = 0.5 * rho * V^2 * cd_cylinder(1e5) * pi * d * L\n", Severity.WARNING,
+                "has the shape of the lateral surface of a cylinder"),
+            Arguments.of("flat product with the projected area",
+                "F2 = cd_cylinder_subcritical(1e4) * d * L * q\n", null, null),
+            Arguments.of("flat product with a sphere's frontal circle",
+                "F2 = cd_sphere(1e4) * pi * d^2 / 4 * q\n", null, null),
+            Arguments.of("flat product, a sphere's circle after q",
+                "F2 = q * cd_sphere(1e4) * pi * d^2 / 4\n", null, null),
+            Arguments.of("flat product with a plain number of unknown meaning",
+                "F2 = cd_cylinder(1e5) * sqrt(2) * d * L * q\n", null, null),
+            // A cylinder's drag in cross-flow is referred to its projected area d·L; its end π·d²/4
+            // faces the flow only when the flow runs along the axis (common practice).
+            Arguments.of("cross-flow cylinder with the library's projected area",
+                "Cd = cd_cylinder(1e5)\nA = cylinder_projected_area(d, L)\nF = Cd * A * q\n", null, null),
+            Arguments.of("cross-flow cylinder with the library's end area",
+                "Cd = cd_cylinder(1e5)\nA = cylinder_end_area(d)\nF = Cd * A * q\n", Severity.WARNING,
+                "Cd (from cd_cylinder) is referenced to frontal area in cross-flow (axis across the stream), but A is "
+                    + "the frontal area in axial flow (along the axis): use the projected area d·L, "
+                    + "cylinder_projected_area(d, L)"),
+            Arguments.of("cross-flow fit and end area, both called in place",
+                "F = cd_cylinder_subcritical(1e4) * cylinder_end_area(d) * q\n", Severity.WARNING,
+                "cd_cylinder_subcritical is referenced to frontal area in cross-flow"),
+            Arguments.of("cross-flow cylinder with a circle written out",
+                "Cd = cd_cylinder(1e5)\nA = pi * d^2 / 4\nF = Cd * A * q\n", Severity.WARNING,
+                "A has the shape of a circle's area (π·d²/4), the end of a cylinder, which faces axial flow: use the "
+                    + "projected area d·L, cylinder_projected_area(d, L)"),
+            Arguments.of("cross-flow cylinder with d·L tagged frontal by hand",
+                "Cd = cd_cylinder(1e5)\nA = d * L   as frontal\nF = Cd * A * q\n", null, null),
+            Arguments.of("a sphere's coefficient states no direction: the end area of a rod is a circle too",
+                "Cd = cd_sphere(1e4)\nA = cylinder_end_area(d)\nF = Cd * A * q\n", null, null),
+            Arguments.of("an axial coefficient with the end area",
+                "correlation cd_rod_axial(LD)\n    basis frontal axial\n    = 0.82\nend\n"
+                    + "Cd = cd_rod_axial(4)\nA = cylinder_end_area(d)\nF = Cd * A * q\n", null, null),
+            Arguments.of("an axial coefficient with the projected area",
+                "correlation cd_rod_axial(LD)\n    basis frontal axial\n    = 0.82\nend\n"
+                    + "Cd = cd_rod_axial(4)\nA = cylinder_projected_area(d, L)\nF = Cd * A * q\n", Severity.WARNING,
+                "Cd (from cd_rod_axial) is referenced to frontal area in axial flow (along the axis), but A is the "
+                    + "frontal area in cross-flow (axis across the stream): use the end area π·d²/4, cylinder_end_area(d)"),
+            Arguments.of("two projected areas added stay cross-flow",
+                "Cd = cd_cylinder(1e5)\nA = 2 * cylinder_projected_area(d, L) + cylinder_projected_area(d, h)\n"
+                    + "F = Cd * A * q\n", null, null),
             Arguments.of("plate normal to the flow, tagged frontal",
                 "Cd = cd_plate_normal(b / h, 1e5)\nA = b * h   as frontal\nF = Cd * A * q\n", null, null),
             Arguments.of("plate normal to the flow, tagged wetted",

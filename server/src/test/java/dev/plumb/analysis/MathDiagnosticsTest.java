@@ -21,6 +21,18 @@ class MathDiagnosticsTest {
     }
 
     @Test
+    void argumentsOutsideACorrelationsDomainAreErrorsAndLeaveTheValueUnknown() {
+        Analysis a = Fixture.checkResource("math.domain.library.plumb");
+        for (String name : new String[] {"a", "F", "c", "g", "Cd", "A", "Re", "F_sphere"}) {
+            assertFalse(Fixture.value(a, name).value().known(), name);
+            assertEquals("?", Fixture.value(a, name).shown(), name);
+        }
+        // Outside `valid` but inside `domain`: warned, and still computed. By hand: 1.32 - 0.11 *
+        // log10(8e5 / 2e4) = 1.32 - 0.11 * 1.60206 = 1.14377.
+        assertEquals(1.32 - 0.11 * Math.log10(40), Fixture.value(a, "b").value().si(), 1e-12);
+    }
+
+    @Test
     void overflowNamesTheOperands() {
         Fixture.checkResource("math.not-finite.plumb");
     }

@@ -154,6 +154,29 @@ class CliTest {
     }
 
     @Test
+    void evalSaysWhichFitASelectorUsed() throws IOException {
+        // cd_sphere hands over from Brown-Lawler to Morrison through a blend over 1e5 < Re < 2e5
+        // (stdlib/sphere.plumb); the reviewer sees which gave each value.
+        Path f = write("s.plumb", "Cd_low = cd_sphere(5e4)\nCd_mid = cd_sphere(1.5e5)\nCd_sn = cd_sphere_sn(100)\n");
+        Cli run = Cli.run("eval", "--no-color", f.toString());
+        assertEquals(0, run.exitCode(), run.out());
+        assertTrue(run.out().contains("[cd_sphere: frontal basis]  [used: cd_sphere_brown_lawler at Re = 50000]"),
+            run.out());
+        assertTrue(run.out().contains("[used: cd_sphere_brown_lawler and cd_sphere_morrison (the formula when "
+            + "1e5 < Re < 2e5) at Re = 150000]"), run.out());
+        assertFalse(run.out().lines().filter(l -> l.contains("Cd_sn")).findFirst().orElseThrow().contains("used"),
+            "a correlation with one formula has nothing to choose");
+    }
+
+    @Test
+    void evalSaysWhichWayAFrontalBasisFaces() throws IOException {
+        // cd_cylinder is referred to the projected area d·L of a cylinder in cross-flow.
+        Path f = write("c.plumb", "Cd = cd_cylinder(1e5)\n");
+        Cli run = Cli.run("eval", "--no-color", f.toString());
+        assertTrue(run.out().contains("[cd_cylinder: frontal basis, cross-flow]"), run.out());
+    }
+
+    @Test
     void binaryFileIsAClearError() throws IOException {
         Path f = dir.resolve("image.plumb");
         Files.write(f, new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, 13});

@@ -163,6 +163,19 @@ class LanguageServerTest {
     }
 
     @Test
+    void hoverOnASelectorCallSaysWhichFitGaveTheValue() throws Exception {
+        // cd_sphere uses Morrison from Re = 2e5 (stdlib/sphere.plumb).
+        start(capabilities(true, true, null));
+        Cursor c = Cursor.of("a = cd_sph$0ere(3e5)\n");
+        String uri = uri("hs.plumb", c.text());
+        client.open(uri, c.text());
+        String md = client.remote.getTextDocumentService().hover(new HoverParams(new TextDocumentIdentifier(uri), c.at()))
+            .get(10, TimeUnit.SECONDS).getContents().getRight().getValue();
+        assertTrue(md.contains("used here: cd_sphere_morrison"), md);
+        assertTrue(md.contains("domain: Re > 0 (outside it: an error, nothing computed)"), md);
+    }
+
+    @Test
     void goToDefinitionInTheFileInAUsedFileAndInTheLibrary() throws Exception {
         start(capabilities(true, true, null));
         uri("site.plumb", "input V = 30 m/s\n");

@@ -65,6 +65,34 @@ class ParserTest {
     }
 
     @Test
+    void basisLineWithAFlowDirection() {
+        String text = "correlation cd_rod(Re)\n    basis frontal crossflow\n    = 1.2\nend\n"
+            + "correlation cd_ball(Re)\n    basis frontal\n    = 0.4\nend\n";
+        List<Statement> s = statements(text);
+        var rod = assertInstanceOf(Statement.Correlation.class, s.get(0));
+        assertEquals("frontal", rod.basis().text());
+        assertEquals("crossflow", rod.flow().text());
+        assertEquals("crossflow", slice(text, rod.flow().span()));
+        var ball = assertInstanceOf(Statement.Correlation.class, s.get(1));
+        assertEquals("frontal", ball.basis().text());
+        assertEquals(null, ball.flow());
+    }
+
+    @Test
+    void domainLinesAreKeptApartFromValidLines() {
+        String text = "correlation cd_rod(Re, d: length)\n    domain Re > 0\n    domain d > 0 m\n"
+            + "    valid 1e3 <= Re <= 2e5\n    = 1.2\nend\ndomain = 3\n";
+        List<Statement> s = statements(text);
+        var rod = assertInstanceOf(Statement.Correlation.class, s.get(0));
+        assertEquals(2, rod.domain().size());
+        assertEquals("d > 0 m", slice(text, rod.domain().get(1).span()));
+        assertEquals(1, rod.valid().size());
+        // The word is soft: outside a block it is a name like any other.
+        var d = assertInstanceOf(Statement.Definition.class, s.get(1));
+        assertEquals("domain", d.name().text());
+    }
+
+    @Test
     void derivedDefinitionAndFunction() {
         var d = assertInstanceOf(Statement.Definition.class, one("q = 0.5 * rho * V^2 in Pa"));
         assertFalse(d.input());

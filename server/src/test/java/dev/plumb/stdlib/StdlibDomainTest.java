@@ -1,0 +1,71 @@
+package dev.plumb.stdlib;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Row;
+import dev.plumb.diagnostics.Diagnostic;
+import java.util.List;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * The physical domains the library's `domain` lines state: outside them a call is an error
+ * (math.domain) and its value unknown, so nothing downstream is computed from it. The domains
+ * are facts of the trade, not fitted limits: a Reynolds number, a length that builds an area, a
+ * density, a viscosity and an absolute temperature are positive (common practice).
+ */
+class StdlibDomainTest {
+
+    /** One error, math.domain, naming the domain line; the value is not computed. */
+    static void assertOutsideDomain(String call, String domain) {
+        Analysis a = StdlibCheck.analyze("x = " + call + "\n");
+        List<Diagnostic> all = a.diagnostics();
+        assertEquals(1, all.size(), () -> call + ": " + all);
+        Diagnostic d = all.get(0);
+        assertEquals("math.domain", d.code().id(), d::toString);
+        assertTrue(d.message().contains("is defined only for " + domain), d::toString);
+        assertFalse(((Row.ValueRow) a.rows().get(0)).value().known(), call + " must be unknown");
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "cd_sphere_sn(-100)                          | Re > 0",
+        "cd_sphere_clift_gauvin(-1e3)                | Re > 0",
+        "cd_sphere_brown_lawler(-1e3)                | Re > 0",
+        "cd_sphere_morrison(-1e5)                    | Re > 0",
+        "cd_cylinder_subcritical(-1e4)               | Re > 0",
+        "cd_cylinder(-1e4)                           | Re > 0",
+        "cd_cube(-1e5)                               | Re > 0",
+        "cd_disk(-1e5)                               | Re > 0",
+        "cf_plate_turb_avg(-1e6)                     | Re > 0",
+        "cf_plate_prandtl_schlichting(-1e6)          | Re > 0",
+        "dynamic_pressure(-1.2 kg/m^3, 20 m/s)       | rho > 0 kg/m^3",
+        "reynolds(1.2 kg/m^3, 20 m/s, 0 m, 1.8e-5 Pa*s) | L > 0 m",
+        "reynolds_nu(2 m/s, 0.1 m, -1e-6 m^2/s)      | nu > 0 m^2/s",
+        "air_density(20 K - 300 K, 101 kPa)          | T > 0 K",
+        "air_viscosity(-10 K)                        | T > 0 K",
+        "air_nu(288 K, -5 kPa)                       | p > 0 Pa",
+        "sphere_frontal_area(0 m)                    | d > 0 m",
+        "cylinder_projected_area(0.3 m, -2 m)        | L > 0 m",
+        "cylinder_lateral_area(-0.3 m, 2 m)          | d > 0 m",
+        "plate_wetted_area(1 m, 0 m)                 | L > 0 m",
+        "box_wetted_area(2 m, 1 m, -1 m)             | h > 0 m",
+        "wing_planform_area(10 m, -1 m)              | chord > 0 m"})
+    void outsideTheDomainIsAnErrorAndUnknown(String call, String domain) {
+        assertOutsideDomain(call.strip(), domain.strip());
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {"cd_sphere(1e-3)", "cd_cylinder_subcritical(1e-3)", "sphere_frontal_area(1 mm)",
+        "reynolds(1.2 kg/m^3, 0 m/s, 0.1 m, 1.8e-5 Pa*s)"})
+    void insideTheDomainIsComputed(String call) {
+        // Small but positive is inside the domain (a zero speed gives Re = 0, which is no error in
+        // itself: only a correlation that needs Re > 0 refuses it).
+        Analysis a = StdlibCheck.analyze("x = " + call + "\n");
+        assertTrue(a.diagnostics().stream().noneMatch(d -> d.code().id().equals("math.domain")), a.diagnostics()::toString);
+        assertTrue(((Row.ValueRow) a.rows().get(0)).value().known(), call);
+    }
+}
