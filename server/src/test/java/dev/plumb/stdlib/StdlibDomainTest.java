@@ -53,7 +53,18 @@ class StdlibDomainTest {
         "cylinder_lateral_area(-0.3 m, 2 m)          | d > 0 m",
         "plate_wetted_area(1 m, 0 m)                 | L > 0 m",
         "box_wetted_area(2 m, 1 m, -1 m)             | h > 0 m",
-        "wing_planform_area(10 m, -1 m)              | chord > 0 m"})
+        "wing_planform_area(10 m, -1 m)              | chord > 0 m",
+        "cf_plate_blasius_avg(-1e4)                  | Re > 0",
+        "cf_plate_mixed(-1e6)                        | Re > 0",
+        "cf_plate_ps_mixed_3e6(-1e6)                 | Re > 0",
+        "cf_ittc1957(-1e7)                           | Re > 0",
+        "cd_plate_normal(2, -5e4)                    | Re > 0",
+        "cd_plate_normal(-2, 5e4)                    | AR > 0",
+        "cd_cone(30 deg, -5e4)                       | Re > 0",
+        "cylinder_length_factor(-3, 5e4)             | L_over_d > 0",
+        "drag_force(1.2, -1 m^2, 500 Pa)             | A >= 0 m^2",
+        "lift_force(0.8, 2 m^2, -500 Pa)             | q >= 0 Pa",
+        "water.rho(-300 degC)                        | T > 0 K"})
     void outsideTheDomainIsAnErrorAndUnknown(String call, String domain) {
         assertOutsideDomain(call.strip(), domain.strip());
     }
