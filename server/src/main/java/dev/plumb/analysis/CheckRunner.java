@@ -7,28 +7,31 @@ import dev.plumb.syntax.Statement;
 import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.Unit;
 import dev.plumb.units.UnitRegistry;
-import dev.plumb.units.UnitResult;
 import java.util.ArrayList;
 import java.util.List;
 
 /** Evaluates a {@code check}: every comparison of the chain must hold. */
 final class CheckRunner {
     private final Scope scope;
+    private final Environment env;
     private final Reporter reporter;
     private final String text;
     private final Settings settings;
+    private final UnitRegistry units;
 
-    CheckRunner(Scope scope, Reporter reporter, String text, Settings settings) {
+    CheckRunner(Scope scope, Environment env, Reporter reporter, String text, Settings settings, UnitRegistry units) {
         this.scope = scope;
+        this.env = env;
         this.reporter = reporter;
         this.text = text;
         this.settings = settings;
+        this.units = units;
     }
 
     Row.CheckRow run(Statement.Check c) {
         String source = Shown.source(text, new dev.plumb.diagnostics.Span(c.operands().get(0).span().start(),
             c.operands().get(c.operands().size() - 1).span().end()));
-        Evaluator evaluator = new Evaluator(scope, reporter, text, UnitRegistry.standard());
+        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units);
         List<Value> values = new ArrayList<>();
         for (Expr e : c.operands()) values.add(evaluator.eval(e));
         if (values.stream().anyMatch(v -> !v.known())) {
@@ -50,7 +53,7 @@ final class CheckRunner {
                     c.note());
             }
         }
-        Unit unit = commonUnit(c.operands(), values.get(0));
+        Unit unit = commonUnit(c.operands(), values.get(0), evaluator);
         List<String> failures = new ArrayList<>();
         int digits = settings.significantFigures();
         for (int i = 0; i < c.comparators().size(); i++) {
@@ -78,16 +81,13 @@ final class CheckRunner {
     }
 
     /** The unit both sides are shown in: the one a side was written or defined in, else SI. */
-    private Unit commonUnit(List<Expr> operands, Value first) {
+    private Unit commonUnit(List<Expr> operands, Value first, Evaluator evaluator) {
         for (Expr e : operands) {
-            Expr inner = e instanceof Expr.Unary u ? u.operand() : e;
-            if (inner instanceof Expr.Quantity q && q.unit() != null
-                && UnitRegistry.standard().resolve(q.unit().text()) instanceof UnitResult.Ok ok) {
-                return ok.unit();
-            }
+            Unit written = DisplayChoice.written(e, units);
+            if (written != null) return written;
         }
         for (Expr e : operands) {
-            if (e instanceof Expr.Reference r && scope.lookup(r.name()) instanceof Binding.ValueBinding v
+            if (e instanceof Expr.Reference r && evaluator.lookup(r.name()) instanceof Binding.ValueBinding v
                 && v.display() != null) {
                 return v.display();
             }

@@ -19,12 +19,12 @@ import java.util.function.BiFunction;
  * the value), the boundary-layer regime, and which piece of a piecewise formula applies.
  */
 final class CorrelationCall {
-    private final Scope caller;
+    private final Evaluator caller;
     private final Reporter reporter;
     private final BiFunction<Expr, Value, String> operand;
     private final UnitRegistry units;
 
-    CorrelationCall(Scope caller, Reporter reporter, BiFunction<Expr, Value, String> operand, UnitRegistry units) {
+    CorrelationCall(Evaluator caller, Reporter reporter, BiFunction<Expr, Value, String> operand, UnitRegistry units) {
         this.caller = caller;
         this.reporter = reporter;
         this.operand = operand;
@@ -39,7 +39,7 @@ final class CorrelationCall {
         bareAngles(c, name, def.params(), args);
         Map<String, Value> params = RangeCheck.bind(def.params(), args);
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
-        Evaluator inside = new Evaluator(b.scope(), params, inner, b.scope().text(), units);
+        Evaluator inside = new Evaluator(b.scope(), caller.environmentOf(b.scope()), params, inner, b.scope().text(), units);
         Set<String> names = params.keySet();
         String outside = outsideDomain(c, name, def.domain(), inside, b.scope().text(), names);
         if (outside != null) {
@@ -82,8 +82,8 @@ final class CorrelationCall {
         }
         String param = def.param().name().text();
         Map<String, Value> params = Map.of(param, x);
-        Evaluator inside = new Evaluator(t.scope(), params, reporter.inCorrelation(t.name(), c.span(), t.file()),
-            t.scope().text(), units);
+        Evaluator inside = new Evaluator(t.scope(), caller.environmentOf(t.scope()), params,
+            reporter.inCorrelation(t.name(), c.span(), t.file()), t.scope().text(), units);
         String outside = outsideDomain(c, t.name(), def.domain(), inside, t.scope().text(), params.keySet());
         if (outside != null) {
             reporter.call(new Analysis.CallSite(c.callee().span(), t.name(), param + " = "
@@ -217,8 +217,8 @@ final class CorrelationCall {
         }
         double re = params.get(reName).si();
         // Order: the document's own Re_crit, then the settings', then the library's.
-        Value critical = caller.fromLibrary("Re_crit") && caller.criticalReynolds() != null
-            ? Value.number(caller.criticalReynolds()) : crit.value();
+        Value critical = caller.fromLibrary("Re_crit") && caller.scope().criticalReynolds() != null
+            ? Value.number(caller.scope().criticalReynolds()) : crit.value();
         double reCrit = critical.si();
         boolean laminar = def.regime().text().equals("laminar");
         if (laminar ? re <= reCrit : re >= reCrit) return;
@@ -272,12 +272,11 @@ final class CorrelationCall {
         return String.join(", ", names);
     }
 
-    private static List<Binding> familyMembers(Binding self) {
+    private List<Binding> familyMembers(Binding self) {
         String family = Stdlib.familyOf(self);
-        Stdlib library = Stdlib.ready();
-        if (family == null || library == null) return List.of();
+        if (family == null) return List.of();
         List<Binding> out = new ArrayList<>();
-        for (Binding b : library.family(family)) {
+        for (Binding b : caller.scope().family(family)) {
             if (!nameOf(b).equals(nameOf(self))) out.add(b);
         }
         return out;

@@ -22,6 +22,8 @@ import java.util.Map;
  */
 final class Evaluator {
     private final Scope scope;
+    /** The values of the scope's own definitions (Environment.NONE: they are final in the scope). */
+    private final Environment env;
     private final Map<String, Value> locals;
     private final Reporter reporter;
     private final String text;
@@ -33,7 +35,12 @@ final class Evaluator {
     }
 
     Evaluator(Scope scope, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
+        this(scope, Environment.NONE, locals, reporter, text, units);
+    }
+
+    Evaluator(Scope scope, Environment env, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
         this.scope = scope;
+        this.env = env;
         this.locals = locals;
         this.reporter = reporter;
         this.text = text;
@@ -56,7 +63,31 @@ final class Evaluator {
 
     /** The same evaluation, reporting nothing: to learn what a formula gives without judging it. */
     Evaluator quiet() {
-        return new Evaluator(scope, locals, new Reporter(), text, units);
+        return new Evaluator(scope, env, locals, new Reporter(), text, units);
+    }
+
+    /** What a name stands for here: an own definition's value from the environment, else the scope's binding. */
+    Binding lookup(String name) {
+        Binding own = env.get(name);
+        return own != null ? own : scope.lookup(name);
+    }
+
+    /** True when the name comes from the standard library (not defined or imported here). */
+    boolean fromLibrary(String name) {
+        return env.get(name) == null && scope.fromLibrary(name);
+    }
+
+    Scope scope() {
+        return scope;
+    }
+
+    UnitRegistry units() {
+        return units;
+    }
+
+    /** The environment to evaluate a body defined in {@code where} with: ours when it is our scope. */
+    Environment environmentOf(Scope where) {
+        return env.of(where) ? env : Environment.NONE;
     }
 
     // ---- leaves ----------------------------------------------------------------------
@@ -105,7 +136,7 @@ final class Evaluator {
     private Value reference(Expr.Reference r) {
         Value local = locals.get(r.name());
         if (local != null) return local.known() ? local.noted(BasisRules.reference(r.name(), local)) : local;
-        Binding b = scope.lookup(r.name());
+        Binding b = lookup(r.name());
         if (b instanceof Binding.ValueBinding v) {
             return v.value().known() ? v.value().noted(BasisRules.reference(r.name(), v.value())) : v.value();
         }
@@ -121,7 +152,7 @@ final class Evaluator {
 
     private Value call(Expr.Call c) {
         String name = c.callee().text();
-        Binding b = locals.containsKey(name) ? null : scope.lookup(name);
+        Binding b = locals.containsKey(name) ? null : lookup(name);
         if (locals.containsKey(name) || b instanceof Binding.ValueBinding) {
             // A name whose statement could not be read (a broken table, say) is already reported.
             if (b instanceof Binding.ValueBinding v && !v.value().known() && !locals.containsKey(name)) return Value.UNKNOWN;
@@ -145,13 +176,13 @@ final class Evaluator {
             String signature = name + "(" + String.join(", ", params.stream().map(p -> p.name().text()).toList()) + ")";
             if (!arity(c, params.size(), params.size(), signature)) return Value.UNKNOWN;
             if (args.stream().anyMatch(v -> !v.known())) return Value.UNKNOWN;
-            return new CorrelationCall(scope, reporter, this::operand, units).correlation(c, cb, args);
+            return new CorrelationCall(this, reporter, this::operand, units).correlation(c, cb, args);
         }
         if (b instanceof Binding.TableBinding tb) {
             String signature = name + "(" + tb.def().param().name().text() + ")";
             if (!arity(c, 1, 1, signature)) return Value.UNKNOWN;
             if (!args.get(0).known()) return Value.UNKNOWN;
-            return new CorrelationCall(scope, reporter, this::operand, units).table(c, tb, args);
+            return new CorrelationCall(this, reporter, this::operand, units).table(c, tb, args);
         }
         Binding.FunctionBinding f = (Binding.FunctionBinding) b;
         if (f.circular()) return Value.UNKNOWN;
@@ -163,7 +194,7 @@ final class Evaluator {
         for (int i = 0; i < params.size(); i++) bound.put(params.get(i).text(), args.get(i));
         Reporter inner = reporter.inCall(name, c.span(), f.file());
         String bodyText = f.scope() == scope ? text : f.scope().text();
-        return new Evaluator(f.scope(), bound, inner, bodyText, units).eval(f.def().body());
+        return new Evaluator(f.scope(), environmentOf(f.scope()), bound, inner, bodyText, units).eval(f.def().body());
     }
 
     private boolean arity(Expr.Call c, int min, int max, String signature) {
@@ -296,7 +327,7 @@ final class Evaluator {
         if (e instanceof Expr.Quantity) return source;
         Unit unit = null;
         if (e instanceof Expr.Reference r && !locals.containsKey(r.name())
-            && scope.lookup(r.name()) instanceof Binding.ValueBinding vb) {
+            && lookup(r.name()) instanceof Binding.ValueBinding vb) {
             unit = vb.display();
         }
         return source + " = " + Shown.value(v, unit, 4);

@@ -7,8 +7,6 @@ import dev.plumb.units.Dimension;
 import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.QuantityFormat;
 import dev.plumb.units.Unit;
-import dev.plumb.units.UnitRegistry;
-import dev.plumb.units.UnitResult;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -84,7 +82,9 @@ final class RangeCheck {
             int arg = argumentLeft ? i : i + 1;
             int limit = argumentLeft ? i + 1 : i;
             boolean upper = argumentLeft == (op == Comparator.LT || op == Comparator.LE);
-            Unit unit = unitOf(bound.operands().get(limit), values.get(limit).dimension());
+            // The limit is shown in the unit it is written in, else in SI (the same rule as for values).
+            Unit written = DisplayChoice.written(bound.operands().get(limit), inside.units());
+            Unit unit = written != null ? written : DisplayUnits.defaultFor(values.get(limit).dimension());
             String argument = Shown.source(definingText, bound.operands().get(arg).span());
             return new Breach(Shown.source(definingText, bound.span()),
                 argument + " = " + Shown.value(values.get(arg), unit, 4),
@@ -128,15 +128,6 @@ final class RangeCheck {
         }
         return r <= 0.5 ? QuantityFormat.number(1 / r, 3) + " times smaller than " + which
             : QuantityFormat.number((1 - r) * 100, 2) + "% below " + which;
-    }
-
-    private static Unit unitOf(Expr limit, Dimension d) {
-        Expr inner = limit instanceof Expr.Unary u ? u.operand() : limit;
-        if (inner instanceof Expr.Quantity q && q.unit() != null
-            && UnitRegistry.standard().resolve(q.unit().text()) instanceof UnitResult.Ok ok) {
-            return ok.unit();
-        }
-        return DisplayUnits.defaultFor(d);
     }
 
     static boolean mentions(Expr e, Set<String> params) {

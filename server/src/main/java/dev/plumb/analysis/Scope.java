@@ -11,18 +11,19 @@ import java.util.Map;
 public final class Scope {
     private final Map<String, Binding> names = new HashMap<>();
     private final String text;
-    /** The standard library (or, while it loads, its files read so before); null for none. */
-    private final Scope library;
-    /** A critical Reynolds number set for this analysis (settings), used where the library's would be. */
-    private Double criticalReynolds;
+    /** The standard library (or, while it loads, its files read so far). */
+    private final Library library;
+    /** A critical Reynolds number set for this analysis (settings), used where the library's would be; null for none. */
+    private final Double criticalReynolds;
 
     Scope(String text) {
-        this(text, null);
+        this(text, Library.NONE, null);
     }
 
-    Scope(String text, Scope library) {
+    Scope(String text, Library library, Double criticalReynolds) {
         this.text = text;
         this.library = library;
+        this.criticalReynolds = criticalReynolds;
     }
 
     /** The source text of the document this scope belongs to (for messages about its functions). */
@@ -34,12 +35,13 @@ public final class Scope {
     public Binding lookup(String name) {
         Binding own = names.get(name);
         if (own != null) return own;
-        Binding fromLibrary = library == null ? null : library.lookup(name);
+        Binding fromLibrary = library.names() == null ? null : library.names().lookup(name);
         return fromLibrary != null ? fromLibrary : Builtins.lookup(name);
     }
 
-    void setCriticalReynolds(Double value) {
-        this.criticalReynolds = value;
+    /** The library's correlations and tables of a family (none while the library loads). */
+    java.util.List<Binding> family(String family) {
+        return library.families().apply(family);
     }
 
     Double criticalReynolds() {
@@ -48,7 +50,7 @@ public final class Scope {
 
     /** True when the name comes from the standard library (not defined or imported here). */
     boolean fromLibrary(String name) {
-        return !names.containsKey(name) && library != null && library.lookup(name) != null;
+        return !names.containsKey(name) && library.names() != null && library.names().lookup(name) != null;
     }
 
     void put(String name, Binding binding) {
@@ -62,7 +64,7 @@ public final class Scope {
     /** Every name a document can use, for suggestions. */
     public Collection<String> visibleNames() {
         var all = new java.util.TreeSet<>(names.keySet());
-        if (library != null) all.addAll(library.visibleNames());
+        if (library.names() != null) all.addAll(library.names().visibleNames());
         all.addAll(Builtins.names());
         return all;
     }

@@ -15,33 +15,36 @@ import java.util.function.DoubleUnaryOperator;
 
 /**
  * Solves one {@code seek}: NAME is given trial values; the definitions that depend on it (and
- * that the equation uses) are re-evaluated for each trial, quietly; the residual LHS − RHS goes
- * to {@link RootFinder}. At the root everything is evaluated once more for real, so range
- * warnings speak of the solution, never of an intermediate trial, and errors in the equation
- * are reported once.
+ * that the equation uses) are re-evaluated for each trial through the document's {@link Plan},
+ * quietly; the residual LHS − RHS goes to {@link RootFinder}. At the root the equation is
+ * evaluated once more for real, so range warnings speak of the solution, never of an
+ * intermediate trial, and errors in the equation are reported once.
  */
 final class SeekRunner {
     /** What solving gave: the value (UNKNOWN on failure) and, when solved, how. */
     record Outcome(Value value, Solution solution) {
     }
 
+    private final Plan plan;
     private final Scope scope;
+    /** The values computed before the solve: what the trials are evaluated over. */
+    private final Environment env;
     private final Reporter reporter;
     private final String text;
-    private final Path file;
     private final UnitRegistry units;
 
-    SeekRunner(Scope scope, Reporter reporter, String text, Path file, UnitRegistry units) {
+    SeekRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units) {
+        this.plan = plan;
         this.scope = scope;
+        this.env = env;
         this.reporter = reporter;
         this.text = text;
-        this.file = file;
         this.units = units;
     }
 
-    /** @param dependents the definitions that depend on NAME and feed the equation, in evaluation order */
-    Outcome run(Statement.Seek f, List<Statement.Definition> dependents) {
-        Evaluator real = new Evaluator(scope, reporter, text, units);
+    Outcome run(Statement.Seek f) {
+        List<Statement.Definition> dependents = plan.dependentsOf(f.name().text());
+        Evaluator real = evaluator(env, reporter);
         String name = f.name().text();
         Dimension dim;
         DoubleUnaryOperator residual;
@@ -94,7 +97,6 @@ final class SeekRunner {
         }
         if (result.brackets().size() > 1) reportMultiple(f, result, dim, unit);
         Value root = Value.of(result.root(), dim);
-        bind(name, root, unit);
         List<Solution.Step> steps = new ArrayList<>();
         for (RootFinder.Iterate it : result.record()) {
             steps.add(new Solution.Step(it.n(), it.x(), it.residual(), it.low(), it.high()));
@@ -112,23 +114,24 @@ final class SeekRunner {
         };
     }
 
-    /** Binds NAME, re-evaluates its dependents, and evaluates both sides of the equation. */
+    /** Evaluates NAME's dependents at a trial value, then both sides of the equation. */
     private Value[] evaluateAt(String name, Value x, List<Statement.Definition> dependents, Reporter r, Statement.Seek f) {
-        bind(name, x, null);
-        Evaluator e = new Evaluator(scope, r, text, units);
-        for (Statement.Definition d : dependents) bind(d.name().text(), e.eval(d.expr()), null);
+        Environment trial = plan.evaluate(env, java.util.Map.of(name, x), dependents, r);
+        Evaluator e = evaluator(trial, r);
         Value lhs = e.eval(f.lhs());
         Value rhs = e.eval(f.rhs());
         return lhs.known() && rhs.known() ? new Value[] {lhs, rhs} : null;
     }
 
-    /** Once, for real, at the root (or the bracket's middle when there is none): reports the equation's own findings. */
+    private Evaluator evaluator(Environment at, Reporter r) {
+        return new Evaluator(scope, at, java.util.Map.of(), r, text, units);
+    }
+
+    /** Once, for real, at the root (or the bracket's low end when there is none): reports the equation's own findings. */
     private Value[] finalSides(String name, Dimension dim, double at, List<Statement.Definition> dependents,
                                Statement.Seek f) {
-        bind(name, Value.of(at, dim), null);
-        Evaluator quiet = new Evaluator(scope, new Reporter(), text, units);
-        for (Statement.Definition d : dependents) bind(d.name().text(), quiet.eval(d.expr()), null);
-        Evaluator real = new Evaluator(scope, reporter, text, units);
+        Environment trial = plan.evaluate(env, java.util.Map.of(name, Value.of(at, dim)), dependents, new Reporter());
+        Evaluator real = evaluator(trial, reporter);
         Value lhs = real.eval(f.lhs());
         Value rhs = real.eval(f.rhs());
         if (!lhs.known() || !rhs.known()) return null;
@@ -141,12 +144,7 @@ final class SeekRunner {
         return new Value[] {lhs, rhs};
     }
 
-    private void bind(String name, Value v, Unit unit) {
-        scope.put(name, new Binding.ValueBinding(file, Span.NONE, v, unit, null, false, null));
-    }
-
-    private Outcome failed(String name) {
-        bind(name, Value.UNKNOWN, null);
+    private static Outcome failed(String name) {
         return new Outcome(Value.UNKNOWN, null);
     }
 
@@ -171,18 +169,13 @@ final class SeekRunner {
             + show(r.root(), dim, unit) + ", is taken: narrow the bracket to choose another");
     }
 
+    /** The unit trial values are shown in: the `in` unit, else the bracket's (or start value's). */
     private Unit unitOf(Statement.Seek f, Dimension dim) {
         if (f.displayUnit() != null && units.resolve(f.displayUnit().text()) instanceof dev.plumb.units.UnitResult.Ok ok
             && ok.unit().dimension().equals(dim)) {
             return ok.unit();
         }
-        Expr end = f.low() != null ? f.low() : f.start();
-        if (end instanceof Expr.Unary u) end = u.operand();
-        if (end instanceof Expr.Quantity q && q.unit() != null
-            && units.resolve(q.unit().text()) instanceof dev.plumb.units.UnitResult.Ok ok) {
-            return ok.unit();
-        }
-        return DisplayUnits.defaultFor(dim);
+        return DisplayChoice.writtenOrSi(f.low() != null ? f.low() : f.start(), dim, units);
     }
 
     private static String show(double si, Dimension dim, Unit unit) {

@@ -34,17 +34,13 @@ public final class Stdlib {
         static final Stdlib INSTANCE = load();
     }
 
-    /** Set once the library has loaded; calls made while it loads see null (no alternatives offered). */
-    private static volatile Stdlib ready;
-
     public static Stdlib get() {
-        Stdlib library = Holder.INSTANCE;
-        ready = library;
-        return library;
+        return Holder.INSTANCE;
     }
 
-    static Stdlib ready() {
-        return ready;
+    /** The library as every document sees it: its names and its families. */
+    Library asLibrary() {
+        return new Library(scope, this::family);
     }
 
     /** The library's names, as the parent scope of every document. */
@@ -122,12 +118,12 @@ public final class Stdlib {
 
     private static Stdlib load() {
         long start = System.nanoTime();
-        Scope all = new Scope("", null);
+        Scope all = new Scope("");
         List<Analysis> files = new ArrayList<>();
         Sources resources = new ResourceSources();
         for (String name : index()) {
             Path path = ROOT.resolve(name);
-            Workspace loader = new Workspace(resources, Settings.DEFAULT, all);
+            Workspace loader = new Workspace(resources, Settings.DEFAULT, Library.loading(all));
             Analysis a = loader.analyze(path);
             files.add(a);
             a.scope().all().forEach((key, binding) -> {

@@ -19,31 +19,31 @@ public final class Workspace {
     private final Settings settings;
     private final Map<Path, Imported> cache = new ConcurrentHashMap<>();
     /** The names every document sees besides its own and built-ins: the standard library. */
-    private final Scope library;
+    private final Library library;
     /** Used files' analyses kept from earlier workspaces (an editor's), or null. */
     private final ImportMemory memory;
 
     public Workspace(Sources sources, Settings settings) {
-        this(sources, settings, Stdlib.get().scope(), null);
+        this(sources, settings, Stdlib.get().asLibrary(), null);
     }
 
     /** A workspace that takes used files' analyses from {@code memory} while they still hold, and adds to it. */
     public Workspace(Sources sources, Settings settings, ImportMemory memory) {
-        this(sources, settings, Stdlib.get().scope(), memory);
+        this(sources, settings, Stdlib.get().asLibrary(), memory);
     }
 
-    Workspace(Sources sources, Settings settings, Scope library) {
+    Workspace(Sources sources, Settings settings, Library library) {
         this(sources, settings, library, null);
     }
 
-    private Workspace(Sources sources, Settings settings, Scope library, ImportMemory memory) {
+    private Workspace(Sources sources, Settings settings, Library library, ImportMemory memory) {
         this.sources = sources;
         this.settings = settings;
         this.library = library;
         this.memory = memory;
     }
 
-    Scope library() {
+    Library library() {
         return library;
     }
 
@@ -66,15 +66,18 @@ public final class Workspace {
     /** Analyses a file on disk (or wherever the sources read it from). */
     public Analysis analyze(Path file) {
         Path key = file.toAbsolutePath().normalize();
-        Imported result = analyzeImport(key, List.of());
+        Imported result = analyzeImport(key, List.of(), NEVER);
         if (result.analysis() != null) return result.analysis();
         return failure(key, "", Code.FILE_UNREADABLE, "cannot read this file: " + result.problem(), 0);
     }
 
     /** Analyses text that is not (or not yet) saved under its path, e.g. an editor buffer. */
     public Analysis analyzeText(Path file, String text) {
-        return guarded(file.toAbsolutePath().normalize(), text, null, List.of());
+        return guarded(file.toAbsolutePath().normalize(), text, null, List.of(), NEVER);
     }
+
+    /** For runs nobody abandons. */
+    private static final java.util.function.BooleanSupplier NEVER = () -> false;
 
     /**
      * As {@link #analyzeText(Path, String)} for an editor: reparses from {@code earlier} (an
@@ -83,18 +86,15 @@ public final class Workspace {
      * null.
      */
     public Analysis analyzeText(Path file, String text, ParsedSource earlier, java.util.function.BooleanSupplier superseded) {
-        this.superseded = superseded;
         try {
-            return guarded(file.toAbsolutePath().normalize(), text, earlier, List.of());
+            return guarded(file.toAbsolutePath().normalize(), text, earlier, List.of(), superseded);
         } catch (Superseded e) {
             return null;
         }
     }
 
-    /** Asked between statements; a no-op unless a caller gave a check. */
-    private volatile java.util.function.BooleanSupplier superseded = () -> false;
-
-    void checkSuperseded() {
+    /** Asked between statements: gives up on a run whose caller no longer wants it. */
+    static void checkSuperseded(java.util.function.BooleanSupplier superseded) {
         if (superseded.getAsBoolean()) throw new Superseded();
     }
 
@@ -105,7 +105,8 @@ public final class Workspace {
         }
     }
 
-    Imported analyzeImport(Path file, List<Path> chain) {
+    /** @param superseded the check of the run that asked (a used file's run is given up with it) */
+    Imported analyzeImport(Path file, List<Path> chain, java.util.function.BooleanSupplier superseded) {
         Imported cached = cache.get(file);
         if (cached != null) return cached;
         Map<Path, Analysis> kept = memory == null ? null : memory.recall(file, sources, settings);
@@ -117,7 +118,7 @@ public final class Workspace {
         Sources.Loaded loaded = sources.load(file);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
-            fresh = new Imported(guarded(file, t.text(), null, chain), null);
+            fresh = new Imported(guarded(file, t.text(), null, chain, superseded), null);
         } else if (loaded instanceof Sources.NotText n) {
             fresh = new Imported(failure(file, "", Code.FILE_NOT_TEXT,
                 "this is not a calc file: " + n.reason() + " (first bad byte at offset " + n.offset() + ")", 0), null);
@@ -174,10 +175,12 @@ public final class Workspace {
         return null;
     }
 
-    private Analysis guarded(Path file, String text, ParsedSource earlier, List<Path> chain) {
+    private Analysis guarded(Path file, String text, ParsedSource earlier, List<Path> chain,
+                             java.util.function.BooleanSupplier superseded) {
         return DeepStack.call(() -> {
             try {
-                return new FileAnalyzer(this, file, text, earlier, chain, settings).run();
+                return new Analyzer(this, file, text, earlier, chain, settings, dev.plumb.units.UnitRegistry.standard(),
+                    superseded).run();
             } catch (Superseded e) {
                 throw e;
             } catch (StackOverflowError e) {

@@ -7,9 +7,9 @@ package dev.plumb.units;
 final class BaseUnitSymbols {
 
     /** Base-unit symbols by base index (length, mass, time, current, temperature, amount, luminous). */
-    private static final String[] SYMBOLS = {"m", "kg", "s", "A", "K", "mol", "cd"};
+    private static final java.util.List<String> SYMBOLS = java.util.List.of("m", "kg", "s", "A", "K", "mol", "cd");
     /** Writing order of the base indices: kg before m, then the rest as SI lists them. */
-    private static final int[] ORDER = {1, 0, 2, 3, 4, 5, 6};
+    private static final java.util.List<Integer> ORDER = java.util.List.of(1, 0, 2, 3, 4, 5, 6);
 
     private BaseUnitSymbols() {
     }
@@ -36,7 +36,7 @@ final class BaseUnitSymbols {
             if (out.length() > 0) {
                 out.append('·');
             }
-            out.append(SYMBOLS[i]);
+            out.append(SYMBOLS.get(i));
             if (e != 1) {
                 out.append(Superscripts.of(e));
             }

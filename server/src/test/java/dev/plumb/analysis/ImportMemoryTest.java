@@ -50,8 +50,8 @@ class ImportMemoryTest {
 
     @Test
     void anUnchangedUsedFileIsAnalysedOnce() {
-        Analysis first = kept().analyzeImport(air, List.of()).analysis();
-        assertSame(first, kept().analyzeImport(air, List.of()).analysis());
+        Analysis first = kept().analyzeImport(air, List.of(), () -> false).analysis();
+        assertSame(first, kept().analyzeImport(air, List.of(), () -> false).analysis());
         Analysis viaMain = kept().analyze(main);
         assertEquals(fresh(main).rows(), viaMain.rows());
         assertEquals(fresh(main).diagnostics(), viaMain.diagnostics());
@@ -59,29 +59,29 @@ class ImportMemoryTest {
 
     @Test
     void aChangeInTheUsedFileOrInAFileItUsesIsSeen() throws IOException {
-        Analysis first = kept().analyzeImport(air, List.of()).analysis();
+        Analysis first = kept().analyzeImport(air, List.of(), () -> false).analysis();
         write("gas.plumb", "input R_air = 300 J/(kg*K)\n");
-        Analysis second = kept().analyzeImport(air, List.of()).analysis();
+        Analysis second = kept().analyzeImport(air, List.of(), () -> false).analysis();
         assertNotSame(first, second);
         assertEquals(fresh(main).rows(), kept().analyze(main).rows());
         write("air.plumb", "use \"gas.plumb\"\ninput T = 300 K\nrho(p) = p / (R_air * T)\n");
-        assertNotSame(second, kept().analyzeImport(air, List.of()).analysis());
+        assertNotSame(second, kept().analyzeImport(air, List.of(), () -> false).analysis());
         assertEquals(fresh(main).rows(), kept().analyze(main).rows());
     }
 
     @Test
     void otherSettingsMakeAFreshAnalysis() {
-        Analysis first = kept().analyzeImport(air, List.of()).analysis();
-        Analysis other = new Workspace(new FileSources(), new Settings(6, 1e-6), memory).analyzeImport(air, List.of()).analysis();
+        Analysis first = kept().analyzeImport(air, List.of(), () -> false).analysis();
+        Analysis other = new Workspace(new FileSources(), new Settings(6, 1e-6), memory).analyzeImport(air, List.of(), () -> false).analysis();
         assertNotSame(first, other);
     }
 
     @Test
     void filesInACircleAreNeverKept() throws IOException {
         write("gas.plumb", "use \"air.plumb\"\ninput R_air = 287.05 J/(kg*K)\n");
-        Analysis first = kept().analyzeImport(air, List.of()).analysis();
+        Analysis first = kept().analyzeImport(air, List.of(), () -> false).analysis();
         assertEquals(true, first.diagnostics().stream().anyMatch(d -> d.code() == Code.USE_CYCLE), first.diagnostics().toString());
-        assertNotSame(first, kept().analyzeImport(air, List.of()).analysis());
+        assertNotSame(first, kept().analyzeImport(air, List.of(), () -> false).analysis());
         // main uses air, which is in a circle with gas: reported the same as without kept analyses.
         assertEquals(fresh(main).diagnostics(), kept().analyze(main).diagnostics());
     }

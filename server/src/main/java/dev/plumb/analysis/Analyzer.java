@@ -1,0 +1,113 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.syntax.ParsedSource;
+import dev.plumb.syntax.SourceParser;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.UnitRegistry;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Analyses one document by wiring the passes together, each returning an immutable value:
+ * parse → {@link ImportPass} → {@link DeclarationPass} → {@link ResolutionPass} → {@link Planner}
+ * (the {@link Plan}) → {@link EvaluationPass} → checks and lints → the {@link Analysis}. Every
+ * pass reports to one {@link Reporter}. One instance per run.
+ */
+final class Analyzer {
+    private final Workspace workspace;
+    private final Path file;
+    private final String text;
+    /** An earlier parse of this document, to reparse from; null for none. */
+    private final ParsedSource earlier;
+    private final List<Path> chain;
+    private final Settings settings;
+    private final UnitRegistry units;
+    /** Asked between statements: true once nobody wants this run's result. */
+    private final java.util.function.BooleanSupplier superseded;
+
+    Analyzer(Workspace workspace, Path file, String text, ParsedSource earlier, List<Path> chain, Settings settings,
+             UnitRegistry units, java.util.function.BooleanSupplier superseded) {
+        this.superseded = superseded;
+        this.workspace = workspace;
+        this.file = file;
+        this.text = text;
+        this.earlier = earlier;
+        this.chain = chain;
+        this.settings = settings;
+        this.units = units;
+    }
+
+    Analysis run() {
+        Reporter reporter = new Reporter();
+        ParsedSource parsed = earlier == null ? SourceParser.parse(text) : SourceParser.reparse(earlier, text);
+        parsed.diagnostics().forEach(reporter::add);
+        List<Statement> statements = parsed.statements();
+
+        Scope scope = new Scope(text, workspace.library(), settings.criticalReynolds());
+        ImportPass.Imports imports = new ImportPass(workspace, file, chain, reporter, superseded).run(statements);
+        imports.names().forEach(scope::put);
+        DeclarationPass.Declarations declared = new DeclarationPass(file, text, scope, reporter, units).run(statements);
+        ResolutionPass.Resolution resolved = new ResolutionPass(scope, declared.own(), reporter, units).run(statements);
+        Plan plan = new Planner(reporter).run(declared.own(), resolved.uses(), new Definitions(file, text, scope, units));
+        bindBlocks(scope, plan);
+
+        EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, settings, units, superseded)
+            .run(declared.duplicates());
+        Map<Statement, Row> rows = new java.util.IdentityHashMap<>(evaluated.rows());
+        for (Statement s : statements) {
+            if (s instanceof Statement.Check c) {
+                rows.put(c, new CheckRunner(scope, evaluated.values(), reporter, text, settings, units).run(c));
+            }
+        }
+        UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
+
+        // The document's own values join its names: what hover, completion and importing files read.
+        for (String name : plan.order()) {
+            Binding.ValueBinding v = evaluated.values().get(name);
+            if (v != null) scope.put(name, v);
+        }
+        return new Analysis(file, text, parsed, headers(statements), rowsInOrder(statements, rows),
+            sorted(reporter.all()), scope, resolved.importedUses(), imports.files(), resolved.references(), reporter.calls());
+    }
+
+    /** Functions and correlations join the scope once the plan knows which of them lie on a circle. */
+    private void bindBlocks(Scope scope, Plan plan) {
+        for (var entry : plan.own().entrySet()) {
+            boolean circular = plan.inCycle().contains(entry.getKey());
+            if (entry.getValue() instanceof Statement.Function f) {
+                scope.put(entry.getKey(), new Binding.FunctionBinding(file, f.name().span(), f, scope, circular));
+            } else if (entry.getValue() instanceof Statement.Correlation c) {
+                scope.put(entry.getKey(), new Binding.CorrelationBinding(file, c.name().span(), c, scope, circular));
+            }
+        }
+    }
+
+    private static Map<String, String> headers(List<Statement> statements) {
+        Map<String, String> headers = new LinkedHashMap<>();
+        for (Statement s : statements) {
+            if (s instanceof Statement.Header h) headers.putIfAbsent(h.key(), h.text());
+        }
+        return headers;
+    }
+
+    private static List<Row> rowsInOrder(List<Statement> statements, Map<Statement, Row> rows) {
+        List<Row> out = new ArrayList<>();
+        for (Statement s : statements) {
+            if (s instanceof Statement.Section sec) out.add(new Row.SectionRow(sec.span(), sec.title()));
+            else if (s instanceof Statement.Narrative n) out.add(new Row.NarrativeRow(n.span(), n.text()));
+            else if (rows.containsKey(s)) out.add(rows.get(s));
+        }
+        return out;
+    }
+
+    private static List<Diagnostic> sorted(List<Diagnostic> all) {
+        List<Diagnostic> out = new ArrayList<>(all);
+        out.sort(Comparator.comparingInt((Diagnostic d) -> d.span().start()).thenComparing(d -> d.code().id()));
+        return out;
+    }
+}

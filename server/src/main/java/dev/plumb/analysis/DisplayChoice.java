@@ -1,0 +1,33 @@
+package dev.plumb.analysis;
+
+import dev.plumb.syntax.Expr;
+import dev.plumb.units.Dimension;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.Unit;
+import dev.plumb.units.UnitRegistry;
+import dev.plumb.units.UnitResult;
+
+/**
+ * Which unit a value is shown in when its statement does not say (`in UNIT` does): the unit it
+ * was written in when it is a single quantity (`-3 ft` shows `-3 ft`), else the named SI unit of
+ * its dimension. One rule for definitions, solved values and the two sides of a check.
+ */
+final class DisplayChoice {
+    private DisplayChoice() {
+    }
+
+    /** The unit of a lone quantity, possibly negated ({@code 12 ft}, {@code -3 ft}); null for anything else. */
+    static Unit written(Expr e, UnitRegistry units) {
+        if (e instanceof Expr.Unary u) e = u.operand();
+        if (e instanceof Expr.Quantity q && q.unit() != null && units.resolve(q.unit().text()) instanceof UnitResult.Ok ok) {
+            return ok.unit();
+        }
+        return null;
+    }
+
+    /** The written unit of {@code e} when it has the dimension, else the SI unit of the dimension. */
+    static Unit writtenOrSi(Expr e, Dimension dimension, UnitRegistry units) {
+        Unit u = e == null ? null : written(e, units);
+        return u != null && u.dimension().equals(dimension) ? u : DisplayUnits.defaultFor(dimension);
+    }
+}

@@ -1,0 +1,107 @@
+package dev.plumb.analysis;
+
+import dev.plumb.syntax.Ident;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.UnitRegistry;
+import java.util.IdentityHashMap;
+import java.util.Map;
+
+/**
+ * The fifth pass, the real run: evaluates the plan in order, each definition once, each solve
+ * statement by its {@link SeekRunner}, and makes the result row of every statement that defines
+ * a name. What it returns is immutable.
+ *
+ * @see Plan#evaluate the same evaluation, for many runs
+ */
+final class EvaluationPass {
+    /** The document's own values, and the row of each statement that defines a name (by identity). */
+    record Evaluated(Environment values, Map<Statement, Row> rows) {
+        Evaluated {
+            IdentityHashMap<Statement, Row> copy = new IdentityHashMap<>(rows);
+            rows = java.util.Collections.unmodifiableMap(copy);
+        }
+    }
+
+    private final Plan plan;
+    private final Scope scope;
+    private final String text;
+    private final Reporter reporter;
+    private final Settings settings;
+    private final UnitRegistry units;
+    private final java.util.function.BooleanSupplier superseded;
+    private final Map<Statement, Row> rows = new IdentityHashMap<>();
+
+    EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, Settings settings, UnitRegistry units,
+                   java.util.function.BooleanSupplier superseded) {
+        this.plan = plan;
+        this.scope = scope;
+        this.text = text;
+        this.reporter = reporter;
+        this.settings = settings;
+        this.units = units;
+        this.superseded = superseded;
+    }
+
+    /** @param duplicates statements defining a name a second time: evaluated for their findings, bound to nothing */
+    Evaluated run(Iterable<Statement> duplicates) {
+        Environment.Builder values = new Environment.Builder(scope);
+        for (String name : plan.order()) {
+            Workspace.checkSuperseded(superseded);
+            Statement s = plan.own().get(name);
+            Binding.ValueBinding bound = evaluate(s, values.now(), plan.inCycle().contains(name));
+            if (bound != null) values.put(name, bound);
+        }
+        Environment done = values.build();
+        for (Statement s : duplicates) evaluate(s, done, false);
+        return new Evaluated(done, rows);
+    }
+
+    /** Makes the statement's row; returns the binding of the value it defines, or null when it defines none. */
+    private Binding.ValueBinding evaluate(Statement s, Environment env, boolean inCycle) {
+        Definitions definitions = plan.definitions();
+        if (s instanceof Statement.Broken b) {
+            rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null,
+                null, null, null));
+            return b.name() == null ? null : new Binding.ValueBinding(definitions.bare(Value.UNKNOWN).file(),
+                b.name().span(), Value.UNKNOWN, null, null, false, null);
+        }
+        if (s instanceof Statement.Function f) {
+            String signature = f.name().text() + "(" + String.join(", ", f.params().stream().map(Ident::text).toList()) + ")";
+            rows.put(s, new Row.FunctionRow(f.span(), signature, "function", f.note()));
+            return null;
+        }
+        if (s instanceof Statement.Correlation c) {
+            String signature = c.name().text() + "(" + String.join(", ", c.params().stream().map(p -> p.name().text())
+                .toList()) + ")";
+            rows.put(s, new Row.FunctionRow(c.span(), signature, "correlation", c.title()));
+            new BlockChecks(reporter, units).accuracy(c, scope, text);
+            return null;
+        }
+        if (s instanceof Statement.Table t) {
+            String signature = t.name().text() + "(" + t.param().name().text() + ")";
+            rows.put(s, new Row.FunctionRow(t.span(), signature, "table", t.title()));
+            return null;
+        }
+        if (s instanceof Statement.Seek f) return seek(f, env, inCycle);
+        if (!(s instanceof Statement.Definition d)) return null;
+        Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle);
+        String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
+        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), shown, bound.basis(), d.note(),
+            bound.origin(), null));
+        return bound;
+    }
+
+    private Binding.ValueBinding seek(Statement.Seek f, Environment env, boolean inCycle) {
+        String name = f.name().text();
+        if (inCycle || plan.own().get(name) != f) {
+            rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null));
+            return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
+        }
+        SeekRunner.Outcome outcome = new SeekRunner(plan, scope, env, reporter, text, units).run(f);
+        Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter);
+        String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
+        rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), shown, bound.basis(), f.note(), null,
+            outcome.solution()));
+        return bound;
+    }
+}

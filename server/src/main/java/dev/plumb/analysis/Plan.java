@@ -1,0 +1,53 @@
+package dev.plumb.analysis;
+
+import dev.plumb.syntax.Statement;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * A document compiled for evaluation, immutable: its own definitions in dependency order, those
+ * that lie on a circle, and for each solve statement the definitions re-evaluated with every
+ * trial value. {@link #evaluate} is the one way to evaluate definitions: the real run, a
+ * solver's trials (and later sweeps, cases and samples) all go through it.
+ *
+ * @param order every own name, each after what it uses (circles broken where Plumb had to)
+ * @param inCycle the names on a circle of definitions: their values are unknown
+ * @param seekDependents for each solved name, the definitions that depend on it and feed its
+ *     equation, in evaluation order
+ */
+record Plan(Map<String, Statement> own, List<String> order, Set<String> inCycle,
+            Map<String, List<Statement.Definition>> seekDependents, Definitions definitions) {
+
+    Plan {
+        own = Collections.unmodifiableMap(new LinkedHashMap<>(own));
+        order = List.copyOf(order);
+        inCycle = Set.copyOf(inCycle);
+        Map<String, List<Statement.Definition>> copy = new LinkedHashMap<>();
+        seekDependents.forEach((k, v) -> copy.put(k, List.copyOf(v)));
+        seekDependents = Collections.unmodifiableMap(copy);
+    }
+
+    /**
+     * Evaluates {@code definitions} (in this order) over {@code base}, with {@code overrides} bound
+     * first in place of their definitions; every finding goes to {@code sink}. The result holds the
+     * overrides and the new values over {@code base}, which is left as it was.
+     */
+    Environment evaluate(Environment base, Map<String, Value> overrides, List<Statement.Definition> which,
+                         Reporter sink) {
+        Environment.Builder run = new Environment.Builder(base);
+        overrides.forEach((name, v) -> run.put(name, definitions.bare(v)));
+        for (Statement.Definition d : which) {
+            String name = d.name().text();
+            run.put(name, definitions.evaluate(d, run.now(), sink, inCycle.contains(name)));
+        }
+        return run.build();
+    }
+
+    /** The definitions a solve statement re-evaluates per trial (none for other names). */
+    List<Statement.Definition> dependentsOf(String solved) {
+        return seekDependents.getOrDefault(solved, List.of());
+    }
+}

@@ -1,0 +1,58 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.syntax.Statement;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The fourth pass: orders the own definitions (each after what it uses), places each solve
+ * statement before the definitions it re-evaluates per trial, and reports circular definitions.
+ */
+final class Planner {
+    private final Reporter reporter;
+
+    Planner(Reporter reporter) {
+        this.reporter = reporter;
+    }
+
+    Plan run(Map<String, Statement> own, Map<String, Set<String>> graph, Definitions definitions) {
+        Map<String, Set<String>> uses = new LinkedHashMap<>();
+        graph.forEach((k, v) -> uses.put(k, new LinkedHashSet<>(v)));
+        Map<String, Set<String>> solvedWith = SeekDependents.adjust(own, uses);
+        DependencyOrder.Result order = DependencyOrder.of(uses);
+        Map<String, List<Statement.Definition>> dependents = new LinkedHashMap<>();
+        for (var entry : solvedWith.entrySet()) {
+            List<Statement.Definition> inOrder = new ArrayList<>();
+            for (String n : order.order()) {
+                if (entry.getValue().contains(n) && own.get(n) instanceof Statement.Definition d) inOrder.add(d);
+            }
+            dependents.put(entry.getKey(), inOrder);
+        }
+        return new Plan(own, order.order(), reportCycles(own, order.cycles()), dependents, definitions);
+    }
+
+    private Set<String> reportCycles(Map<String, Statement> own, List<List<String>> cycles) {
+        Set<String> members = new HashSet<>();
+        for (List<String> cycle : cycles) {
+            List<String> loop = new ArrayList<>(cycle);
+            loop.add(cycle.get(0));
+            for (String member : cycle) {
+                members.add(member);
+                String message = cycle.size() == 1
+                    ? "circular definition: " + member + " uses itself; "
+                        + (own.get(member) instanceof Statement.Definition ? "give it a value that does not depend on itself"
+                            : "a function or correlation may not call itself")
+                    : "circular definition: " + String.join(" → ", loop)
+                        + "; one of them must be given a value that does not depend on the others";
+                reporter.report(Code.NAME_CYCLE, DeclarationPass.definedName(own.get(member)).span(), message);
+            }
+        }
+        return members;
+    }
+}

@@ -1,0 +1,141 @@
+package dev.plumb.analysis;
+
+import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Ident;
+import dev.plumb.syntax.Statement;
+import dev.plumb.units.UnitRegistry;
+import dev.plumb.units.UnitResult;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The third pass: what every name in the document's formulas stands for. Builds the side table
+ * of references (for hover, go-to-definition, rename) and the dependency graph of the own
+ * definitions, and reports names that are defined nowhere.
+ */
+final class ResolutionPass {
+    /**
+     * @param uses for each own definition, the own names it uses, in source order: the dependency graph
+     * @param references every name used, where
+     * @param used every name used anywhere, own or not (for the unused-input hint)
+     * @param importedUses for each used file, the names of it this document uses
+     */
+    record Resolution(Map<String, Set<String>> uses, List<Analysis.Reference> references, Set<String> used,
+                      Map<Path, Set<String>> importedUses) {
+        Resolution {
+            Map<String, Set<String>> graph = new LinkedHashMap<>();
+            uses.forEach((k, v) -> graph.put(k, Collections.unmodifiableSet(new LinkedHashSet<>(v))));
+            uses = Collections.unmodifiableMap(graph);
+            references = List.copyOf(references);
+            used = Set.copyOf(used);
+            Map<Path, Set<String>> imported = new HashMap<>();
+            importedUses.forEach((k, v) -> imported.put(k, Set.copyOf(v)));
+            importedUses = Map.copyOf(imported);
+        }
+    }
+
+    private final Scope scope;
+    private final Map<String, Statement> own;
+    private final Reporter reporter;
+    private final UnitRegistry units;
+    private final Set<String> used = new HashSet<>();
+    private final List<Analysis.Reference> references = new ArrayList<>();
+    private final Map<Path, Set<String>> importedUses = new HashMap<>();
+
+    ResolutionPass(Scope scope, Map<String, Statement> own, Reporter reporter, UnitRegistry units) {
+        this.scope = scope;
+        this.own = own;
+        this.reporter = reporter;
+        this.units = units;
+    }
+
+    Resolution run(List<Statement> statements) {
+        Map<String, Set<String>> uses = new LinkedHashMap<>();
+        for (String n : own.keySet()) uses.put(n, new LinkedHashSet<>());
+        for (Statement s : statements) {
+            Set<String> deps = own.get(nameOf(s)) == s ? uses.get(nameOf(s)) : new LinkedHashSet<>();
+            Set<String> params = new HashSet<>();
+            List<Expr> exprs = new ArrayList<>();
+            collect(s, exprs, params);
+            for (Expr e : exprs) {
+                References.each(e, (n, span) -> {
+                    if (params.contains(n)) return;
+                    used.add(n);
+                    references.add(new Analysis.Reference(n, span));
+                    if (own.containsKey(n)) {
+                        deps.add(n);
+                        return;
+                    }
+                    Binding b = scope.lookup(n);
+                    if (b == null) {
+                        unknownName(n, span);
+                    } else if (b.file() != null) {
+                        importedUses.computeIfAbsent(b.file(), k -> new HashSet<>()).add(n);
+                    }
+                });
+            }
+        }
+        return new Resolution(uses, references, used, importedUses);
+    }
+
+    /** The expressions of a statement, and the names that are its own parameters there. */
+    private void collect(Statement s, List<Expr> exprs, Set<String> params) {
+        if (s instanceof Statement.Definition d) exprs.add(d.expr());
+        if (s instanceof Statement.Check c) exprs.addAll(c.operands());
+        if (s instanceof Statement.Function f) {
+            exprs.add(f.body());
+            f.params().forEach(p -> params.add(p.text()));
+        }
+        if (s instanceof Statement.Correlation c) {
+            c.params().forEach(p -> params.add(p.name().text()));
+            for (Statement.Piece piece : c.pieces()) {
+                exprs.add(piece.expr());
+                if (piece.condition() != null) exprs.addAll(piece.condition().operands());
+            }
+            c.valid().forEach(b -> exprs.addAll(b.operands()));
+            c.domain().forEach(b -> exprs.addAll(b.operands()));
+            if (c.accuracy() != null) exprs.add(c.accuracy());
+        }
+        if (s instanceof Statement.Table t) {
+            params.add(t.param().name().text());
+            t.valid().forEach(b -> exprs.addAll(b.operands()));
+            t.domain().forEach(b -> exprs.addAll(b.operands()));
+        }
+        if (s instanceof Statement.Seek f) {
+            // The unknown is not a dependency of its own equation, but it is used.
+            params.add(f.name().text());
+            used.add(f.name().text());
+            for (Expr e : new Expr[] {f.low(), f.high(), f.start(), f.lhs(), f.rhs()}) {
+                if (e != null) exprs.add(e);
+            }
+        }
+    }
+
+    private static String nameOf(Statement s) {
+        Ident i = DeclarationPass.definedName(s);
+        return i == null ? "" : i.text();
+    }
+
+    private void unknownName(String n, Span span) {
+        Set<String> known = new HashSet<>(scope.visibleNames());
+        known.addAll(own.keySet());
+        List<String> close = Suggestions.closest(n, known, 3);
+        String message = "unknown name '" + n + "'" + Suggestions.didYouMean(close);
+        if (units.resolve(n) instanceof UnitResult.Ok) {
+            message += "; '" + n + "' is a unit: write it right after a number, e.g. `3 " + n + "`";
+        } else {
+            message += ": define it, or `use` the file that defines it";
+        }
+        reporter.report(Code.NAME_UNKNOWN, span, message);
+    }
+}
