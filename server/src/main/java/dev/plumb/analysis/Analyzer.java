@@ -1,6 +1,7 @@
 package dev.plumb.analysis;
 
 import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.syntax.ParsedSource;
 import dev.plumb.syntax.SourceParser;
 import dev.plumb.syntax.Statement;
@@ -71,8 +72,27 @@ final class Analyzer {
             Binding.ValueBinding v = evaluated.values().get(name);
             if (v != null) scope.put(name, v);
         }
-        return new Analysis(file, text, parsed, headers(statements), rowsInOrder(statements, rows),
-            sorted(reporter.all()), scope, resolved.importedUses(), imports.files(), resolved.references(), reporter.calls());
+        List<Row> inOrder = rowsInOrder(statements, rows);
+        List<Diagnostic> diagnostics = reporter.all(request -> resolve(request, declared.own(), inOrder));
+        return new Analysis(file, text, parsed, headers(statements), inOrder, sorted(diagnostics), scope,
+            resolved.importedUses(), imports.files(), resolved.references(), reporter.calls());
+    }
+
+    /** A repair a finding asked for, as edits of this document; none when it cannot be made here. */
+    private static List<Fix> resolve(FixRequest request, Map<String, Statement> own, List<Row> rows) {
+        if (request instanceof FixRequest.Formula f) {
+            return own.get(f.name()) instanceof Statement.Definition d && !d.input()
+                ? List.of(new Fix(f.title(), d.expr().span(), f.formula())) : List.of();
+        }
+        FixRequest.TaggedDensity t = (FixRequest.TaggedDensity) request;
+        List<Fix> out = new ArrayList<>();
+        for (Row r : rows) {
+            // A tag stays on a definition only when its value is a density.
+            if (r instanceof Row.ValueRow v && t.tag().equals(v.basis())) {
+                out.add(new Fix("Use " + v.name() + " (tagged " + t.tag() + ")", t.argument(), v.name()));
+            }
+        }
+        return out;
     }
 
     /** Functions and correlations join the scope once the plan knows which of them lie on a circle. */

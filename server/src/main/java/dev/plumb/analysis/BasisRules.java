@@ -241,8 +241,12 @@ final class BasisRules {
         boolean wettedShape = k == Shape.Kind.LATERAL_SURFACE || k == Shape.Kind.SPHERE_SURFACE || k == Shape.Kind.BOTH_FACES;
         if (!c.basis().equals("wetted") && wettedShape) {
             String here = a.frontal() == null ? "" : " (here `" + a.frontal() + "`)";
-            warn(b, c.label() + " is referenced to " + c.basis() + " area, but " + area + " has the shape of " + k.words
-                + ", a wetted area: " + frontalFix(k) + here, Severity.WARNING);
+            // When the area is a definition of the document, its formula can be replaced by the frontal one.
+            java.util.List<FixRequest> fix = a.frontal() == null || a.label() == null ? java.util.List.of()
+                : java.util.List.of(new FixRequest.Formula("Use the frontal area " + a.frontal() + " for " + a.label(), a.label(),
+                    a.frontal()));
+            reporter.report(Code.BASIS_AREA, b.span(), c.label() + " is referenced to " + c.basis() + " area, but " + area
+                + " has the shape of " + k.words + ", a wetted area: " + frontalFix(k) + here, java.util.List.of(), fix);
         } else if ("crossflow".equals(c.flow()) && k == Shape.Kind.CIRCLE) {
             warn(b, c.label() + " is referenced to " + c.basis() + " area in cross-flow, but " + area + " has the shape of "
                 + k.words + ", the end of a cylinder, which faces axial flow: " + flowFix(c.flow()), Severity.WARNING);

@@ -1,6 +1,7 @@
 package dev.plumb.analysis;
 
 import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.syntax.Expr;
 import dev.plumb.syntax.Statement;
 import dev.plumb.units.Dimension;
@@ -50,7 +51,7 @@ final class CorrelationCall {
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
             if (why != null) {
-                reporter.report(Code.RANGE_OUTSIDE, c.span(), name + " is " + why + alternatives(b, args));
+                outside(c, name + " is " + why, alternatives(b, args));
                 verdicts.add("outside: " + why);
             }
         }
@@ -95,15 +96,15 @@ final class CorrelationCall {
             String hi = Shown.value(Value.of(data.last(), data.argument), data.argumentUnit, 4);
             boolean above = x.si() > data.last();
             Value limit = Value.of(above ? data.last() : data.first(), data.argument);
-            reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " reads its table from " + lo + " to " + hi + ", but "
+            outside(c, t.name() + " reads its table from " + lo + " to " + hi + ", but "
                 + param + " = " + Shown.value(x, data.argumentUnit, 4) + " here: "
                 + RangeCheck.distance(x, limit, above, data.argumentUnit, above ? "the last row" : "the first row")
-                + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows"
-                + alternatives(t, args));
+                + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows",
+                alternatives(t, args));
         }
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
-            if (why != null) reporter.report(Code.RANGE_OUTSIDE, c.span(), t.name() + " is " + why + alternatives(t, args));
+            if (why != null) outside(c, t.name() + " is " + why, alternatives(t, args));
         }
         reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
             param + " = " + Shown.value(x, data.argumentUnit, 4), data.covers(x.si())
@@ -195,9 +196,10 @@ final class CorrelationCall {
             if (given == null || given.tag().equals(p.role().text())) continue;
             String fix = p.role().text().equals("fluid") ? "pass the density of the fluid around the body (air, water)"
                 : "pass the density of the body itself";
+            // The document's densities of the right kind, once all are known, are the repairs.
             reporter.report(Code.BASIS_DENSITY, c.args().get(i).span(), name + " takes " + p.name().text()
                 + " as the density of the " + p.role().text() + ", but " + given.label() + " is tagged " + given.tag()
-                + ": " + fix);
+                + ": " + fix, List.of(), List.of(new FixRequest.TaggedDensity(p.role().text(), c.args().get(i).span())));
         }
     }
 
@@ -253,21 +255,31 @@ final class CorrelationCall {
         return warnedLaminar ? !regime.equals("laminar") : regime.equals("laminar");
     }
 
+    /** The library's members of the same family that cover the arguments, and how the message words them. */
+    private record Alternatives(String words, List<String> names) {
+    }
+
+    /** A call outside its range: the message names the alternatives, and each is a repair of the call. */
+    private void outside(Expr.Call c, String message, Alternatives alternatives) {
+        List<Fix> fixes = new ArrayList<>();
+        for (String alt : alternatives.names()) fixes.add(new Fix("Use " + alt + ", valid here", c.callee().span(), alt));
+        reporter.report(Code.RANGE_OUTSIDE, c.span(), message + alternatives.words(), fixes, List.of());
+    }
+
     /** "; within range: a, b" — the library's members of the same family that cover these arguments. */
-    private String alternatives(Binding self, List<Value> args) {
+    private Alternatives alternatives(Binding self, List<Value> args) {
         String family = Stdlib.familyOf(self);
-        if (family == null) return "";
+        if (family == null) return new Alternatives("", List.of());
         List<String> names = new ArrayList<>();
         for (Binding other : familyMembers(self)) {
             boolean fits = other instanceof Binding.CorrelationBinding oc ? covers(oc, args)
                 : other instanceof Binding.TableBinding ot && covers(ot, args);
             if (fits) names.add(nameOf(other));
         }
-        return names.isEmpty() ? "; no standard-library correlation of family " + family + " covers it"
-            : "; within range: " + listed(names);
+        return new Alternatives(names.isEmpty() ? "; no standard-library correlation of family " + family + " covers it"
+            : "; within range: " + listed(names), names);
     }
 
-    /** Every alternative is named: each becomes a quick fix in the editor. */
     private static String listed(List<String> names) {
         return String.join(", ", names);
     }

@@ -1,6 +1,7 @@
 package dev.plumb.analysis;
 
 import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.diagnostics.Span;
 import dev.plumb.syntax.Ident;
 import dev.plumb.syntax.Statement;
@@ -9,6 +10,7 @@ import dev.plumb.units.Unit;
 import dev.plumb.units.UnitRegistry;
 import java.nio.file.Path;
 import java.util.HashSet;
+import java.util.List;
 import java.util.Set;
 
 /**
@@ -108,8 +110,11 @@ final class Definitions {
                     ? ": a plain number has no unit to show; drop `in " + d.displayUnit().text() + "`, or give a number"
                         + " in the expression its unit (write `5 mm`, not `5 in mm`)"
                     : ": use a unit of that dimension, such as " + fallback.symbol();
+                List<Fix> fixes = v.dimensionless() ? List.of()
+                    : List.of(new Fix("Show it in " + fallback.symbol(), d.displayUnit().span(), fallback.symbol()));
                 reporter.report(Code.UNIT_MISMATCH, d.displayUnit().span(), "`in " + d.displayUnit().text() + "` shows "
-                    + u.dimension().describe() + ", but " + d.name().text() + " is " + v.dimension().describe() + fix);
+                    + u.dimension().describe() + ", but " + d.name().text() + " is " + v.dimension().describe() + fix,
+                    fixes, List.of());
                 return fallback;
             }
             return u;

@@ -61,7 +61,7 @@ final class EvaluationPass {
         Definitions definitions = plan.definitions();
         if (s instanceof Statement.Broken b) {
             rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null,
-                null, null, null));
+                null, null, null, null, s));
             return b.name() == null ? null : new Binding.ValueBinding(definitions.bare(Value.UNKNOWN).file(),
                 b.name().span(), Value.UNKNOWN, null, null, false, null);
         }
@@ -87,21 +87,21 @@ final class EvaluationPass {
         Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle);
         String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
         rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), shown, bound.basis(), d.note(),
-            bound.origin(), null));
+            bound.origin(), null, bound.display(), s));
         return bound;
     }
 
     private Binding.ValueBinding seek(Statement.Seek f, Environment env, boolean inCycle) {
         String name = f.name().text();
         if (inCycle || plan.own().get(name) != f) {
-            rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null));
+            rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null, null, f));
             return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
         }
         SeekRunner.Outcome outcome = new SeekRunner(plan, scope, env, reporter, text, units).run(f);
         Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter);
         String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
         rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), shown, bound.basis(), f.note(), null,
-            outcome.solution()));
+            outcome.solution(), bound.display(), f));
         return bound;
     }
 }

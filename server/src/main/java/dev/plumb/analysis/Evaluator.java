@@ -129,7 +129,9 @@ final class Evaluator {
             message += ". A unit follows a number directly (`2 m` is two metres); to multiply by a value named "
                 + written.text() + " write `2 * " + written.text() + "`";
         }
-        reporter.report(Code.UNIT_UNKNOWN, new Span(start, end), message);
+        List<dev.plumb.diagnostics.Fix> fixes = new ArrayList<>();
+        for (String s : err.suggestions()) fixes.add(new dev.plumb.diagnostics.Fix("Change to '" + s + "'", new Span(start, end), s));
+        reporter.report(Code.UNIT_UNKNOWN, new Span(start, end), message, fixes, List.of());
         return null;
     }
 

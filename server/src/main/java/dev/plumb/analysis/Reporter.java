@@ -2,6 +2,7 @@ package dev.plumb.analysis;
 
 import dev.plumb.diagnostics.Code;
 import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.diagnostics.Related;
 import dev.plumb.diagnostics.Severity;
 import dev.plumb.diagnostics.Span;
@@ -32,15 +33,19 @@ final class Reporter {
 
     /** Correlation calls written in the document itself (not inside functions), for hover. */
     private final List<Analysis.CallSite> calls;
+    /** Repairs to resolve once the document is evaluated, by the finding that asked (by identity). */
+    private final java.util.Map<Diagnostic, List<FixRequest>> requests;
 
     Reporter() {
-        this(new LinkedHashSet<>(), new ArrayList<>(), null, null, null, null, false);
+        this(new LinkedHashSet<>(), new ArrayList<>(), new java.util.IdentityHashMap<>(), null, null, null, null, false);
     }
 
-    private Reporter(Set<Diagnostic> diagnostics, List<Analysis.CallSite> calls, Reporter caller, String function,
+    private Reporter(Set<Diagnostic> diagnostics, List<Analysis.CallSite> calls,
+                     java.util.Map<Diagnostic, List<FixRequest>> requests, Reporter caller, String function,
                      Span callSpan, Path file, boolean quietRanges) {
         this.diagnostics = diagnostics;
         this.calls = calls;
+        this.requests = requests;
         this.caller = caller;
         this.function = function;
         this.callSpan = callSpan;
@@ -53,13 +58,26 @@ final class Reporter {
     }
 
     void report(Code code, Severity severity, Span span, String message) {
+        report(code, severity, span, message, List.of(), List.of());
+    }
+
+    /** A finding with the repairs that mend it: edits now, and requests the analyser resolves at the end. */
+    void report(Code code, Span span, String message, List<Fix> fixes, List<FixRequest> later) {
+        report(code, code.severity(), span, message, fixes, later);
+    }
+
+    private void report(Code code, Severity severity, Span span, String message, List<Fix> fixes,
+                        List<FixRequest> later) {
         if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME || code == Code.UNIT_BARE_ANGLE)) {
             return;
         }
         if (caller == null) {
-            diagnostics.add(new Diagnostic(code, severity, span, message, List.of()));
+            Diagnostic d = new Diagnostic(code, severity, span, message, List.of(), fixes);
+            if (diagnostics.add(d) && !later.isEmpty()) requests.put(d, later);
             return;
         }
+        // Found inside a function's body: the repairs would edit the body, perhaps in another
+        // file, while the finding is shown at the call; they are not offered there.
         Related inside = new Related(definingFile == null ? null : definingFile.toString(), span, "inside " + function);
         caller.fromCall(code, severity, callSpan, "in " + function + "(…): " + message, inside);
     }
@@ -78,12 +96,12 @@ final class Reporter {
 
     /** A reporter for evaluating the body of {@code function} called at {@code at}. */
     Reporter inCall(String function, Span at, Path definingFile) {
-        return new Reporter(diagnostics, calls, this, function, at, definingFile, quietRanges);
+        return new Reporter(diagnostics, calls, requests, this, function, at, definingFile, quietRanges);
     }
 
     /** As {@link #inCall}, for a correlation's formula: nested range warnings stay quiet. */
     Reporter inCorrelation(String correlation, Span at, Path definingFile) {
-        return new Reporter(diagnostics, calls, this, correlation, at, definingFile, true);
+        return new Reporter(diagnostics, calls, requests, this, correlation, at, definingFile, true);
     }
 
     /** Records a correlation call made at document level. */
@@ -95,7 +113,23 @@ final class Reporter {
         return new ArrayList<>(calls);
     }
 
+    /** Every finding, with its requested repairs turned into edits by {@code resolve}. */
+    List<Diagnostic> all(java.util.function.Function<FixRequest, List<Fix>> resolve) {
+        List<Diagnostic> out = new ArrayList<>(diagnostics.size());
+        for (Diagnostic d : diagnostics) {
+            List<FixRequest> asked = requests.get(d);
+            if (asked == null) {
+                out.add(d);
+                continue;
+            }
+            List<Fix> fixes = new ArrayList<>();
+            for (FixRequest r : asked) fixes.addAll(resolve.apply(r));
+            out.add(d.withFixes(fixes));
+        }
+        return out;
+    }
+
     List<Diagnostic> all() {
-        return new ArrayList<>(diagnostics);
+        return all(r -> List.of());
     }
 }

@@ -1,6 +1,7 @@
 package dev.plumb.analysis;
 
 import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.diagnostics.Span;
 import dev.plumb.syntax.Expr;
 import dev.plumb.syntax.Ident;
@@ -136,6 +137,8 @@ final class ResolutionPass {
         } else {
             message += ": define it, or `use` the file that defines it";
         }
-        reporter.report(Code.NAME_UNKNOWN, span, message);
+        List<Fix> fixes = new ArrayList<>();
+        for (String name : close) fixes.add(new Fix("Change to '" + name + "'", span, name));
+        reporter.report(Code.NAME_UNKNOWN, span, message, fixes, List.of());
     }
 }

@@ -14,10 +14,25 @@ public sealed interface Row {
 
     /**
      * A defined value. {@code shown} is the value in its display unit ("1.204 kg/m³"), "?" when
-     * it could not be computed.
+     * it could not be computed; {@code display} is that unit (null when unknown), and
+     * {@code statement} the statement that defines it (a definition, a solve statement, or a
+     * broken line), whose spans say where its formula and its `in` unit are written.
      */
     record ValueRow(Span span, String name, boolean input, Value value, String shown, String basis, String note,
-                    Origin origin, Solution solution) implements Row {
+                    Origin origin, Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement)
+        implements Row {
+
+        /** The formula as written, for a definition; null for a solved value or a broken line. */
+        public dev.plumb.syntax.Expr formula() {
+            return statement instanceof dev.plumb.syntax.Statement.Definition d ? d.expr() : null;
+        }
+
+        /** Where the `in` unit is written, or null when none is. */
+        public dev.plumb.syntax.UnitText displayUnitWritten() {
+            if (statement instanceof dev.plumb.syntax.Statement.Definition d) return d.displayUnit();
+            if (statement instanceof dev.plumb.syntax.Statement.Seek s) return s.displayUnit();
+            return null;
+        }
     }
 
     /** A function, correlation or table column; kind is "function", "correlation" or "table". */

@@ -1,18 +1,21 @@
 package dev.plumb.diagnostics;
 
+import java.util.ArrayList;
 import java.util.List;
 
 /**
- * One finding in one file: a stable code, where, and a message that says what to do; {@code fix}
- * is the repair that mends it when there is exactly one (null otherwise).
+ * One finding in one file: a stable code, where, a message that says what to do, and the
+ * repairs that mend it as data ({@code fixes}, the preferred first), so that no editor ever has
+ * to read a repair back out of the message.
  */
-public record Diagnostic(Code code, Severity severity, Span span, String message, List<Related> related, Fix fix) {
+public record Diagnostic(Code code, Severity severity, Span span, String message, List<Related> related, List<Fix> fixes) {
     public Diagnostic {
         related = List.copyOf(related);
+        fixes = List.copyOf(fixes);
     }
 
     public Diagnostic(Code code, Severity severity, Span span, String message, List<Related> related) {
-        this(code, severity, span, message, related, null);
+        this(code, severity, span, message, related, List.of());
     }
 
     public static Diagnostic of(Code code, Span span, String message) {
@@ -20,12 +23,20 @@ public record Diagnostic(Code code, Severity severity, Span span, String message
     }
 
     public Diagnostic withRelated(Related r) {
-        var all = new java.util.ArrayList<>(related);
+        List<Related> all = new ArrayList<>(related);
         all.add(r);
-        return new Diagnostic(code, severity, span, message, all, fix);
+        return new Diagnostic(code, severity, span, message, all, fixes);
+    }
+
+    /** This finding with more repairs after the ones it has. */
+    public Diagnostic withFixes(List<Fix> more) {
+        if (more.isEmpty()) return this;
+        List<Fix> all = new ArrayList<>(fixes);
+        all.addAll(more);
+        return new Diagnostic(code, severity, span, message, related, all);
     }
 
     public Diagnostic withFix(Fix f) {
-        return new Diagnostic(code, severity, span, message, related, f);
+        return withFixes(List.of(f));
     }
 }

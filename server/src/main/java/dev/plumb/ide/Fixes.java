@@ -2,14 +2,13 @@ package dev.plumb.ide;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
-import dev.plumb.diagnostics.Code;
 import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.diagnostics.Fix;
 import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Statement;
 import dev.plumb.units.DisplayUnits;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * Code actions: quick fixes for findings that name their fix (a missing `*`, a close spelling,
@@ -21,14 +20,6 @@ public final class Fixes {
     public record Action(String title, boolean quickFix, List<Edit> edits, Diagnostic fixes) {
     }
 
-    private static final Pattern DID_YOU_MEAN = Pattern.compile("did you mean ((?:'[^']+'(?: or )?)+)\\?");
-    private static final Pattern QUOTED = Pattern.compile("'([^']+)'");
-    private static final Pattern WITHIN = Pattern.compile("within range: ([\\w, .]+)$");
-    private static final Pattern SUCH_AS = Pattern.compile("such as (\\S+)$");
-    private static final Pattern AREA_FIX = Pattern.compile("but ([\\p{L}_][\\p{L}\\p{Nd}_]*) has the shape .*\\(here `([^`]+)`\\)");
-    private static final Pattern ROLE = Pattern.compile("takes \\S+ as the density of the (fluid|body), but");
-    private static final Pattern EXPRESSION = Pattern.compile("=\\s*(.*?)(\\s+in\\s+\\S+|\\s+as\\s+\\S+|\\s+\"|\\s*$)",
-        Pattern.DOTALL);
 
     /** Units an engineer converts to, by the SI unit of their dimension. */
     private static final java.util.Map<String, List<String>> COMMON = java.util.Map.of(
@@ -51,7 +42,7 @@ public final class Fixes {
         List<Action> out = new ArrayList<>();
         for (Diagnostic d : a.diagnostics()) {
             if (d.span().end() < range.start() || d.span().start() > range.end()) continue;
-            out.addAll(quickFixes(a, d));
+            out.addAll(quickFixes(d));
         }
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v && v.span().start() <= range.end() && range.start() <= v.span().end()) {
@@ -63,87 +54,13 @@ public final class Fixes {
         return out;
     }
 
-    private static List<Action> quickFixes(Analysis a, Diagnostic d) {
+    /** The repairs the finding carries, as the engine made them: the editor reads no message. */
+    private static List<Action> quickFixes(Diagnostic d) {
         List<Action> out = new ArrayList<>();
-        if (d.fix() != null) {
-            // A finding that carries its own repair: offered as it is, first.
-            out.add(new Action(d.fix().title(), true, List.of(new Edit(d.fix().span().start(), d.fix().span().length(),
-                d.fix().text())), d));
-        }
-        String m = d.message();
-        if (d.code() == Code.SYNTAX_ERROR && m.startsWith("missing operator between")) {
-            out.add(new Action("Insert '*'", true, List.of(new Edit(d.span().start(), 0, "* ")), d));
-        }
-        if (d.code() == Code.UNIT_UNKNOWN || d.code() == Code.NAME_UNKNOWN) {
-            Matcher mean = DID_YOU_MEAN.matcher(m);
-            if (mean.find()) {
-                Matcher q = QUOTED.matcher(mean.group(1));
-                while (q.find()) {
-                    out.add(new Action("Change to '" + q.group(1) + "'", true,
-                        List.of(new Edit(d.span().start(), d.span().length(), q.group(1))), d));
-                }
-            }
-        }
-        if (d.code() == Code.UNIT_MISMATCH && m.startsWith("`in ")) {
-            Matcher such = SUCH_AS.matcher(m);
-            if (such.find()) {
-                out.add(new Action("Show it in " + such.group(1), true,
-                    List.of(new Edit(d.span().start(), d.span().length(), such.group(1))), d));
-            }
-        }
-        if (d.code() == Code.BASIS_AREA) {
-            Matcher fix = AREA_FIX.matcher(m);
-            if (fix.find()) {
-                Edit e = replaceFormula(a, fix.group(1), fix.group(2));
-                if (e != null) out.add(new Action("Use the frontal area " + fix.group(2) + " for " + fix.group(1), true,
-                    List.of(e), d));
-            }
-        }
-        if (d.code() == Code.BASIS_DENSITY) {
-            Matcher role = ROLE.matcher(m);
-            if (role.find()) {
-                for (String name : densitiesTagged(a, role.group(1))) {
-                    out.add(new Action("Use " + name + " (tagged " + role.group(1) + ")", true,
-                        List.of(new Edit(d.span().start(), d.span().length(), name)), d));
-                }
-            }
-        }
-        if (d.code() == Code.RANGE_OUTSIDE) {
-            Matcher w = WITHIN.matcher(m);
-            String call = a.text().substring(d.span().start(), d.span().end());
-            int paren = call.indexOf('(');
-            if (w.find() && paren > 0) {
-                for (String alt : w.group(1).split(",\\s*")) {
-                    out.add(new Action("Use " + alt.strip() + ", valid here", true,
-                        List.of(new Edit(d.span().start(), paren, alt.strip())), d));
-                }
-            }
+        for (Fix f : d.fixes()) {
+            out.add(new Action(f.title(), true, List.of(new Edit(f.span().start(), f.span().length(), f.text())), d));
         }
         return out;
-    }
-
-    /** The document's own densities tagged {@code as TAG}, in source order. */
-    private static List<String> densitiesTagged(Analysis a, String tag) {
-        List<String> out = new ArrayList<>();
-        for (Row r : a.rows()) {
-            // A density tag stays on a definition only when its value is a density.
-            if (r instanceof Row.ValueRow v && tag.equals(v.basis())) {
-                out.add(v.name());
-            }
-        }
-        return out;
-    }
-
-    /** Replaces the formula of a definition of this document, keeping its `in`, `as` and note. */
-    private static Edit replaceFormula(Analysis a, String name, String formula) {
-        for (Row r : a.rows()) {
-            if (!(r instanceof Row.ValueRow v) || !v.name().equals(name) || v.input()) continue;
-            String statement = a.text().substring(v.span().start(), v.span().end());
-            Matcher e = EXPRESSION.matcher(statement);
-            if (!e.find()) return null;
-            return new Edit(v.span().start() + e.start(1), e.end(1) - e.start(1), formula);
-        }
-        return null;
     }
 
     /** "Show in SI": set the definition's `in` unit to the SI unit of its dimension. */
@@ -166,24 +83,19 @@ public final class Fixes {
         return out;
     }
 
-    /** Sets (or replaces) a definition's `in UNIT`. */
+    /** Sets (or replaces) a definition's `in UNIT`: the row says where its unit and its formula are written. */
     private static Action showIn(Analysis a, Row.ValueRow v, String unit, String title) {
-        String si = unit;
-        String text = a.text();
-        int end = v.span().end();
-        String statement = text.substring(v.span().start(), end);
-        int note = statement.indexOf('"');
-        int bodyEnd = note >= 0 ? v.span().start() + note : end;
-        Matcher in = Pattern.compile("\\sin\\s+\\S+").matcher(text.substring(v.span().start(), bodyEnd));
         Edit edit;
-        if (in.find()) {
-            edit = new Edit(v.span().start() + in.start(), in.end() - in.start(), " in " + si);
+        if (v.displayUnitWritten() != null) {
+            Span written = v.displayUnitWritten().span();
+            edit = new Edit(written.start(), written.length(), unit);
+        } else if (v.statement() instanceof Statement.Definition d) {
+            // `in UNIT` comes right after the formula, before `as TAG` and the note.
+            edit = new Edit(d.expr().span().end(), 0, " in " + unit);
+        } else if (v.statement() instanceof Statement.Seek s) {
+            edit = new Edit(s.rhs().span().end(), 0, " in " + unit);
         } else {
-            // `in UNIT` comes before `as TAG` and the note.
-            Matcher as = Pattern.compile("\\sas\\s").matcher(text.substring(v.span().start(), bodyEnd));
-            int at = as.find() ? v.span().start() + as.start() : bodyEnd;
-            while (at > v.span().start() && Character.isWhitespace(text.charAt(at - 1))) at--;
-            edit = new Edit(at, 0, " in " + si);
+            return null;
         }
         return new Action(title, false, List.of(edit), null);
     }

@@ -89,9 +89,8 @@ public final class HoverText {
     /** "`F = Cd * A * q`" then the same with each name replaced by its value. */
     private static String formula(Analysis a, Row.ValueRow row) {
         String text = a.text();
-        int eq = text.indexOf('=', row.span().start());
-        if (eq < 0 || eq >= row.span().end()) return null;
-        Span expr = new Span(eq + 1, row.span().end());
+        if (row.formula() == null) return null;
+        Span expr = row.formula().span();
         List<Analysis.Reference> inside = new ArrayList<>();
         for (Analysis.Reference r : a.references()) {
             if (r.span().start() >= expr.start() && r.span().end() <= expr.end()) inside.add(r);

@@ -15,6 +15,12 @@ import org.antlr.v4.runtime.TokenStream;
  * typo never hides the rest of the document. Errors are phrased for engineers.
  */
 final class LineRecovery extends DefaultErrorStrategy {
+    /** Where the errors go; told which of them a `*` before the offending token would mend. */
+    private final SyntaxErrors errors;
+
+    LineRecovery(SyntaxErrors errors) {
+        this.errors = errors;
+    }
 
     @Override
     public void recover(Parser parser, RecognitionException e) {
@@ -85,8 +91,13 @@ final class LineRecovery extends DefaultErrorStrategy {
     }
 
     private void report(Parser parser, Token offending, org.antlr.v4.runtime.misc.IntervalSet expected) {
-        parser.notifyErrorListeners(offending, message(parser, offending, expected), null);
+        String message = message(parser, offending, expected);
+        // Two operands side by side: the repair is the missing `*`, handed on as data, not in words.
+        if (message.startsWith(MISSING_OPERATOR)) errors.insertBeforeNext("Insert '*'", "* ");
+        parser.notifyErrorListeners(offending, message, null);
     }
+
+    private static final String MISSING_OPERATOR = "missing operator between ";
 
     private static String message(Parser parser, Token t, org.antlr.v4.runtime.misc.IntervalSet expected) {
         if (t.getType() == PlumbLexer.UNTERMINATED_STRING) return unterminated();
@@ -103,7 +114,7 @@ final class LineRecovery extends DefaultErrorStrategy {
                 + t.getText();
         }
         if (previous != null && endsOperand(previous) && startsOperand(t)) {
-            return "missing operator between '" + previous.getText() + "' and '" + t.getText()
+            return MISSING_OPERATOR + "'" + previous.getText() + "' and '" + t.getText()
                 + "': write `" + previous.getText() + " * " + t.getText() + "` to multiply";
         }
         if (t.getType() == PlumbLexer.NUMBER && previous != null && previous.getType() == PlumbLexer.NUMBER) {

@@ -39,8 +39,8 @@ final class Shift {
 
     private Diagnostic diagnostic(Diagnostic d) {
         List<Related> related = each(d.related(), r -> new Related(r.file(), span(r.span()), r.message()));
-        Fix fix = d.fix() == null ? null : new Fix(d.fix().title(), span(d.fix().span()), d.fix().text());
-        return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related, fix);
+        List<Fix> fixes = each(d.fixes(), f -> new Fix(f.title(), span(f.span()), f.text()));
+        return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related, fixes);
     }
 
     private Span span(Span s) {

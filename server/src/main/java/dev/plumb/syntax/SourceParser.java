@@ -84,7 +84,7 @@ public final class SourceParser {
         PlumbParser parser = new PlumbParser(new CommonTokenStream(new ListTokenSource(tokens)));
         parser.removeErrorListeners();
         parser.addErrorListener(errors);
-        parser.setErrorHandler(new LineRecovery());
+        parser.setErrorHandler(new LineRecovery(errors));
 
         List<Statement> statements;
         try {

@@ -21,6 +21,15 @@ final class SyntaxErrors extends BaseErrorListener {
         this.lines = lines;
     }
 
+    /** A repair for the next error: text to insert before its token (null: none). */
+    private String pendingTitle;
+    private String pendingInsert;
+
+    void insertBeforeNext(String title, String text) {
+        pendingTitle = title;
+        pendingInsert = text;
+    }
+
     @Override
     public void syntaxError(Recognizer<?, ?> recognizer, Object offendingSymbol, int line, int column,
                             String message, RecognitionException e) {
@@ -29,7 +38,11 @@ final class SyntaxErrors extends BaseErrorListener {
         int start = lines.fromCodePoint(startCp);
         boolean visible = t.getType() != Token.EOF && t.getType() != dev.plumb.grammar.PlumbLexer.NEWLINE;
         int end = visible ? lines.fromCodePoint(t.getStopIndex() + 1) : start;
-        diagnostics.add(Diagnostic.of(Code.SYNTAX_ERROR, new Span(start, end), message));
+        Diagnostic d = Diagnostic.of(Code.SYNTAX_ERROR, new Span(start, end), message);
+        if (pendingInsert != null) d = d.withFix(new dev.plumb.diagnostics.Fix(pendingTitle, new Span(start, start), pendingInsert));
+        pendingTitle = null;
+        pendingInsert = null;
+        diagnostics.add(d);
         positions.add(startCp);
     }
 

@@ -40,7 +40,7 @@ class SyntaxDiagnosticsTest {
         Analysis a = Fixture.analyze(text);
         Diagnostic d = a.diagnostics().get(0);
         assertEquals(Code.SYNTAX_RENAMED, d.code());
-        String mended = text.substring(0, d.fix().span().start()) + d.fix().text() + text.substring(d.fix().span().end());
+        String mended = text.substring(0, d.fixes().get(0).span().start()) + d.fixes().get(0).text() + text.substring(d.fixes().get(0).span().end());
         // The user's own line break and spacing are kept; only the four words change.
         assertEquals("W = 2 N\nseek V in 1 m/s .. 10 m/s\n    where V * 1 N*s/m = W   \"note\"\n", mended);
         Analysis again = Fixture.analyze(mended);

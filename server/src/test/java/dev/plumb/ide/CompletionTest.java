@@ -3,11 +3,6 @@ package dev.plumb.ide;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.plumb.analysis.Analysis;
-import dev.plumb.analysis.FileSources;
-import dev.plumb.analysis.Settings;
-import dev.plumb.analysis.Workspace;
-import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -15,11 +10,8 @@ import org.junit.jupiter.api.Test;
 class CompletionTest {
 
     private static List<CompletionEntry> complete(String marked) {
-        int at = marked.indexOf("$0");
-        String text = marked.substring(0, at) + marked.substring(at + 2);
-        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT)
-            .analyzeText(Path.of("completion.plumb").toAbsolutePath(), text);
-        return Completion.at(a, at);
+        Marked m = Marked.of(marked);
+        return Completion.at(m.analysis(), m.cursor());
     }
 
     @Test
