@@ -24,12 +24,14 @@ final class CorrelationCall {
     private final Reporter reporter;
     private final BiFunction<Expr, Value, String> operand;
     private final UnitRegistry units;
+    private final RangeAdvice advice;
 
     CorrelationCall(Evaluator caller, Reporter reporter, BiFunction<Expr, Value, String> operand, UnitRegistry units) {
         this.caller = caller;
         this.reporter = reporter;
         this.operand = operand;
         this.units = units;
+        this.advice = new RangeAdvice(caller, reporter, units);
     }
 
     Value correlation(Expr.Call c, Binding.CorrelationBinding b, List<Value> args) {
@@ -51,12 +53,12 @@ final class CorrelationCall {
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
             if (why != null) {
-                outside(c, name + " is " + why, alternatives(b, args));
+                advice.outside(c, name + " is " + why, advice.alternatives(b, args));
                 verdicts.add("outside: " + why);
             }
         }
         String range = StdlibCatalog.validText(b);
-        regime(c, b, params, args);
+        advice.regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
         String flow = def.flow() == null ? null : def.flow().text();
         // Findings inside the formula go to the correlation's own reporter; none applying is the call's.
@@ -96,15 +98,15 @@ final class CorrelationCall {
             String hi = Shown.value(Value.of(data.last(), data.argument), data.argumentUnit, 4);
             boolean above = x.si() > data.last();
             Value limit = Value.of(above ? data.last() : data.first(), data.argument);
-            outside(c, t.name() + " reads its table from " + lo + " to " + hi + ", but "
+            advice.outside(c, t.name() + " reads its table from " + lo + " to " + hi + ", but "
                 + param + " = " + Shown.value(x, data.argumentUnit, 4) + " here: "
                 + RangeCheck.distance(x, limit, above, data.argumentUnit, above ? "the last row" : "the first row")
                 + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows",
-                alternatives(t, args));
+                advice.alternatives(t, args));
         }
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
-            if (why != null) outside(c, t.name() + " is " + why, alternatives(t, args));
+            if (why != null) advice.outside(c, t.name() + " is " + why, advice.alternatives(t, args));
         }
         reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
             param + " = " + Shown.value(x, data.argumentUnit, 4), data.covers(x.si())
@@ -203,121 +205,6 @@ final class CorrelationCall {
         }
     }
 
-    /**
-     * Warns when a laminar formula meets a Reynolds number above Re_crit, or a turbulent one below.
-     * A tripped formula is turbulent because the layer is stimulated, whatever Re_crit says: its
-     * valid lines alone bound it.
-     */
-    private void regime(Expr.Call c, Binding.CorrelationBinding b, Map<String, Value> params, List<Value> args) {
-        Statement.Correlation def = b.def();
-        if (def.regime() == null || def.regime().text().equals("tripped")) return;
-        String reName = def.params().stream().map(p -> p.name().text()).filter(n -> n.startsWith("Re")).findFirst()
-            .orElse(null);
-        if (reName == null || !(caller.lookup("Re_crit") instanceof Binding.ValueBinding crit)
-            || !crit.value().known() || !crit.value().dimensionless()) {
-            return;
-        }
-        double re = params.get(reName).si();
-        // Order: the document's own Re_crit, then the settings', then the library's.
-        Value critical = caller.fromLibrary("Re_crit") && caller.scope().criticalReynolds() != null
-            ? Value.number(caller.scope().criticalReynolds()) : crit.value();
-        double reCrit = critical.si();
-        boolean laminar = def.regime().text().equals("laminar");
-        if (laminar ? re <= reCrit : re >= reCrit) return;
-        String name = def.name().text();
-        String shownRe = Shown.value(params.get(reName), DisplayUnits.defaultFor(Dimension.NONE), 4);
-        String shownCrit = Shown.value(critical, DisplayUnits.defaultFor(Dimension.NONE), 4);
-        String message = laminar
-            ? name + " assumes a laminar boundary layer, but " + reName + " = " + shownRe + " is above the critical "
-                + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely transitional or turbulent there"
-            : name + " assumes a turbulent boundary layer, but " + reName + " = " + shownRe + " is below the critical "
-                + "Reynolds number Re_crit = " + shownCrit + ": the layer is likely laminar there";
-        List<String> better = new ArrayList<>();
-        for (Binding other : familyMembers(b)) {
-            if (other instanceof Binding.CorrelationBinding oc && covers(oc, args) && suitsOtherRegime(oc, laminar)) {
-                better.add(oc.def().name().text());
-            }
-        }
-        String fix = better.isEmpty() ? "; use a correlation for that regime"
-            : "; use " + (laminar ? "a mixed-flow or turbulent" : "a laminar or mixed-flow") + " correlation: "
-                + listed(better);
-        reporter.report(Code.RANGE_REGIME, c.span(), message + fix);
-    }
-
-    /**
-     * Whether a correlation fits where a laminar (or turbulent) one was warned: one for the other
-     * regime, or for both (mixed flow). A tripped one never replaces a turbulent one below
-     * Re_crit: the layer there is laminar unless someone trips it.
-     */
-    private static boolean suitsOtherRegime(Binding.CorrelationBinding other, boolean warnedLaminar) {
-        String regime = other.def().regime() == null ? null : other.def().regime().text();
-        if (regime == null) return true;
-        return warnedLaminar ? !regime.equals("laminar") : regime.equals("laminar");
-    }
-
-    /** The library's members of the same family that cover the arguments, and how the message words them. */
-    private record Alternatives(String words, List<String> names) {
-    }
-
-    /** A call outside its range: the message names the alternatives, and each is a repair of the call. */
-    private void outside(Expr.Call c, String message, Alternatives alternatives) {
-        List<Fix> fixes = new ArrayList<>();
-        for (String alt : alternatives.names()) fixes.add(new Fix("Use " + alt + ", valid here", c.callee().span(), alt));
-        reporter.report(Code.RANGE_OUTSIDE, c.span(), message + alternatives.words(), fixes, List.of());
-    }
-
-    /** "; within range: a, b" — the library's members of the same family that cover these arguments. */
-    private Alternatives alternatives(Binding self, List<Value> args) {
-        String family = Stdlib.familyOf(self);
-        if (family == null) return new Alternatives("", List.of());
-        List<String> names = new ArrayList<>();
-        for (Binding other : familyMembers(self)) {
-            boolean fits = other instanceof Binding.CorrelationBinding oc ? covers(oc, args)
-                : other instanceof Binding.TableBinding ot && covers(ot, args);
-            if (fits) names.add(nameOf(other));
-        }
-        return new Alternatives(names.isEmpty() ? "; no standard-library correlation of family " + family + " covers it"
-            : "; within range: " + listed(names), names);
-    }
-
-    private static String listed(List<String> names) {
-        return String.join(", ", names);
-    }
-
-    private List<Binding> familyMembers(Binding self) {
-        String family = Stdlib.familyOf(self);
-        if (family == null) return List.of();
-        List<Binding> out = new ArrayList<>();
-        for (Binding b : caller.scope().family(family)) {
-            if (!nameOf(b).equals(nameOf(self))) out.add(b);
-        }
-        return out;
-    }
-
-    private static String nameOf(Binding b) {
-        return b instanceof Binding.CorrelationBinding c ? c.def().name().text() : ((Binding.TableBinding) b).name();
-    }
-
-    private boolean covers(Binding.CorrelationBinding other, List<Value> args) {
-        List<Statement.Param> params = other.def().params();
-        if (other.circular() || params.size() != args.size()) return false;
-        for (int i = 0; i < params.size(); i++) {
-            Statement.Param p = params.get(i);
-            Dimension wanted = p.dimension() == null ? null : ParameterDimensions.of(p.dimension().text());
-            if (wanted != null && !wanted.equals(args.get(i).dimension())) return false;
-        }
-        Evaluator silent = new Evaluator(other.scope(), RangeCheck.bind(params, args), new Reporter(),
-            other.scope().text(), units);
-        return RangeCheck.within(other.def().valid(), silent);
-    }
-
-    private boolean covers(Binding.TableBinding other, List<Value> args) {
-        if (args.size() != 1 || !args.get(0).dimension().equals(other.data().argument)) return false;
-        if (!other.data().covers(args.get(0).si())) return false;
-        Evaluator silent = new Evaluator(other.scope(), Map.of(other.def().param().name().text(), args.get(0)),
-            new Reporter(), other.scope().text(), units);
-        return RangeCheck.within(other.def().valid(), silent);
-    }
 
     private static String arguments(Statement.Correlation def, List<Value> args) {
         List<String> parts = new ArrayList<>();
