@@ -90,6 +90,16 @@ final class Reporter {
         caller.fromCall(code, severity, callSpan, "in " + function + "(…): " + message, related);
     }
 
+    /** How many findings there are so far (to tell which a step added, with {@link #since}). */
+    int size() {
+        return diagnostics.size();
+    }
+
+    /** The findings added after there were {@code count}, in the order they were made. */
+    List<Diagnostic> since(int count) {
+        return new ArrayList<>(diagnostics).subList(Math.min(count, diagnostics.size()), diagnostics.size());
+    }
+
     void add(Diagnostic d) {
         diagnostics.add(d);
     }

@@ -49,12 +49,15 @@ final class SeekRunner {
         Dimension dim;
         DoubleUnaryOperator residual;
         RootFinder.Result result;
+        // Where the equation is evaluated for real when it cannot be solved: where the user said to start.
+        double first;
         if (f.start() != null) {
             Value start = real.eval(f.start());
             if (!start.known()) return failed(name);
             dim = start.dimension();
             residual = residual(name, dim, dependents, f);
             result = RootFinder.outwardFrom(residual, start.si());
+            first = start.si();
         } else {
             Value low = real.eval(f.low());
             Value high = real.eval(f.high());
@@ -68,15 +71,24 @@ final class SeekRunner {
             dim = low.dimension();
             residual = residual(name, dim, dependents, f);
             result = RootFinder.within(residual, low.si(), high.si());
+            first = low.si();
         }
         Unit unit = unitOf(f, dim);
-        double at = result.status() == RootFinder.Status.SOLVED ? result.root() : result.low();
-        Value[] sides = finalSides(name, dim, at, dependents, f);
-        if (sides == null) return failed(name);
+        boolean solved = result.status() == RootFinder.Status.SOLVED;
+        double at = solved ? result.root() : result.status() == RootFinder.Status.NO_ROOT ? result.low() : first;
+        int before = reporter.size();
+        // Unsolved, the definitions that depend on NAME are never evaluated at a value: what went
+        // wrong in them is reported here, at their own lines, once.
+        Value[] sides = finalSides(name, dim, at, dependents, f, solved ? new Reporter() : reporter);
+        if (sides == null || result.status() == RootFinder.Status.NO_VALUE) {
+            // A mistake in the statement itself is reported there; one elsewhere that the
+            // equation reaches is named here too, so the unsolved value is never a mystery.
+            List<dev.plumb.diagnostics.Diagnostic> elsewhere = reporter.since(before).stream()
+                .filter(d -> d.span().start() < f.span().start() || d.span().start() >= f.span().end()).toList();
+            if (!elsewhere.isEmpty()) reportNotEvaluated(f, Value.of(at, dim), unit, elsewhere);
+            return failed(name);
+        }
         switch (result.status()) {
-            case NO_VALUE -> {
-                return failed(name);
-            }
             case NO_ROOT -> {
                 reportNoRoot(f, result, dim, unit, sides[0].dimension());
                 return failed(name);
@@ -127,10 +139,13 @@ final class SeekRunner {
         return new Evaluator(scope, at, java.util.Map.of(), r, text, units);
     }
 
-    /** Once, for real, at the root (or the bracket's low end when there is none): reports the equation's own findings. */
+    /**
+     * Once, for real, at the root (or the bracket's low end when there is none): reports the
+     * equation's own findings, and the dependents' to {@code dependentsTo}.
+     */
     private Value[] finalSides(String name, Dimension dim, double at, List<Statement.Definition> dependents,
-                               Statement.Seek f) {
-        Environment trial = plan.evaluate(env, java.util.Map.of(name, Value.of(at, dim)), dependents, new Reporter());
+                               Statement.Seek f, Reporter dependentsTo) {
+        Environment trial = plan.evaluate(env, java.util.Map.of(name, Value.of(at, dim)), dependents, dependentsTo);
         Evaluator real = evaluator(trial, reporter);
         Value lhs = real.eval(f.lhs());
         Value rhs = real.eval(f.rhs());
@@ -146,6 +161,23 @@ final class SeekRunner {
 
     private static Outcome failed(String name) {
         return new Outcome(Value.UNKNOWN, null);
+    }
+
+    /** The equation has no value: says so, and why, with the first finding the real evaluation gave. */
+    private void reportNotEvaluated(Statement.Seek f, Value at, Unit unit, List<dev.plumb.diagnostics.Diagnostic> causes) {
+        String name = f.name().text();
+        String equation = Shown.source(text, f.equation());
+        String where = name + " = " + Shown.value(at, unit, 4);
+        String why;
+        {
+            dev.plumb.diagnostics.Diagnostic first = causes.get(0);
+            int line = (int) text.substring(0, Math.min(first.span().start(), text.length())).chars().filter(ch -> ch == '\n')
+                .count() + 1;
+            why = "on line " + line + ", " + first.message() + (causes.size() > 1 ? " (and " + (causes.size() - 1)
+                + " more finding" + (causes.size() > 2 ? "s" : "") + ")" : "");
+        }
+        reporter.report(Code.SOLVE_NOT_EVALUATED, f.name().span(), name + " is not solved: the equation `" + equation
+            + "` cannot be evaluated at " + where + ": " + why + "; fix that, and the solve runs");
     }
 
     private void reportNoRoot(Statement.Seek f, RootFinder.Result r, Dimension dim, Unit unit, Dimension residualDim) {

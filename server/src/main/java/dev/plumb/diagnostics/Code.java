@@ -31,6 +31,7 @@ public enum Code {
     SOLVE_NO_ROOT("solve.no-root", Severity.ERROR),
     SOLVE_NOT_CONVERGED("solve.not-converged", Severity.ERROR),
     SOLVE_MULTIPLE_ROOTS("solve.multiple-roots", Severity.WARNING),
+    SOLVE_NOT_EVALUATED("solve.not-evaluated", Severity.ERROR),
     INPUT_UNUSED("input.unused", Severity.HINT),
     BASIS_UNKNOWN("basis.unknown", Severity.ERROR),
     BASIS_AREA("basis.area", Severity.WARNING),

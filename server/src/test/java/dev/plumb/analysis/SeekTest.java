@@ -134,6 +134,7 @@ class SeekTest {
         Fixture.checkResource("solve.no-root.plumb");
         Fixture.checkResource("solve.not-converged.plumb");
         Fixture.checkResource("solve.multiple-roots.plumb");
+        Fixture.checkResource("solve.not-evaluated.plumb");
     }
 
     @Test
@@ -164,6 +165,28 @@ class SeekTest {
     void errorsInTheEquationAreReportedOnceAtTheirPlace() {
         Analysis a = Fixture.analyze("seek e in 1 m .. 2 m where e = 3 s\nseek f in 1 .. 2 where f = spedd\n");
         assertEquals(List.of(Code.UNIT_MISMATCH, Code.NAME_UNKNOWN), codes(a));
+    }
+
+    @Test
+    void aMistakeInADependentIsReportedAtItsLineAsWithoutTheSolve() {
+        // The same three mistakes, once with V given and once with V solved for: each is reported
+        // at its own line either way, and the solve adds only its own error naming the first.
+        String mistakes = """
+            Re = reynolds(1.2 kg/m^3, V, 0.05 m, 15 cSt)
+            M  = W * 0.3 m + W * V / (1 m/s)
+            k  = ln(V * 1 s)
+            F  = 0.5 * 1.2 kg/m^3 * V^2 * 0.002 m^2 + 0 N * (Re + M / (1 N*m) + k)
+            """;
+        Analysis given = Fixture.analyze("V = 10 m/s\nW = 0.4 N\n" + mistakes);
+        Analysis solved = Fixture.analyze("seek V in 1 m/s .. 100 m/s where F = W\nW = 0.4 N\n" + mistakes);
+        assertEquals(List.of("unit.mismatch@3", "unit.mismatch@4", "unit.not-dimensionless@5"), found(given));
+        assertEquals(found(given), found(solved).stream().filter(s -> !s.startsWith("solve.")).toList());
+        assertEquals(List.of("solve.not-evaluated@1"), found(solved).stream().filter(s -> s.startsWith("solve.")).toList());
+    }
+
+    /** "code@line" of every finding, in order. */
+    private static List<String> found(Analysis a) {
+        return a.diagnostics().stream().map(d -> d.code().id() + "@" + a.lines().line(d.span().start())).toList();
     }
 
     @Test
