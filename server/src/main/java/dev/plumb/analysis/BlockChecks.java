@@ -149,7 +149,7 @@ final class BlockChecks {
 
     /** A definition whose formula is a call of a correlation or table column carries that origin. */
     static Origin origin(Expr e, Scope scope, UnitRegistry units) {
-        if (!(e instanceof Expr.Call c)) return null;
+        if (!(Expr.inner(e) instanceof Expr.Call c)) return null;
         Binding b = scope.lookup(c.callee().text());
         if (b instanceof Binding.CorrelationBinding cb) {
             Statement.Correlation def = cb.def();

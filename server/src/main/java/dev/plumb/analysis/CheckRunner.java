@@ -87,7 +87,7 @@ final class CheckRunner {
             if (written != null) return written;
         }
         for (Expr e : operands) {
-            if (e instanceof Expr.Reference r && evaluator.lookup(r.name()) instanceof Binding.ValueBinding v
+            if (Expr.inner(e) instanceof Expr.Reference r && evaluator.lookup(r.name()) instanceof Binding.ValueBinding v
                 && v.display() != null) {
                 return v.display();
             }
@@ -104,7 +104,10 @@ final class CheckRunner {
 
     private String side(Expr e, Value v, Unit unit, int digits) {
         String shown = Shown.value(v, unit, digits);
-        if (e instanceof Expr.Quantity || (e instanceof Expr.Unary u && u.operand() instanceof Expr.Quantity)) return shown;
+        Expr inner = Expr.inner(e);
+        if (inner instanceof Expr.Quantity || (inner instanceof Expr.Unary u && Expr.inner(u.operand()) instanceof Expr.Quantity)) {
+            return shown;
+        }
         return Shown.source(text, e.span()) + " = " + shown;
     }
 }

@@ -178,7 +178,7 @@ final class CorrelationCall {
             String rad = QuantityFormat.number(v.si(), 4);
             String deg = QuantityFormat.number(Math.toDegrees(v.si()), 4);
             String head = name + " takes " + p.name().text() + " as an angle, but ";
-            String message = arg instanceof Expr.Quantity q && q.unit() == null
+            String message = Expr.inner(arg) instanceof Expr.Quantity q && q.unit() == null
                 ? head + q.numberText() + " is a plain number, read as " + rad + " rad (" + deg + "°): write "
                     + q.numberText() + " deg, or " + q.numberText() + " rad when radians are meant"
                 : head + operand.apply(arg, v) + " carries no angle unit, so it is read as " + rad + " rad (" + deg

@@ -18,7 +18,8 @@ final class DisplayChoice {
 
     /** The unit of a lone quantity, possibly negated ({@code 12 ft}, {@code -3 ft}); null for anything else. */
     static Unit written(Expr e, UnitRegistry units) {
-        if (e instanceof Expr.Unary u) e = u.operand();
+        e = Expr.inner(e);
+        if (e instanceof Expr.Unary u) e = Expr.inner(u.operand());
         if (e instanceof Expr.Quantity q && q.unit() != null && units.resolve(q.unit().text()) instanceof UnitResult.Ok ok) {
             return ok.unit();
         }

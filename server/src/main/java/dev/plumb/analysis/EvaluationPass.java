@@ -67,19 +67,19 @@ final class EvaluationPass {
         }
         if (s instanceof Statement.Function f) {
             String signature = f.name().text() + "(" + String.join(", ", f.params().stream().map(Ident::text).toList()) + ")";
-            rows.put(s, new Row.FunctionRow(f.span(), signature, "function", f.note()));
+            rows.put(s, new Row.FunctionRow(f.span(), signature, Row.Callable.FUNCTION, f.note()));
             return null;
         }
         if (s instanceof Statement.Correlation c) {
             String signature = c.name().text() + "(" + String.join(", ", c.params().stream().map(p -> p.name().text())
                 .toList()) + ")";
-            rows.put(s, new Row.FunctionRow(c.span(), signature, "correlation", c.title()));
+            rows.put(s, new Row.FunctionRow(c.span(), signature, Row.Callable.CORRELATION, c.title()));
             new BlockChecks(reporter, units).accuracy(c, scope, text);
             return null;
         }
         if (s instanceof Statement.Table t) {
             String signature = t.name().text() + "(" + t.param().name().text() + ")";
-            rows.put(s, new Row.FunctionRow(t.span(), signature, "table", t.title()));
+            rows.put(s, new Row.FunctionRow(t.span(), signature, Row.Callable.TABLE, t.title()));
             return null;
         }
         if (s instanceof Statement.Seek f) return seek(f, env, inCycle);

@@ -51,6 +51,7 @@ final class Evaluator {
     }
 
     Value eval(Expr e) {
+        if (e instanceof Expr.Group g) return eval(g.inner());
         if (e instanceof Expr.Binary b) return binary(b);
         if (e instanceof Expr.Reference r) return reference(r);
         if (e instanceof Expr.Quantity q) return quantity(q);
@@ -214,7 +215,7 @@ final class Evaluator {
     // ---- operators -------------------------------------------------------------------
 
     private Value unary(Expr.Unary u) {
-        if (u.op() == Expr.Op.NEGATE && u.operand() instanceof Expr.Quantity q) return quantity(q, -1);
+        if (u.op() == Expr.Op.NEGATE && Expr.inner(u.operand()) instanceof Expr.Quantity q) return quantity(q, -1);
         Value v = eval(u.operand());
         if (!v.known() || u.op() == Expr.Op.PLUS) return v;
         return new Value(-v.si(), v.dimension(), v.difference() ? Value.Temperature.DIFFERENCE : Value.Temperature.EITHER,
@@ -244,9 +245,9 @@ final class Evaluator {
      */
     String operand(Expr e, Value v) {
         String source = Shown.source(text, e.span());
-        if (e instanceof Expr.Quantity) return source;
+        if (Expr.inner(e) instanceof Expr.Quantity) return source;
         Unit unit = null;
-        if (e instanceof Expr.Reference r && !locals.containsKey(r.name())
+        if (Expr.inner(e) instanceof Expr.Reference r && !locals.containsKey(r.name())
             && lookup(r.name()) instanceof Binding.ValueBinding vb) {
             unit = vb.display();
         }

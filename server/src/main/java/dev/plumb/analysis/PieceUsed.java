@@ -46,6 +46,8 @@ final class PieceUsed {
             Binding b = scope.lookup(c.callee().text());
             if (b instanceof Binding.CorrelationBinding || b instanceof Binding.TableBinding) out.add(c.callee().text());
             for (Expr a : c.args()) collect(a, scope, out);
+        } else if (e instanceof Expr.Group g) {
+            collect(g.inner(), scope, out);
         } else if (e instanceof Expr.Unary u) {
             collect(u.operand(), scope, out);
         } else if (e instanceof Expr.Binary b) {

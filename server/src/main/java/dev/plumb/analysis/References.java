@@ -16,6 +16,8 @@ final class References {
         } else if (e instanceof Expr.Call c) {
             visit.accept(c.callee().text(), c.callee().span());
             for (Expr a : c.args()) each(a, visit);
+        } else if (e instanceof Expr.Group g) {
+            each(g.inner(), visit);
         } else if (e instanceof Expr.Unary u) {
             each(u.operand(), visit);
         } else if (e instanceof Expr.Binary b) {

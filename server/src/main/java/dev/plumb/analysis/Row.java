@@ -35,8 +35,18 @@ public sealed interface Row {
         }
     }
 
-    /** A function, correlation or table column; kind is "function", "correlation" or "table". */
-    record FunctionRow(Span span, String signature, String kind, String note) implements Row {
+    /** What a callable row defines. */
+    enum Callable {
+        FUNCTION, CORRELATION, TABLE;
+
+        /** The word for people: "function", "correlation", "table". */
+        public String word() {
+            return name().toLowerCase(java.util.Locale.ROOT);
+        }
+    }
+
+    /** A function, correlation or table column. */
+    record FunctionRow(Span span, String signature, Callable kind, String note) implements Row {
     }
 
     /** A check; {@code passed} is null when it could not be evaluated. */

@@ -75,12 +75,12 @@ public final class Stdlib {
         Map<String, Binding> out = new LinkedHashMap<>();
         for (Analysis a : files) {
             for (Row r : a.rows()) {
-                if (!(r instanceof Row.FunctionRow f) || f.kind().equals("function")) continue;
+                if (!(r instanceof Row.FunctionRow f) || f.kind() == Row.Callable.FUNCTION) continue;
                 String name = f.signature().substring(0, f.signature().indexOf('('));
                 Binding b = scope.lookup(name);
                 if (b != null) {
                     out.put(name, b);
-                } else if (f.kind().equals("table")) {
+                } else if (f.kind() == Row.Callable.TABLE) {
                     // A table with several output columns is called by column: water.rho, water.mu.
                     List<Statement.Column> columns = tableNamed(a, name).columns();
                     for (Statement.Column column : columns.subList(1, columns.size())) {

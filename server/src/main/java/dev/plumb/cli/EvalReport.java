@@ -41,7 +41,7 @@ final class EvalReport {
                     .stripTrailing());
                 if (steps && v.solution() != null) writeSteps(out, v.solution());
             } else if (r instanceof Row.FunctionRow f) {
-                out.println("  " + f.signature() + "  (" + f.kind() + ")" + (f.note() == null ? "" : "  " + f.note()));
+                out.println("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note()));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "?" : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();

@@ -25,7 +25,7 @@ public final class Folding {
                 if (sectionStart != null && lastLine > sectionStart) out.add(new Fold(sectionStart, lastLine, "region"));
                 sectionStart = first;
             }
-            if (r instanceof Row.FunctionRow f && !f.kind().equals("function") && last > first) {
+            if (r instanceof Row.FunctionRow f && f.kind() != Row.Callable.FUNCTION && last > first) {
                 out.add(new Fold(first, last, "region"));
             }
             lastLine = Math.max(lastLine, last);

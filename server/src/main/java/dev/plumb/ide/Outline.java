@@ -41,22 +41,22 @@ public final class Outline {
     }
 
     private static Symbol section(String title, Span span, Span heading, List<Symbol> children) {
-        return new Symbol(title, "section", "", span, heading, children);
+        return new Symbol(title, Symbol.Kind.SECTION, "", span, heading, children);
     }
 
     private static Symbol symbol(Analysis a, Row r) {
         if (r instanceof Row.ValueRow v) {
-            return new Symbol(v.name(), v.input() ? "input" : "value", v.shown(), v.span(), nameSpan(a, v.name(), v.span()),
+            return new Symbol(v.name(), v.input() ? Symbol.Kind.INPUT : Symbol.Kind.VALUE, v.shown(), v.span(), nameSpan(a, v.name(), v.span()),
                 List.of());
         }
         if (r instanceof Row.FunctionRow f) {
             String name = f.signature().substring(0, f.signature().indexOf('('));
-            return new Symbol(f.signature(), f.kind(), f.note() == null ? "" : f.note(), f.span(), nameSpan(a, name, f.span()),
+            return new Symbol(f.signature(), Symbol.Kind.valueOf(f.kind().name()), f.note() == null ? "" : f.note(), f.span(), nameSpan(a, name, f.span()),
                 List.of());
         }
         if (r instanceof Row.CheckRow c) {
             String mark = c.passed() == null ? "?" : c.passed() ? "✓" : "✗";
-            return new Symbol("check " + c.source(), "check", mark, c.span(), c.span(), List.of());
+            return new Symbol("check " + c.source(), Symbol.Kind.CHECK, mark, c.span(), c.span(), List.of());
         }
         return null;
     }

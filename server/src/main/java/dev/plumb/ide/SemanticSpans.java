@@ -54,6 +54,7 @@ public final class SemanticSpans {
         if (e instanceof Expr.Quantity q && q.unit() != null) out.add(new Token(q.unit().span(), Type.UNIT));
         else if (e instanceof Expr.Call c) c.args().forEach(x -> expr(x, out));
         else if (e instanceof Expr.Unary u) expr(u.operand(), out);
+        else if (e instanceof Expr.Group g) expr(g.inner(), out);
         else if (e instanceof Expr.Binary b) {
             expr(b.left(), out);
             expr(b.right(), out);

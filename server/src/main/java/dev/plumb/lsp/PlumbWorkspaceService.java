@@ -59,8 +59,8 @@ final class PlumbWorkspaceService implements WorkspaceService {
 
     private void collect(Analysis a, String uri, List<Symbol> symbols, String query, List<WorkspaceSymbol> out) {
         for (Symbol s : symbols) {
-            if (!s.kind().equals("section") && s.name().toLowerCase(java.util.Locale.ROOT).contains(query)) {
-                out.add(new WorkspaceSymbol(s.name(), s.kind().equals("input") ? SymbolKind.Constant : SymbolKind.Variable,
+            if (s.kind() != dev.plumb.ide.Symbol.Kind.SECTION && s.name().toLowerCase(java.util.Locale.ROOT).contains(query)) {
+                out.add(new WorkspaceSymbol(s.name(), s.kind() == dev.plumb.ide.Symbol.Kind.INPUT ? SymbolKind.Constant : SymbolKind.Variable,
                     Either.forLeft(new Location(uri, Positions.range(a.text(), s.selection().start(), s.selection().end(),
                         server.encoding())))));
             }

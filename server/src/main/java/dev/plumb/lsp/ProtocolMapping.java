@@ -104,14 +104,14 @@ final class ProtocolMapping {
         return out;
     }
 
-    private static SymbolKind kind(String kind) {
+    private static SymbolKind kind(Symbol.Kind kind) {
         return switch (kind) {
-            case "section" -> SymbolKind.Namespace;
-            case "input" -> SymbolKind.Constant;
-            case "function", "correlation" -> SymbolKind.Function;
-            case "table" -> SymbolKind.Struct;
-            case "check" -> SymbolKind.Boolean;
-            default -> SymbolKind.Variable;
+            case SECTION -> SymbolKind.Namespace;
+            case INPUT -> SymbolKind.Constant;
+            case FUNCTION, CORRELATION -> SymbolKind.Function;
+            case TABLE -> SymbolKind.Struct;
+            case CHECK -> SymbolKind.Boolean;
+            case VALUE -> SymbolKind.Variable;
         };
     }
 }

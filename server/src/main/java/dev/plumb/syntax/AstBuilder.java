@@ -408,7 +408,8 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     @Override
     public Object visitParenthesized(PlumbParser.ParenthesizedContext ctx) {
-        return visit(ctx.expr());
+        Expr inner = expr(ctx.expr());
+        return new Expr.Group(inner.span(), span(ctx), inner);
     }
 
     // ---- helpers ---------------------------------------------------------------------

@@ -3,9 +3,25 @@ package dev.plumb.syntax;
 import dev.plumb.diagnostics.Span;
 import java.util.List;
 
-/** Expression nodes. Parentheses leave no node: the inner expression keeps its own span. */
+/**
+ * Expression nodes. Parentheses the user wrote are kept ({@link Group}), so that what shows a
+ * formula can show it as written; what computes with it looks through them ({@link #inner}).
+ */
 public sealed interface Expr {
     Span span();
+
+    /** The expression inside any parentheses around it. */
+    static Expr inner(Expr e) {
+        while (e instanceof Group g) e = g.inner();
+        return e;
+    }
+
+    /**
+     * {@code ( inner )}. {@code span} is the inner expression's, what a finding about the value
+     * points at; {@code written} covers the parentheses too, for what shows the formula as written.
+     */
+    record Group(Span span, Span written, Expr inner) implements Expr {
+    }
 
     /** A number with an optional unit written right after it: {@code 1.2 kg/m^3}. */
     record Quantity(Span span, double number, String numberText, UnitText unit) implements Expr {

@@ -86,6 +86,7 @@ final class Shift {
         if (e instanceof Expr.Call c) return new Expr.Call(span(c.span()), ident(c.callee()), exprs(c.args()));
         if (e instanceof Expr.Unary u) return new Expr.Unary(span(u.span()), u.op(), expr(u.operand()));
         if (e instanceof Expr.Piecewise p) return new Expr.Piecewise(span(p.span()), each(p.pieces(), this::piece));
+        if (e instanceof Expr.Group g) return new Expr.Group(span(g.span()), span(g.written()), expr(g.inner()));
         Expr.Binary b = (Expr.Binary) e;
         return new Expr.Binary(span(b.span()), b.op(), expr(b.left()), expr(b.right()));
     }

@@ -41,6 +41,17 @@ class ParserTest {
     }
 
     @Test
+    void parenthesesAreKeptAsWritten() {
+        String text = "x = 2 * (a + b)";
+        var d = assertInstanceOf(Statement.Definition.class, one(text));
+        var product = assertInstanceOf(Expr.Binary.class, d.expr());
+        var group = assertInstanceOf(Expr.Group.class, product.right());
+        assertEquals("(a + b)", text.substring(group.written().start(), group.written().end()));
+        assertEquals("a + b", text.substring(group.span().start(), group.span().end()));
+        assertInstanceOf(Expr.Binary.class, Expr.inner(group));
+    }
+
+    @Test
     void narrativeSectionAndTrailingComment() {
         List<Statement> s = statements("# Prose for the reviewer\nsection \"Air\"\nx = 1   # a code comment\n");
         assertEquals("Prose for the reviewer", ((Statement.Narrative) s.get(0)).text());
