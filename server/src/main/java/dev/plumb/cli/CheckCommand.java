@@ -1,7 +1,6 @@
 package dev.plumb.cli;
 
 import dev.plumb.analysis.Batch;
-import dev.plumb.analysis.FileSources;
 import dev.plumb.analysis.Workspace;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -47,7 +46,7 @@ final class CheckCommand implements Callable<Integer> {
             err.println("plumb: no .plumb files in " + paths);
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(new FileSources(), common.settings());
+        Workspace workspace = new Workspace(common.sources(), common.settings());
         List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
         switch (format) {
             case json -> JsonReport.write(results, out);

@@ -2,7 +2,6 @@ package dev.plumb.cli;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Batch;
-import dev.plumb.analysis.FileSources;
 import dev.plumb.analysis.Workspace;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -39,7 +38,7 @@ final class EvalCommand implements Callable<Integer> {
             err.println("plumb: no such file: " + file);
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(new FileSources(), common.settings());
+        Workspace workspace = new Workspace(common.sources(), common.settings());
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();

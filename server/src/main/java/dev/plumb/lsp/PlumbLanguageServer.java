@@ -112,9 +112,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         boolean inlay = td != null && td.getInlayHint() != null;
         boolean lens = td != null && td.getCodeLens() != null;
         boolean neovim = clientName != null && clientName.toLowerCase(java.util.Locale.ROOT).contains("neovim");
-        ServerSettings d = ServerSettings.DEFAULT;
-        return new ServerSettings(d.digits(), inlay, !inlay, !inlay && !lens && !neovim, d.debounceMs(), d.onSaveOnly(),
-            d.criticalReynolds());
+        return ServerSettings.DEFAULT.withChannels(inlay, !inlay, !inlay && !lens && !neovim);
     }
 
     /** Asks the client for the "plumb" settings, without ever blocking the message thread. */
