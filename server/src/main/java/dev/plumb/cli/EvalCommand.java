@@ -32,7 +32,8 @@ final class EvalCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
+        Style style = common.style();
+        PrintWriter out = style.writer(spec.commandLine().getOut());
         PrintWriter err = spec.commandLine().getErr();
         if (!Files.isRegularFile(file)) {
             err.println("plumb: no such file: " + file);
@@ -42,7 +43,6 @@ final class EvalCommand implements Callable<Integer> {
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();
-        Style style = common.style();
         EvalReport.write(a, out, style, steps);
         if (!checked.diagnostics().isEmpty()) {
             out.println();
