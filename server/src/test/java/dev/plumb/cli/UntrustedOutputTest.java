@@ -76,4 +76,17 @@ class UntrustedOutputTest {
             walk.visitFileFailed(locked, new java.nio.file.AccessDeniedException(locked.toString())));
         assertEquals(java.util.List.of(new PlumbFiles.Unreadable(locked, "permission denied")), unreadable);
     }
+
+    @Test
+    void digitsOutsideOneToFifteenAreRefused() throws IOException {
+        Path f = write("ok.plumb", "x = 1.23456 m\n");
+        for (String digits : new String[] {"0", "-5", "16", "2147483647"}) {
+            Cli run = Cli.run("eval", "--digits=" + digits, f.toString());
+            assertEquals(2, run.exitCode(), digits + ": " + run.out() + run.err());
+            assertTrue(run.err().contains("--digits must be 1 to 15 significant figures, not " + digits), run.err());
+            assertEquals("", run.out());
+        }
+        assertEquals(0, Cli.run("check", "--digits=15", f.toString()).exitCode());
+        assertEquals(2, Cli.run("check", "--max-file-bytes=0", f.toString()).exitCode());
+    }
 }
