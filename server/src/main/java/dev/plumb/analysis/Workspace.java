@@ -188,6 +188,11 @@ public final class Workspace {
             } catch (StackOverflowError e) {
                 return failure(file, text, Code.SYNTAX_NESTING,
                     "this document nests expressions too deeply to evaluate: give inner parts names of their own", 0);
+            } catch (OutOfMemoryError e) {
+                // One analysis failed; what it held is garbage now, and the process carries on.
+                return failure(file, text, Code.LIMIT_MEMORY, "checking this document needed more memory than Plumb has ("
+                    + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB): split it into files that `use` each other, "
+                    + "or give Plumb more memory (-Xmx, see README)", 0);
             }
         });
     }

@@ -136,7 +136,7 @@ final class Analyses {
             if (a == null || !store(d, a)) return;
             publisher.accept(new OpenDocumentResult(d, a));
             for (String user : usersOf(d.path(), uri)) schedule(user);
-        } catch (RuntimeException | StackOverflowError e) {
+        } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
             System.err.println("plumb: analysis of " + uri + " failed: " + e);
             trouble.accept("Plumb could not check " + d.path().getFileName() + " (" + e
                 + "); the problems shown for it may be out of date. Please report this, with the file.");
