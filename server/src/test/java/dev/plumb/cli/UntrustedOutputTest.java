@@ -35,7 +35,7 @@ class UntrustedOutputTest {
 
     @Test
     void notesTitlesAndNamesReachNoTerminalControls() throws IOException {
-        Path f = write("calc.plumb", "title: " + HOSTILE + "\n# " + HOSTILE + "\ninput x = 2 m  \"" + HOSTILE + "\"\n"
+        Path f = write("calc.plumb", "title \"" + HOSTILE + "\"\nauthor \"" + HOSTILE + "\"\n# " + HOSTILE + "\ninput x = 2 m  \"" + HOSTILE + "\"\n"
             + "y = x + 1 s  \"" + HOSTILE + "\"\ncheck x < 1 m \"" + HOSTILE + "\"\n");
         for (String[] args : new String[][] {{"check", "--no-color", f.toString()}, {"check", "--color", f.toString()},
             {"eval", "--no-color", f.toString()}, {"eval", "--color", f.toString()}}) {
@@ -45,6 +45,7 @@ class UntrustedOutputTest {
             noControls(run.err());
             assertTrue(run.out().contains("\\u001B[2K"), run.out());
             assertTrue(run.out().contains("\\u202E"), run.out());
+            assertFalse(run.out().contains("syntax.error"), run.out());
         }
     }
 
