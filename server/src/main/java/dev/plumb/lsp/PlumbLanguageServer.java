@@ -211,7 +211,17 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
                 file = libraryFile(Stdlib.ROOT.relativize(file).toString());
             }
             OpenDocument open = documents.byPath(file);
-            text = open != null ? open.text() : Files.readString(file);
+            if (open != null) {
+                text = open.text();
+            } else if (t.file().startsWith(Stdlib.ROOT)) {
+                text = Files.readString(file); // our own copy out of the jar
+            } else {
+                // Through the same rules as every read of a calc: a file swapped for a pipe since it
+                // was analysed must not block this request.
+                OverlaySources sources = new OverlaySources(documents, settings.maxFileBytes());
+                if (!(sources.load(file, sources.workspaceRoot(file)) instanceof dev.plumb.analysis.Sources.Text read)) return null;
+                text = read.text();
+            }
         } catch (IOException | RuntimeException e) {
             return null;
         }
