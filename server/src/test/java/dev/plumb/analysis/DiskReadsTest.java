@@ -19,7 +19,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** Reads of untrusted calcs: links out of the workspace, special files and oversized files. */
 @Timeout(value = 60, unit = TimeUnit.SECONDS)
-class DiskReadsTest {
+public class DiskReadsTest {
     private static final String SECRET = "hunter2_secret_token";
 
     @TempDir
@@ -106,7 +106,7 @@ class DiskReadsTest {
         assertTrue(message.contains("not a regular file"), message);
     }
 
-    static boolean mkfifo(Path at) {
+    public static boolean mkfifo(Path at) {
         try {
             Process p = new ProcessBuilder("mkfifo", at.toString()).redirectErrorStream(true).start();
             return p.waitFor(20, TimeUnit.SECONDS) && p.exitValue() == 0 && Files.exists(at);
