@@ -214,7 +214,10 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
             if (open != null) {
                 text = open.text();
             } else if (t.file().startsWith(Stdlib.ROOT)) {
-                text = Files.readString(file); // our own copy out of the jar
+                try (var in = Stdlib.class.getResourceAsStream("/stdlib/" + Stdlib.ROOT.relativize(t.file()))) {
+                    if (in == null) return null;
+                    text = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+                }
             } else {
                 // Through the same rules as every read of a calc: a file swapped for a pipe since it
                 // was analysed must not block this request.
