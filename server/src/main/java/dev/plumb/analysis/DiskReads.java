@@ -44,7 +44,10 @@ public final class DiskReads {
             return new Sources.Missing("it is not a regular file (a folder, a device or a pipe): use a .plumb file");
         }
         if (!real.getFileName().toString().endsWith(".plumb")) {
-            return new Sources.Missing("it is a link to a file that is not a .plumb file: use the calc itself");
+            // A file the pipeline wrote (.env, credentials) must never be shown as a calc's text.
+            return new Sources.Missing(file.getFileName().toString().endsWith(".plumb")
+                ? "it is a link to a file that is not a .plumb file: use the calc itself"
+                : "it is not a .plumb file: only calcs are read, so give the file the .plumb extension");
         }
         byte[] bytes;
         try (InputStream in = Files.newInputStream(real, LinkOption.NOFOLLOW_LINKS)) {

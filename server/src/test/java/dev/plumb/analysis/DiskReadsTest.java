@@ -80,6 +80,14 @@ public class DiskReadsTest {
     }
 
     @Test
+    void aFileThatIsNotACalcIsNotRead() throws IOException {
+        Files.writeString(root.resolve(".env"), SECRET + "=1\n");
+        Analysis a = analyzeUse(".env");
+        noSecretIn(a);
+        assertTrue(only(a, Code.USE_NOT_FOUND).message().contains("it is not a .plumb file"));
+    }
+
+    @Test
     void aTopLevelFileLinkedFromOutsideIsRefused() throws IOException {
         Path link = Files.createSymbolicLink(root.resolve("calc.plumb"), outside.resolve("secret.plumb"));
         Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyze(link);
