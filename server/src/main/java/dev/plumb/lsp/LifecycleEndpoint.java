@@ -20,11 +20,16 @@ final class LifecycleEndpoint extends RemoteEndpoint {
     private enum State { NEW, RUNNING, SHUT_DOWN }
 
     private final MessageConsumer out;
+    private final Endpoint local;
+    private final java.io.PrintStream log;
     private State state = State.NEW;
 
-    LifecycleEndpoint(MessageConsumer out, Endpoint local, Function<Throwable, ResponseError> exceptionHandler) {
+    LifecycleEndpoint(MessageConsumer out, Endpoint local, Function<Throwable, ResponseError> exceptionHandler,
+                      java.io.PrintStream log) {
         super(out, local, exceptionHandler);
         this.out = out;
+        this.local = local;
+        this.log = log;
     }
 
     @Override
@@ -67,6 +72,12 @@ final class LifecycleEndpoint extends RemoteEndpoint {
             if (!exit && state != State.RUNNING) return;
             if (!exit && notification.getParams() == null && !"initialized".equals(method)) return;
         }
-        super.handleNotification(notification);
+        if (handleCancellation(notification)) return;
+        try {
+            local.notify(method, notification.getParams());
+        } catch (RuntimeException e) {
+            // A notification has no answer: one line on stderr, not the library's stack trace.
+            log.println("plumb lsp: could not handle " + method + ": " + e);
+        }
     }
 }

@@ -32,7 +32,7 @@ final class PlumbLauncher {
             protected RemoteEndpoint createRemoteEndpoint(MessageJsonHandler jsonHandler) {
                 MessageConsumer outgoing = wrapMessageConsumer(new StreamMessageConsumer(output, jsonHandler));
                 RemoteEndpoint endpoint = new LifecycleEndpoint(outgoing, ServiceEndpoints.toEndpoint(localServices),
-                    exceptionHandler);
+                    exceptionHandler, log);
                 jsonHandler.setMethodProvider(endpoint);
                 endpoint.setJsonHandler(jsonHandler);
                 return endpoint;

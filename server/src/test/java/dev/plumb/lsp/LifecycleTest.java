@@ -200,4 +200,19 @@ class LifecycleTest {
         String log = serverLog.toString(StandardCharsets.UTF_8);
         assertTrue(log.contains("skipped a message without a valid Content-Length header"), log);
     }
+
+    @Test
+    void aNotificationThatFailsIsOneLineAndABrokenBodyIsAnErrorNotAHang() throws Exception {
+        call("initialize", INIT);
+        sendRaw(frame("{\"jsonrpc\":\"2.0\",\"method\":\"textDocument/didOpen\",\"params\":{\"textDocument\":{}}}"));
+        sendRaw(frame("{\"jsonrpc\":\"2.0\",\"id\":800,\"method\":\"textDocument/hover\",\"params\":{\"textDocument\":"));
+        JsonObject after = call("textDocument/hover", HOVER);
+        assertFalse(after.has("error"), after::toString);
+        synchronized (logged) {
+            assertEquals(List.of(), logged.stream().filter(r -> r.getThrown() != null).map(r -> r.getThrown().toString()).toList());
+        }
+        String log = serverLog.toString(StandardCharsets.UTF_8);
+        assertTrue(log.contains("plumb lsp: could not handle textDocument/didOpen"), log);
+        assertFalse(log.contains("\tat "), log);
+    }
 }
