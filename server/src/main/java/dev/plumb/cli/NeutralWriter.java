@@ -36,6 +36,7 @@ final class NeutralWriter extends PrintWriter {
     }
 
     private String neutral(String s) {
+        if (s.equals(System.lineSeparator())) return s; // println's own line end, also \r\n
         if (s.indexOf('\u001b') < 0 || allowed.isEmpty()) return Printable.text(s);
         StringBuilder out = new StringBuilder(s.length());
         int from = 0;
