@@ -23,6 +23,16 @@ public record Analysis(Path file, String text, ParsedSource syntax, Map<String, 
                        List<Path> imports, List<Reference> references, List<CallSite> calls) {
 
     /**
+     * What stands in for a file or folder that could not be read at all: no text, one finding at
+     * its start. For callers outside the engine that find such a place themselves (a folder walk).
+     */
+    public static Analysis unreadable(Path file, dev.plumb.diagnostics.Code code, String message) {
+        Diagnostic d = Diagnostic.of(code, new dev.plumb.diagnostics.Span(0, 0), message);
+        return new Analysis(file, "", ParsedSource.unread(""), Map.of(), List.of(), List.of(d), new Scope(""), Map.of(),
+            List.of(), List.of(), List.of());
+    }
+
+    /**
      * A call of a correlation or table column in this document: its arguments and where they sit
      * in the range (for hover).
      *

@@ -104,9 +104,10 @@ final class Arithmetic {
 
     /** Reports a result that overflowed although its operands were finite. */
     private Value finite(Expr.Binary b, Value l, Value r, Value result) {
-        if (Double.isFinite(result.si())) return result;
+        if (Double.isFinite(result.si()) && !result.dimension().outOfRange()) return result;
         reporter.report(Code.MATH_NOT_FINITE, b.span(), "the result of " + Shown.source(text, b.span())
-            + " is too large to represent (" + operand.apply(b.left(), l) + ", " + operand.apply(b.right(), r) + ")");
+            + (result.dimension().outOfRange() ? " would have a unit with an exponent beyond ±" + Dimension.MAX_EXPONENT
+                : " is too large to represent") + " (" + operand.apply(b.left(), l) + ", " + operand.apply(b.right(), r) + ")");
         return Value.UNKNOWN;
     }
 

@@ -1,6 +1,5 @@
 package dev.plumb.analysis;
 
-import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.CharBuffer;
 import java.nio.charset.CharsetDecoder;
@@ -8,23 +7,29 @@ import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 
-/** Documents read from disk as strict UTF-8. */
+/** Documents read from disk as strict UTF-8, inside the workspace and up to a size limit ({@link DiskReads}). */
 public final class FileSources implements Sources {
+    private final long maxBytes;
+
+    public FileSources() {
+        this(DiskReads.DEFAULT_MAX_BYTES);
+    }
+
+    /** Sources that refuse a file larger than {@code maxBytes}. */
+    public FileSources(long maxBytes) {
+        this.maxBytes = maxBytes;
+    }
 
     @Override
-    public Loaded load(Path file) {
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            return new Missing("no such file");
-        } catch (IOException e) {
-            return new Missing(e.getClass().getSimpleName() + ": " + e.getMessage());
-        }
-        return decode(bytes);
+    public long maxBytes() {
+        return maxBytes;
+    }
+
+    @Override
+    public Loaded load(Path file, Path root) {
+        return DiskReads.read(file, root, maxBytes);
     }
 
     /** Strict UTF-8 decoding: a NUL byte or a malformed sequence means this is not a calc file. */

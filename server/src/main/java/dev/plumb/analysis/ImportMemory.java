@@ -21,13 +21,13 @@ public final class ImportMemory {
 
     /**
      * The kept analysis of a file and of every file it uses (the file itself included), when all
-     * of them still read the same; else null.
+     * of them still read the same (read under {@code root}); else null.
      */
-    Map<Path, Analysis> recall(Path file, Sources sources, Settings settings) {
+    Map<Path, Analysis> recall(Path file, Path root, Sources sources, Settings settings) {
         Entry e = entries.get(file);
         if (e == null || !e.settings().equals(settings)) return null;
         for (Map.Entry<Path, Analysis> used : e.used().entrySet()) {
-            if (!(sources.load(used.getKey()) instanceof Sources.Text now) || !now.text().equals(used.getValue().text())) {
+            if (!(sources.load(used.getKey(), root) instanceof Sources.Text now) || !now.text().equals(used.getValue().text())) {
                 return null;
             }
         }

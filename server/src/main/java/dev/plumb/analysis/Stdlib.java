@@ -155,7 +155,7 @@ public final class Stdlib {
     /** Reads library files from the jar. */
     private static final class ResourceSources implements Sources {
         @Override
-        public Loaded load(Path file) {
+        public Loaded load(Path file, Path root) {
             String text = file.startsWith(ROOT) ? read(ROOT.relativize(file).toString()) : null;
             return text == null ? new Missing("not in the standard library") : new Text(text);
         }

@@ -109,13 +109,15 @@ public final class Workspace {
     Imported analyzeImport(Path file, List<Path> chain, java.util.function.BooleanSupplier superseded) {
         Imported cached = cache.get(file);
         if (cached != null) return cached;
-        Map<Path, Analysis> kept = memory == null ? null : memory.recall(file, sources, settings);
+        // Every read is confined to the root of the file the analysis started from.
+        Path root = sources.workspaceRoot(chain.isEmpty() ? file : chain.get(0));
+        Map<Path, Analysis> kept = memory == null ? null : memory.recall(file, root, sources, settings);
         if (kept != null) {
             // The whole group goes in, so that circles through it are still found (importPath).
             kept.forEach((p, a) -> cache.putIfAbsent(p, new Imported(a, null)));
             return cache.get(file);
         }
-        Sources.Loaded loaded = sources.load(file);
+        Sources.Loaded loaded = sources.load(file, root);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
             fresh = new Imported(guarded(file, t.text(), null, chain, superseded), null);
@@ -128,21 +130,21 @@ public final class Workspace {
         Imported raced = cache.putIfAbsent(file, fresh);
         if (raced != null) return raced;
         if (memory != null && fresh.analysis() != null && loaded instanceof Sources.Text) {
-            Map<Path, Analysis> used = usedBy(file);
+            Map<Path, Analysis> used = usedBy(file, root);
             if (used != null) memory.remember(file, settings, used);
         }
         return fresh;
     }
 
     /** A file's analysis with those of every file it uses in turn, or null if one is not text. */
-    private Map<Path, Analysis> usedBy(Path file) {
+    private Map<Path, Analysis> usedBy(Path file, Path root) {
         Map<Path, Analysis> out = new java.util.HashMap<>();
         java.util.ArrayDeque<Path> todo = new java.util.ArrayDeque<>(List.of(file));
         while (!todo.isEmpty()) {
             Path p = todo.poll();
             if (out.containsKey(p)) continue;
             Imported done = cache.get(p);
-            if (done == null || done.analysis() == null || !(sources.load(p) instanceof Sources.Text)) return null;
+            if (done == null || done.analysis() == null || !(sources.load(p, root) instanceof Sources.Text)) return null;
             out.put(p, done.analysis());
             todo.addAll(done.analysis().imports());
         }
@@ -177,6 +179,9 @@ public final class Workspace {
 
     private Analysis guarded(Path file, String text, ParsedSource earlier, List<Path> chain,
                              java.util.function.BooleanSupplier superseded) {
+        if (DiskReads.exceeds(text, sources.maxBytes())) {
+            return failure(file, "", Code.FILE_UNREADABLE, "cannot check this document: " + DiskReads.tooLarge(sources.maxBytes()), 0);
+        }
         return DeepStack.call(() -> {
             try {
                 return new Analyzer(this, file, text, earlier, chain, settings, dev.plumb.units.UnitRegistry.standard(),
@@ -186,6 +191,11 @@ public final class Workspace {
             } catch (StackOverflowError e) {
                 return failure(file, text, Code.SYNTAX_NESTING,
                     "this document nests expressions too deeply to evaluate: give inner parts names of their own", 0);
+            } catch (OutOfMemoryError e) {
+                // One analysis failed; what it held is garbage now, and the process carries on.
+                return failure(file, text, Code.LIMIT_MEMORY, "checking this document needed more memory than Plumb has ("
+                    + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB): split it into files that `use` each other, "
+                    + "or give Plumb more memory (-Xmx, see README)", 0);
             }
         });
     }

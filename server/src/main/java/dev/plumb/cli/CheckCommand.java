@@ -1,10 +1,12 @@
 package dev.plumb.cli;
 
+import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Batch;
-import dev.plumb.analysis.FileSources;
+import dev.plumb.diagnostics.Code;
 import dev.plumb.analysis.Workspace;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
@@ -34,25 +36,33 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
+        Style style = common.style();
+        PrintWriter out = style.writer(spec.commandLine().getOut());
         PrintWriter err = spec.commandLine().getErr();
-        List<Path> files;
+        PlumbFiles.Expanded expanded;
         try {
-            files = PlumbFiles.expand(paths);
+            expanded = PlumbFiles.expand(paths);
         } catch (PlumbFiles.NoSuchPath e) {
             err.println("plumb: " + e.getMessage());
             return Main.USAGE;
         }
-        if (files.isEmpty()) {
+        List<Path> files = expanded.files();
+        if (files.isEmpty() && expanded.unreadable().isEmpty()) {
             err.println("plumb: no .plumb files in " + paths);
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(new FileSources(), common.settings());
-        List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
+        Workspace workspace = new Workspace(common.sources(), common.settings());
+        List<Batch.Checked> results = new ArrayList<>(
+            Batch.check(workspace, files, Runtime.getRuntime().availableProcessors()));
+        for (PlumbFiles.Unreadable u : expanded.unreadable()) {
+            Analysis a = Analysis.unreadable(u.path(), Code.FILE_UNREADABLE, "cannot read this folder ("
+                + u.reason() + "), so the calcs in it were not checked: let plumb read it, or name only readable folders");
+            results.add(new Batch.Checked(a, a.diagnostics()));
+        }
         switch (format) {
             case json -> JsonReport.write(results, out);
             case sarif -> SarifReport.write(results, spec.root().version()[0].replaceFirst("^plumb ", ""), out);
-            default -> TextReport.write(results, out, common.style());
+            default -> TextReport.write(results, out, style);
         }
         out.flush();
         return TextReport.Tally.of(results).exitCode();

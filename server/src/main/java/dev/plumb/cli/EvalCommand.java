@@ -2,7 +2,6 @@ package dev.plumb.cli;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Batch;
-import dev.plumb.analysis.FileSources;
 import dev.plumb.analysis.Workspace;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -33,17 +32,17 @@ final class EvalCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
+        Style style = common.style();
+        PrintWriter out = style.writer(spec.commandLine().getOut());
         PrintWriter err = spec.commandLine().getErr();
         if (!Files.isRegularFile(file)) {
             err.println("plumb: no such file: " + file);
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(new FileSources(), common.settings());
+        Workspace workspace = new Workspace(common.sources(), common.settings());
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();
-        Style style = common.style();
         EvalReport.write(a, out, style, steps);
         if (!checked.diagnostics().isEmpty()) {
             out.println();

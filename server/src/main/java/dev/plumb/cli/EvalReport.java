@@ -1,5 +1,6 @@
 package dev.plumb.cli;
 
+import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.analysis.Solution;
@@ -16,11 +17,12 @@ final class EvalReport {
     }
 
     static void write(Analysis a, PrintWriter out, Style style, boolean steps) {
-        String title = a.headers().getOrDefault("title", Location.path(a.file()));
+        // The calc's own text is neutralised before colours are added (NeutralWriter keeps those).
+        String title = Printable.line(a.headers().getOrDefault("title", Location.path(a.file())));
         out.println(style.bold(title));
         for (String key : new String[] {"author", "reviewer", "revision"}) {
             String v = a.headers().get(key);
-            if (v != null && !v.isEmpty()) out.println(key + ": " + v);
+            if (v != null && !v.isEmpty()) out.println(key + ": " + Printable.line(v));
         }
         int nameWidth = 0;
         int valueWidth = 0;
@@ -33,19 +35,19 @@ final class EvalReport {
         for (Row r : a.rows()) {
             if (r instanceof Row.SectionRow s) {
                 out.println();
-                out.println(style.bold(s.title()));
+                out.println(style.bold(Printable.line(s.title())));
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
-                out.println(("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + solved(v) + note)
-                    .stripTrailing());
+                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + solved(v)
+                    + note).stripTrailing());
                 if (steps && v.solution() != null) writeSteps(out, v.solution());
             } else if (r instanceof Row.FunctionRow f) {
-                out.println("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note()));
+                out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "?" : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();
-                out.println("  " + mark + "  check " + c.source() + "   [" + c.detail() + "]" + why);
+                out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + c.detail() + "]" + why));
             }
         }
     }

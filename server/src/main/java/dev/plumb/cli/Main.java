@@ -31,13 +31,16 @@ public final class Main implements Runnable {
     /** Runs the command line with the given streams; returns the exit code. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
         CommandLine cli = new CommandLine(new Main());
-        cli.setOut(new java.io.PrintWriter(out, true));
-        cli.setErr(new java.io.PrintWriter(err, true));
+        cli.setOut(new java.io.PrintWriter(new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8), true));
+        // Errors echo what was typed (paths, option values): neutralised like every report.
+        cli.setErr(new NeutralWriter(new java.io.OutputStreamWriter(err, StandardCharsets.UTF_8), java.util.Set.of()));
         cli.setExitCodeExceptionMapper(e -> USAGE);
         cli.getCommandSpec().parser().abbreviatedOptionsAllowed(false);
         cli.setParameterExceptionHandler((ex, a) -> {
-            err.println("plumb: " + ex.getMessage());
-            ex.getCommandLine().usage(err);
+            java.io.PrintWriter e = ex.getCommandLine().getErr();
+            e.println("plumb: " + ex.getMessage());
+            ex.getCommandLine().usage(e);
+            e.flush();
             return USAGE;
         });
         return cli.execute(args);

@@ -16,6 +16,19 @@ final class Style {
         return new Style(terminal && (noColor == null || noColor.isEmpty()));
     }
 
+    /** The escape sequences this style writes: the only ones {@link NeutralWriter} lets through. */
+    java.util.Set<String> sequences() {
+        if (!on) return java.util.Set.of();
+        java.util.Set<String> all = new java.util.HashSet<>();
+        for (String code : new String[] {"0", "1", "2", "31", "32", "33", "36"}) all.add("\u001b[" + code + "m");
+        return all;
+    }
+
+    /** A writer for people that lets through this style's colours and neutralises every other control. */
+    java.io.PrintWriter writer(java.io.Writer out) {
+        return new NeutralWriter(out, sequences());
+    }
+
     String severity(Severity s) {
         String code = switch (s) {
             case ERROR -> "31";

@@ -1,5 +1,6 @@
 package dev.plumb.cli;
 
+import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Batch;
 import dev.plumb.analysis.Row;
 import dev.plumb.diagnostics.Diagnostic;
@@ -27,7 +28,9 @@ final class TextReport {
     }
 
     static String line(Batch.Checked c, Diagnostic d, Style style) {
-        return Location.of(c.analysis(), d) + ": " + style.severity(d.severity()) + " " + d.code().id() + ": " + d.message();
+        // The calc's own text (names, notes, paths) is neutralised before colours are added.
+        return Printable.line(Location.of(c.analysis(), d)) + ": " + style.severity(d.severity()) + " " + d.code().id() + ": "
+            + Printable.line(d.message());
     }
 
     private static String plural(long n, String word) {

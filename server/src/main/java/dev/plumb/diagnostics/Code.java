@@ -40,7 +40,8 @@ public enum Code {
     USE_NOT_FOUND("use.not-found", Severity.ERROR),
     USE_CYCLE("use.cycle", Severity.ERROR),
     USE_OUTSIDE_WORKSPACE("use.outside-workspace", Severity.ERROR),
-    USE_HAS_ERRORS("use.has-errors", Severity.ERROR);
+    USE_HAS_ERRORS("use.has-errors", Severity.ERROR),
+    LIMIT_MEMORY("limit.memory", Severity.ERROR);
 
     private final String id;
     private final Severity severity;

@@ -24,6 +24,11 @@ public final class HoverText {
 
     /** The hover at an offset: over a name used, or over a name where it is defined; null elsewhere. */
     public static String at(Analysis a, int offset) {
+        // A calc may come from anyone: its notes and names are shown without their control characters.
+        return dev.plumb.diagnostics.Printable.text(markdown(a, offset));
+    }
+
+    private static String markdown(Analysis a, int offset) {
         String name = Occurrences.nameAt(a, offset);
         if (name == null) return null;
         Binding b = a.scope().lookup(name);

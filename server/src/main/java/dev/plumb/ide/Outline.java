@@ -1,5 +1,6 @@
 package dev.plumb.ide;
 
+import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
 import dev.plumb.analysis.Row;
@@ -41,7 +42,7 @@ public final class Outline {
     }
 
     private static Symbol section(String title, Span span, Span heading, List<Symbol> children) {
-        return new Symbol(title, Symbol.Kind.SECTION, "", span, heading, children);
+        return new Symbol(Printable.line(title), Symbol.Kind.SECTION, "", span, heading, children);
     }
 
     private static Symbol symbol(Analysis a, Row r) {
@@ -51,12 +52,13 @@ public final class Outline {
         }
         if (r instanceof Row.FunctionRow f) {
             String name = f.signature().substring(0, f.signature().indexOf('('));
-            return new Symbol(f.signature(), Symbol.Kind.valueOf(f.kind().name()), f.note() == null ? "" : f.note(), f.span(), nameSpan(a, name, f.span()),
+            return new Symbol(f.signature(), Symbol.Kind.valueOf(f.kind().name()), f.note() == null ? "" : Printable.line(f.note()),
+                f.span(), nameSpan(a, name, f.span()),
                 List.of());
         }
         if (r instanceof Row.CheckRow c) {
             String mark = c.passed() == null ? "?" : c.passed() ? "✓" : "✗";
-            return new Symbol("check " + c.source(), Symbol.Kind.CHECK, mark, c.span(), c.span(), List.of());
+            return new Symbol(Printable.line("check " + c.source()), Symbol.Kind.CHECK, mark, c.span(), c.span(), List.of());
         }
         return null;
     }

@@ -76,6 +76,7 @@ public final class Signatures {
         }
         String valid = StdlibCatalog.validText(b);
         if (!valid.isEmpty()) d.append("\nvalid: ").append(valid);
-        return d.toString().strip();
+        // A user's correlation title is shown in the editor: without its control characters.
+        return dev.plumb.diagnostics.Printable.text(d.toString().strip());
     }
 }

@@ -61,12 +61,12 @@ final class Analyses {
      * The engine over the open buffers and the files, keeping used files' analyses between runs
      * ({@link ImportMemory}): typing in a calc does not analyse the files it uses again.
      */
-    static Engine workspaceEngine(DocumentStore documents) {
+    static Engine workspaceEngine(DocumentStore documents, java.util.function.LongSupplier maxBytes) {
         AtomicReference<ImportMemory> kept = new AtomicReference<>(new ImportMemory());
         return new Engine() {
             @Override
             public Analysis analyze(Path file, String text, ParsedSource earlier, BooleanSupplier superseded, Settings s) {
-                return new Workspace(new OverlaySources(documents), s, kept.get()).analyzeText(file, text, earlier, superseded);
+                return new Workspace(new OverlaySources(documents, maxBytes.getAsLong()), s, kept.get()).analyzeText(file, text, earlier, superseded);
             }
 
             @Override
@@ -80,7 +80,7 @@ final class Analyses {
 
     Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher,
              Consumer<String> trouble) {
-        this(documents, settings, publisher, trouble, workspaceEngine(documents));
+        this(documents, settings, publisher, trouble, workspaceEngine(documents, () -> settings.get().maxFileBytes()));
     }
 
     Analyses(DocumentStore documents, Supplier<ServerSettings> settings, Consumer<OpenDocumentResult> publisher,
@@ -136,7 +136,7 @@ final class Analyses {
             if (a == null || !store(d, a)) return;
             publisher.accept(new OpenDocumentResult(d, a));
             for (String user : usersOf(d.path(), uri)) schedule(user);
-        } catch (RuntimeException | StackOverflowError e) {
+        } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
             System.err.println("plumb: analysis of " + uri + " failed: " + e);
             trouble.accept("Plumb could not check " + d.path().getFileName() + " (" + e
                 + "); the problems shown for it may be out of date. Please report this, with the file.");

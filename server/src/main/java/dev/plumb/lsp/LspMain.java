@@ -6,8 +6,6 @@ import java.io.InputStream;
 import java.io.OutputStream;
 import java.io.PrintStream;
 import java.util.concurrent.ExecutionException;
-import org.eclipse.lsp4j.launch.LSPLauncher;
-import org.eclipse.lsp4j.services.LanguageClient;
 
 /** `plumb lsp`: the language server on stdin/stdout. Stray prints go to stderr, never the protocol. */
 public final class LspMain {
@@ -17,16 +15,17 @@ public final class LspMain {
     public static int run() {
         InputStream in = System.in;
         OutputStream out = new FileOutputStream(FileDescriptor.out);
-        System.setOut(new PrintStream(new FileOutputStream(FileDescriptor.err), true));
+        // Stray prints and our own notes go to stderr, in UTF-8 whatever the locale.
+        PrintStream err = new PrintStream(new FileOutputStream(FileDescriptor.err), true, java.nio.charset.StandardCharsets.UTF_8);
+        System.setOut(err);
+        System.setErr(err);
         // Read and check the standard library while editor and server shake hands, so that the
         // first document's diagnostics need not wait for it.
         Thread library = new Thread(dev.plumb.analysis.Stdlib::get, "plumb-library");
         library.setDaemon(true);
         library.start();
         PlumbLanguageServer server = new PlumbLanguageServer();
-        var launcher = LSPLauncher.createServerLauncher(server, in, out);
-        LanguageClient client = launcher.getRemoteProxy();
-        server.connect(client);
+        var launcher = PlumbLauncher.create(server, in, out, err);
         try {
             launcher.startListening().get();
             return 0;

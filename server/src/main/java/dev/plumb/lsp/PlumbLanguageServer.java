@@ -112,9 +112,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         boolean inlay = td != null && td.getInlayHint() != null;
         boolean lens = td != null && td.getCodeLens() != null;
         boolean neovim = clientName != null && clientName.toLowerCase(java.util.Locale.ROOT).contains("neovim");
-        ServerSettings d = ServerSettings.DEFAULT;
-        return new ServerSettings(d.digits(), inlay, !inlay, !inlay && !lens && !neovim, d.debounceMs(), d.onSaveOnly(),
-            d.criticalReynolds());
+        return ServerSettings.DEFAULT.withChannels(inlay, !inlay, !inlay && !lens && !neovim);
     }
 
     /** Asks the client for the "plumb" settings, without ever blocking the message thread. */
@@ -213,7 +211,20 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
                 file = libraryFile(Stdlib.ROOT.relativize(file).toString());
             }
             OpenDocument open = documents.byPath(file);
-            text = open != null ? open.text() : Files.readString(file);
+            if (open != null) {
+                text = open.text();
+            } else if (t.file().startsWith(Stdlib.ROOT)) {
+                try (var in = Stdlib.class.getResourceAsStream("/stdlib/" + Stdlib.ROOT.relativize(t.file()))) {
+                    if (in == null) return null;
+                    text = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+                }
+            } else {
+                // Through the same rules as every read of a calc: a file swapped for a pipe since it
+                // was analysed must not block this request.
+                OverlaySources sources = new OverlaySources(documents, settings.maxFileBytes());
+                if (!(sources.load(file, sources.workspaceRoot(file)) instanceof dev.plumb.analysis.Sources.Text read)) return null;
+                text = read.text();
+            }
         } catch (IOException | RuntimeException e) {
             return null;
         }

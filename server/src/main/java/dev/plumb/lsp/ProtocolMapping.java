@@ -31,13 +31,13 @@ final class ProtocolMapping {
     static List<Diagnostic> diagnostics(Analysis a, Positions.Encoding enc, ServerSettings settings) {
         List<Diagnostic> out = new ArrayList<>();
         for (dev.plumb.diagnostics.Diagnostic d : a.diagnostics()) {
-            Diagnostic p = new Diagnostic(Positions.range(a.text(), d.span().start(), d.span().end(), enc), d.message(),
+            Diagnostic p = new Diagnostic(Positions.range(a.text(), d.span().start(), d.span().end(), enc), dev.plumb.diagnostics.Printable.text(d.message()),
                 severity(d.severity()), SOURCE, d.code().id());
             List<DiagnosticRelatedInformation> related = new ArrayList<>();
             for (Related r : d.related()) {
                 if (r.file() == null || !r.file().equals(a.file().toString())) continue;
                 related.add(new DiagnosticRelatedInformation(new Location(a.file().toUri().toString(),
-                    Positions.range(a.text(), r.span().start(), r.span().end(), enc)), r.message()));
+                    Positions.range(a.text(), r.span().start(), r.span().end(), enc)), dev.plumb.diagnostics.Printable.text(r.message())));
             }
             if (!related.isEmpty()) p.setRelatedInformation(related);
             out.add(p);

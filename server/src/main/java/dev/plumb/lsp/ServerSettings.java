@@ -6,11 +6,17 @@ import com.google.gson.JsonObject;
 /**
  * What the editor may set (initializationOptions or workspace/configuration section "plumb"):
  * significant figures, which value channels are on, the debounce delay, diagnostics on save only,
- * and the critical Reynolds number of the regime checks.
+ * the critical Reynolds number of the regime checks, and the size limit of one calc.
  */
 record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean valueDiagnostics, int debounceMs,
-                      boolean onSaveOnly, Double criticalReynolds) {
-    static final ServerSettings DEFAULT = new ServerSettings(4, true, true, false, 100, false, null);
+                      boolean onSaveOnly, Double criticalReynolds, long maxFileBytes) {
+    static final ServerSettings DEFAULT = new ServerSettings(4, true, true, false, 100, false, null,
+        dev.plumb.analysis.DiskReads.DEFAULT_MAX_BYTES);
+
+    ServerSettings withChannels(boolean inlayHints, boolean codeLens, boolean valueDiagnostics) {
+        return new ServerSettings(digits, inlayHints, codeLens, valueDiagnostics, debounceMs, onSaveOnly, criticalReynolds,
+            maxFileBytes);
+    }
 
     /** Reads known keys from a JSON object; unknown keys and wrong types keep the current value. */
     ServerSettings with(Object json) {
@@ -24,7 +30,8 @@ record ServerSettings(int digits, boolean inlayHints, boolean codeLens, boolean 
             bool(o, "valueDiagnostics", valueDiagnostics),
             Math.max(0, Math.min(5000, integer(o, "debounceMs", debounceMs))),
             bool(o, "diagnosticsOnSaveOnly", onSaveOnly),
-            positive(o, "criticalReynolds", criticalReynolds));
+            positive(o, "criticalReynolds", criticalReynolds),
+            Math.max(1024, (long) integer(o, "maxFileBytes", (int) Math.min(Integer.MAX_VALUE, maxFileBytes))));
     }
 
     private static Double positive(JsonObject o, String key, Double fallback) {

@@ -20,15 +20,46 @@ public final class Dimension {
     public static final Dimension AMOUNT = of(0, 0, 0, 0, 0, 1, 0);
     public static final Dimension LUMINOUS = of(0, 0, 0, 0, 0, 0, 1);
 
-    private final int[] exponents;
+    /**
+     * The largest exponent magnitude a dimension holds. Beyond it no formula means anything, and
+     * bounding it keeps the arithmetic exact: repeated squaring would otherwise wrap an int around
+     * to a small, even zero, exponent and make a nonsense result look dimensionless.
+     */
+    public static final int MAX_EXPONENT = 100;
 
-    private Dimension(int[] exponents) {
+    /**
+     * What any arithmetic whose exponents pass {@link #MAX_EXPONENT} yields, and every operation on
+     * it yields again: equal to no real dimension, never dimensionless. The engine reports the
+     * operation that made it ({@link #outOfRange()}).
+     */
+    public static final Dimension OUT_OF_RANGE = new Dimension(new int[BASE_COUNT], true);
+
+    private final int[] exponents;
+    private final boolean outOfRange;
+
+    private Dimension(int[] exponents, boolean outOfRange) {
         this.exponents = exponents;
+        this.outOfRange = outOfRange;
     }
 
     public static Dimension of(int length, int mass, int time, int current, int temperature,
                                int amount, int luminous) {
-        return new Dimension(new int[] {length, mass, time, current, temperature, amount, luminous});
+        return bounded(new long[] {length, mass, time, current, temperature, amount, luminous});
+    }
+
+    /** The dimension of these exponents, or {@link #OUT_OF_RANGE} when one is beyond the bound. */
+    private static Dimension bounded(long[] e) {
+        int[] out = new int[BASE_COUNT];
+        for (int i = 0; i < BASE_COUNT; i++) {
+            if (Math.abs(e[i]) > MAX_EXPONENT) return OUT_OF_RANGE;
+            out[i] = (int) e[i];
+        }
+        return new Dimension(out, false);
+    }
+
+    /** Whether an exponent went beyond {@link #MAX_EXPONENT} on the way here. */
+    public boolean outOfRange() {
+        return outOfRange;
     }
 
     /** Exponent of one base dimension; {@code baseIndex} runs 0..6 in the order of the constants. */
@@ -37,27 +68,30 @@ public final class Dimension {
     }
 
     public Dimension times(Dimension o) {
-        int[] e = new int[BASE_COUNT];
+        if (outOfRange || o.outOfRange) return OUT_OF_RANGE;
+        long[] e = new long[BASE_COUNT];
         for (int i = 0; i < BASE_COUNT; i++) {
-            e[i] = exponents[i] + o.exponents[i];
+            e[i] = (long) exponents[i] + o.exponents[i];
         }
-        return new Dimension(e);
+        return bounded(e);
     }
 
     public Dimension divide(Dimension o) {
-        int[] e = new int[BASE_COUNT];
+        if (outOfRange || o.outOfRange) return OUT_OF_RANGE;
+        long[] e = new long[BASE_COUNT];
         for (int i = 0; i < BASE_COUNT; i++) {
-            e[i] = exponents[i] - o.exponents[i];
+            e[i] = (long) exponents[i] - o.exponents[i];
         }
-        return new Dimension(e);
+        return bounded(e);
     }
 
     public Dimension pow(int n) {
-        int[] e = new int[BASE_COUNT];
+        if (outOfRange) return OUT_OF_RANGE;
+        long[] e = new long[BASE_COUNT];
         for (int i = 0; i < BASE_COUNT; i++) {
-            e[i] = exponents[i] * n;
+            e[i] = (long) exponents[i] * n;
         }
-        return new Dimension(e);
+        return bounded(e);
     }
 
     /** The n-th root, or null when some exponent is not a multiple of n (e.g. the root of m³). */
@@ -65,6 +99,7 @@ public final class Dimension {
         if (n == 0) {
             return null;
         }
+        if (outOfRange) return OUT_OF_RANGE;
         int[] e = new int[BASE_COUNT];
         for (int i = 0; i < BASE_COUNT; i++) {
             if (exponents[i] % n != 0) {
@@ -72,10 +107,11 @@ public final class Dimension {
             }
             e[i] = exponents[i] / n;
         }
-        return new Dimension(e);
+        return new Dimension(e, false);
     }
 
     public boolean isDimensionless() {
+        if (outOfRange) return false;
         for (int e : exponents) {
             if (e != 0) {
                 return false;
@@ -86,27 +122,27 @@ public final class Dimension {
 
     /** Coherent SI base units, e.g. "kg·m/s²", "m²", "1/s"; "" when dimensionless. */
     public String siUnits() {
-        return BaseUnitSymbols.compose(this);
+        return outOfRange ? "(a unit with an exponent beyond ±" + MAX_EXPONENT + ")" : BaseUnitSymbols.compose(this);
     }
 
     /** Words with an article for messages: "a force (N)", otherwise "a quantity in kg·m²/s³". */
     public String describe() {
-        return DimensionNames.describe(this);
+        return outOfRange ? "a quantity whose unit has an exponent beyond ±" + MAX_EXPONENT : DimensionNames.describe(this);
     }
 
     /** The common name ("force", "length", …), or null when this dimension has none. */
     public String name() {
-        return DimensionNames.nameOf(this);
+        return outOfRange ? null : DimensionNames.nameOf(this);
     }
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Dimension d && Arrays.equals(exponents, d.exponents);
+        return o instanceof Dimension d && outOfRange == d.outOfRange && Arrays.equals(exponents, d.exponents);
     }
 
     @Override
     public int hashCode() {
-        return Arrays.hashCode(exponents);
+        return Arrays.hashCode(exponents) + (outOfRange ? 1 : 0);
     }
 
     @Override

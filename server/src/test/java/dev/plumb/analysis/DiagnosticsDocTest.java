@@ -23,7 +23,7 @@ import org.junit.jupiter.api.Test;
 class DiagnosticsDocTest {
     /** Codes whose example needs several files or a file that is not text (see UseTest). */
     private static final Set<Code> NOT_RUNNABLE = Set.of(Code.SYNTAX_NESTING, Code.FILE_NOT_TEXT, Code.FILE_UNREADABLE,
-        Code.USE_NOT_FOUND, Code.USE_CYCLE, Code.USE_OUTSIDE_WORKSPACE, Code.USE_HAS_ERRORS);
+        Code.USE_NOT_FOUND, Code.USE_CYCLE, Code.USE_OUTSIDE_WORKSPACE, Code.USE_HAS_ERRORS, Code.LIMIT_MEMORY);
 
     /** One "## code" section of the page. */
     record Section(String heading, String body) {

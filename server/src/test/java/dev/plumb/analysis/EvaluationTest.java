@@ -19,6 +19,57 @@ class EvaluationTest {
     }
 
     @Test
+    void repeatedSquaringOfAUnitIsReportedOnceAndNeverWrapsToANumber() {
+        // Before the bound, 99·2^31 wrapped to 0 in an int: x32 was dimensionless and x32 + 1 passed.
+        Fixture.check("""
+            x1 = 1 m^99
+            x2 = x1 * x1
+            #    ^^^^^^^ math.not-finite: would have a unit with an exponent beyond ±100
+            x3 = x2 * x2
+            x4 = x3 * x3
+            x5 = x4 * x4
+            x6 = x5 * x5
+            x7 = x6 * x6
+            x8 = x7 * x7
+            x9 = x8 * x8
+            x10 = x9 * x9
+            x11 = x10 * x10
+            x12 = x11 * x11
+            x13 = x12 * x12
+            x14 = x13 * x13
+            x15 = x14 * x14
+            x16 = x15 * x15
+            x17 = x16 * x16
+            x18 = x17 * x17
+            x19 = x18 * x18
+            x20 = x19 * x19
+            x21 = x20 * x20
+            x22 = x21 * x21
+            x23 = x22 * x22
+            x24 = x23 * x23
+            x25 = x24 * x24
+            x26 = x25 * x25
+            x27 = x26 * x26
+            x28 = x27 * x27
+            x29 = x28 * x28
+            x30 = x29 * x29
+            x31 = x30 * x30
+            x32 = x31 * x31
+            y = x32 + 1
+            """);
+    }
+
+    @Test
+    void aPowerBeyondTheExponentBoundIsTooLargeNotFractional() {
+        Fixture.check("""
+            p = (1 m^99)^99
+            #   ^^^^^^^^^^^ math.not-finite: the result of (1 m^99)^99 would have a unit with an exponent beyond ±100
+            q = (1 m^3)^0.5
+            #   ^^^^^^^^^^^ unit.fractional-power
+            """);
+    }
+
+    @Test
     void idealGasAirDensityAtSeaLevel() {
         Analysis a = clean("""
             input T = 15 degC

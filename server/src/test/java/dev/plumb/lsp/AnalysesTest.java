@@ -31,4 +31,36 @@ class AnalysesTest {
             analyses.shutdown();
         }
     }
+
+    @Test
+    void runningOutOfMemoryFailsThatRunAndTheServerCarriesOn() throws Exception {
+        DocumentStore documents = new DocumentStore(new Positions.Enc());
+        BlockingQueue<String> told = new LinkedBlockingQueue<>();
+        BlockingQueue<Analyses.OpenDocumentResult> published = new LinkedBlockingQueue<>();
+        Analyses analyses = new Analyses(documents, () -> ServerSettings.DEFAULT, published::add, told::add,
+            (file, text, earlier, superseded, settings) -> {
+                if (text.contains("huge")) throw new OutOfMemoryError("planted by the test");
+                return new dev.plumb.analysis.Workspace(new dev.plumb.analysis.FileSources(), settings).analyzeText(file, text);
+            });
+        try {
+            documents.open("file:///tmp/huge.plumb", "huge = 1\n", 1);
+            analyses.schedule("file:///tmp/huge.plumb");
+            String message = told.poll(10, TimeUnit.SECONDS);
+            assertTrue(message != null && message.contains("OutOfMemoryError"), message);
+            documents.open("file:///tmp/small.plumb", "x = 1\n", 1);
+            analyses.schedule("file:///tmp/small.plumb");
+            Analyses.OpenDocumentResult r = published.poll(10, TimeUnit.SECONDS);
+            assertTrue(r != null && r.document().uri().endsWith("small.plumb"), String.valueOf(r));
+        } finally {
+            analyses.shutdown();
+        }
+    }
+
+    @Test
+    void aRequestThatRunsOutOfMemoryGetsAShortErrorWithoutTrace() {
+        var error = PlumbLauncher.error(new java.util.concurrent.CompletionException(new OutOfMemoryError("planted")));
+        assertEquals(org.eclipse.lsp4j.jsonrpc.messages.ResponseErrorCode.RequestFailed.getValue(), error.getCode());
+        assertTrue(error.getMessage().contains("ran out of memory"), error.getMessage());
+        assertEquals(null, error.getData());
+    }
 }

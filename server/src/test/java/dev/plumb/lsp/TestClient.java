@@ -37,9 +37,7 @@ final class TestClient implements LanguageClient {
         PipedInputStream clientIn = new PipedInputStream(1 << 20);
         PipedOutputStream serverOut = new PipedOutputStream(clientIn);
         server = new PlumbLanguageServer();
-        var serverLauncher = LSPLauncher.createServerLauncher(server, serverIn, serverOut);
-        server.connect(serverLauncher.getRemoteProxy());
-        serverLauncher.startListening();
+        PlumbLauncher.create(server, serverIn, serverOut, System.err).startListening();
         remote = connect(clientIn, clientOut, capabilities, options);
     }
 

@@ -18,6 +18,20 @@ class DimensionTest {
     private static final Dimension VELOCITY = Dimension.LENGTH.divide(Dimension.TIME);
 
     @Test
+    void exponentsBeyondTheBoundStayOutOfRangeInsteadOfWrapping() {
+        Dimension d = Dimension.LENGTH.pow(99);
+        for (int i = 0; i < 40; i++) d = d.times(d); // 99·2^40 wraps an int many times over
+        assertTrue(d.outOfRange());
+        assertFalse(d.isDimensionless());
+        assertFalse(d.equals(Dimension.NONE));
+        assertTrue(d.divide(d).outOfRange(), "out of range is sticky, even divided by itself");
+        assertTrue(Dimension.LENGTH.pow(101).outOfRange());
+        assertFalse(Dimension.LENGTH.pow(100).outOfRange());
+        assertTrue(Dimension.LENGTH.pow(Integer.MAX_VALUE).outOfRange());
+        assertTrue(d.describe().contains("beyond ±100"), d.describe());
+    }
+
+    @Test
     void arithmetic() {
         assertEquals(FORCE, Dimension.MASS.times(VELOCITY).divide(Dimension.TIME));
         assertEquals(Dimension.of(2, 0, -2, 0, 0, 0, 0), VELOCITY.pow(2));
