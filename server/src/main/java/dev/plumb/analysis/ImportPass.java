@@ -50,6 +50,15 @@ final class ImportPass {
         return new Imports(names, files);
     }
 
+    /** The file a `use` in {@code file} names, or null when its text is not a path here. */
+    static Path target(Path file, Statement.Use u) {
+        try {
+            return file.toAbsolutePath().getParent().resolve(u.path()).normalize();
+        } catch (java.nio.file.InvalidPathException e) {
+            return null;
+        }
+    }
+
     private void importFile(Statement.Use u) {
         Path folder = file.toAbsolutePath().getParent();
         Path target;
@@ -86,15 +95,17 @@ final class ImportPass {
         }
         files.add(target);
         Analysis a = imported.analysis();
-        List<Path> back = workspace.importPath(target, self);
+        // On a circle, names come from none of its files, whichever file the analysis started
+        // from: the circle is read from the files' texts, not from analyses made so far.
+        List<Path> back = workspace.usePath(target, self, chain.isEmpty() ? self : chain.get(0));
         if (back != null) {
             List<Path> loop = new ArrayList<>();
             loop.add(self);
             loop.addAll(back.subList(0, back.size() - 1));
             reportUseCycle(u, loop);
-        } else {
-            reportImportedErrors(u, a);
+            return;
         }
+        reportImportedErrors(u, a);
         for (var entry : a.scope().all().entrySet()) {
             Binding existing = names.get(entry.getKey());
             if (existing == null) {

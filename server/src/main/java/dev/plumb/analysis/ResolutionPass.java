@@ -70,6 +70,12 @@ final class ResolutionPass {
             collect(s, exprs, params);
             for (Expr e : exprs) {
                 References.each(e, (n, span) -> {
+                    // The unknown a solve statement solves for is used in its own equation: a
+                    // reference (rename and references must see it), though not a dependency.
+                    if (s instanceof Statement.Seek seek && n.equals(seek.name().text())) {
+                        references.add(new Analysis.Reference(n, span));
+                        return;
+                    }
                     if (params.contains(n)) return;
                     used.add(n);
                     references.add(new Analysis.Reference(n, span));

@@ -20,6 +20,8 @@ public final class Workspace {
     private final Map<Path, Imported> cache = new ConcurrentHashMap<>();
     /** The names every document sees besides its own and built-ins: the standard library. */
     private final Library library;
+    /** Which files use which, read from their texts. */
+    private final UseGraph uses;
     /** Used files' analyses kept from earlier workspaces (an editor's), or null. */
     private final ImportMemory memory;
 
@@ -41,6 +43,10 @@ public final class Workspace {
         this.settings = settings;
         this.library = library;
         this.memory = memory;
+        this.uses = new UseGraph(sources, file -> {
+            Imported done = cache.get(file);
+            return done == null || done.analysis() == null ? null : done.analysis().syntax();
+        });
     }
 
     Library library() {
@@ -113,14 +119,14 @@ public final class Workspace {
         Path root = sources.workspaceRoot(chain.isEmpty() ? file : chain.get(0));
         Map<Path, Analysis> kept = memory == null ? null : memory.recall(file, root, sources, settings);
         if (kept != null) {
-            // The whole group goes in, so that circles through it are still found (importPath).
+            // The whole group goes in, analysed together as it was.
             kept.forEach((p, a) -> cache.putIfAbsent(p, new Imported(a, null)));
             return cache.get(file);
         }
         Sources.Loaded loaded = sources.load(file, root);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
-            fresh = new Imported(guarded(file, t.text(), null, chain, superseded), null);
+            fresh = new Imported(guarded(file, t.text(), uses.parsed(file), chain, superseded), null);
         } else if (loaded instanceof Sources.NotText n) {
             fresh = new Imported(failure(file, "", Code.FILE_NOT_TEXT,
                 "this is not a calc file: " + n.reason() + " (first bad byte at offset " + n.offset() + ")", 0), null);
@@ -152,29 +158,13 @@ public final class Workspace {
     }
 
     /**
-     * The files from {@code from} to {@code to} along `use` statements of analyses already made
-     * ({@code from} first, {@code to} last), or null when there is no such path.
+     * The files from {@code from} to {@code to} along `use` statements ({@code from} first,
+     * {@code to} last), or null: read from the files' texts, so never from timing.
+     *
+     * @param start the file the analysis started from (its root bounds the search)
      */
-    List<Path> importPath(Path from, Path to) {
-        java.util.Map<Path, Path> cameFrom = new java.util.HashMap<>();
-        java.util.ArrayDeque<Path> queue = new java.util.ArrayDeque<>(List.of(from));
-        cameFrom.put(from, from);
-        while (!queue.isEmpty()) {
-            Path at = queue.poll();
-            Imported done = cache.get(at);
-            if (done == null || done.analysis() == null) continue;
-            for (Path next : done.analysis().imports()) {
-                if (cameFrom.putIfAbsent(next, at) != null) continue;
-                if (next.equals(to)) {
-                    java.util.LinkedList<Path> path = new java.util.LinkedList<>();
-                    for (Path p = to; !p.equals(from); p = cameFrom.get(p)) path.addFirst(p);
-                    path.addFirst(from);
-                    return path;
-                }
-                queue.add(next);
-            }
-        }
-        return null;
+    List<Path> usePath(Path from, Path to, Path start) {
+        return uses.path(from, to, sources.workspaceRoot(start));
     }
 
     private Analysis guarded(Path file, String text, ParsedSource earlier, List<Path> chain,

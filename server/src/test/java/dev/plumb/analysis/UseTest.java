@@ -55,6 +55,33 @@ class UseTest {
         Fixture.check(workspace().analyze(main));
     }
 
+    @Test
+    void aCircleOfThreeFilesGivesTheSameFindingsWhateverTheOrderAndTiming() throws IOException {
+        // Files that use each other and call each other's functions: whichever file an analysis
+        // starts from, and however the threads interleave, every file says the same.
+        Path a = write("a.plumb", "use \"b.plumb\"\nfa(x) = 2 * x\nya = fb(3) + fc(1)\n");
+        Path b = write("b.plumb", "use \"c.plumb\"\nfb(x) = 3 * x\nyb = fc(2) + fa(1)\n");
+        Path c = write("c.plumb", "use \"a.plumb\"\nfc(x) = 5 * x\nyc = fa(4) + fb(1)\n");
+        List<List<Path>> orders = List.of(List.of(a, b, c), List.of(b, c, a), List.of(c, a, b), List.of(c, b, a));
+        java.util.Set<String> outcomes = new java.util.TreeSet<>();
+        for (int run = 0; run < 40; run++) {
+            List<Path> order = orders.get(run % orders.size());
+            List<String> found = new java.util.ArrayList<>();
+            for (Batch.Checked checked : Batch.check(workspace(), order, 1 + run % 4)) {
+                for (var d : checked.diagnostics()) {
+                    found.add(checked.analysis().file().getFileName() + ":" + d.code().id() + ":" + d.message());
+                }
+            }
+            java.util.Collections.sort(found);
+            outcomes.add(String.join("\n", found));
+        }
+        assertEquals(1, outcomes.size(), () -> String.join("\n---\n", outcomes));
+        // On the circle no file takes names from another: each reports the circle and its unknown names.
+        String only = outcomes.iterator().next();
+        assertEquals(3, only.lines().filter(l -> l.contains("use.cycle")).count(), only);
+        assertEquals(6, only.lines().filter(l -> l.contains("name.unknown")).count(), only);
+    }
+
     private Path[] twoFilesInACircle() throws IOException {
         Path a = write("a.plumb", """
             use "b.plumb"
