@@ -57,13 +57,13 @@ final class Analyzer {
         Plan plan = new Planner(reporter).run(declared.own(), resolved.uses(), new Definitions(file, text, scope, units));
         bindBlocks(scope, plan);
 
-        EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, settings, units, superseded)
+        Budget budget = Budget.standard(superseded);
+        EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, settings, units, budget)
             .run(declared.duplicates());
         Map<Statement, Row> rows = new java.util.IdentityHashMap<>(evaluated.rows());
+        CheckRunner checks = new CheckRunner(scope, evaluated.values(), reporter, text, settings, units, budget);
         for (Statement s : statements) {
-            if (s instanceof Statement.Check c) {
-                rows.put(c, new CheckRunner(scope, evaluated.values(), reporter, text, settings, units).run(c));
-            }
+            if (s instanceof Statement.Check c) rows.put(c, checks.withinBudget(c));
         }
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
 

@@ -18,8 +18,11 @@ final class CheckRunner {
     private final String text;
     private final Settings settings;
     private final UnitRegistry units;
+    private final Budget budget;
 
-    CheckRunner(Scope scope, Environment env, Reporter reporter, String text, Settings settings, UnitRegistry units) {
+    CheckRunner(Scope scope, Environment env, Reporter reporter, String text, Settings settings, UnitRegistry units,
+                Budget budget) {
+        this.budget = budget;
         this.scope = scope;
         this.env = env;
         this.reporter = reporter;
@@ -28,10 +31,26 @@ final class CheckRunner {
         this.units = units;
     }
 
+    /** The check's row; a check that takes more than its budget is not evaluated, with one finding. */
+    Row.CheckRow withinBudget(Statement.Check c) {
+        String source = Shown.source(text, new dev.plumb.diagnostics.Span(c.operands().get(0).span().start(),
+            c.operands().get(c.operands().size() - 1).span().end()));
+        try {
+            budget.nextStatement();
+            return run(c);
+        } catch (Budget.Exhausted e) {
+            reporter.report(Code.LIMIT_BUDGET, c.span(), "this check was stopped: it needs more work than any calc does ("
+                + (e.limit == Budget.Limit.TIME ? "the run's " + Budget.SECONDS + " s are up" : "over "
+                + String.format(java.util.Locale.ROOT, "%,d", Budget.STEPS_PER_STATEMENT) + " evaluation steps")
+                + "); look for a formula that does repeated work");
+            return new Row.CheckRow(c.span(), source, null, "not evaluated: stopped, see the finding", c.note());
+        }
+    }
+
     Row.CheckRow run(Statement.Check c) {
         String source = Shown.source(text, new dev.plumb.diagnostics.Span(c.operands().get(0).span().start(),
             c.operands().get(c.operands().size() - 1).span().end()));
-        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units);
+        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units, budget);
         List<Value> values = new ArrayList<>();
         for (Expr e : c.operands()) values.add(evaluator.eval(e));
         if (values.stream().anyMatch(v -> !v.known())) {

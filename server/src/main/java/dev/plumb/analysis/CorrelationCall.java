@@ -42,7 +42,8 @@ final class CorrelationCall {
         bareAngles(c, name, def.params(), args);
         Map<String, Value> params = RangeCheck.bind(def.params(), args);
         Reporter inner = reporter.inCorrelation(name, c.span(), b.file());
-        Evaluator inside = new Evaluator(b.scope(), caller.environmentOf(b.scope()), params, inner, b.scope().text(), units);
+        Evaluator inside = new Evaluator(b.scope(), caller.environmentOf(b.scope()), params, inner, b.scope().text(), units,
+            caller.budget());
         Set<String> names = params.keySet();
         String outside = outsideDomain(c, name, def.domain(), inside, b.scope().text(), names);
         if (outside != null) {
@@ -86,7 +87,7 @@ final class CorrelationCall {
         String param = def.param().name().text();
         Map<String, Value> params = Map.of(param, x);
         Evaluator inside = new Evaluator(t.scope(), caller.environmentOf(t.scope()), params,
-            reporter.inCorrelation(t.name(), c.span(), t.file()), t.scope().text(), units);
+            reporter.inCorrelation(t.name(), c.span(), t.file()), t.scope().text(), units, caller.budget());
         String outside = outsideDomain(c, t.name(), def.domain(), inside, t.scope().text(), params.keySet());
         if (outside != null) {
             reporter.call(new Analysis.CallSite(c.callee().span(), t.name(), param + " = "

@@ -32,8 +32,8 @@ final class Definitions {
     }
 
     /** The definition's binding in {@code env}; its value is unknown when it lies on a circle. */
-    Binding.ValueBinding evaluate(Statement.Definition d, Environment env, Reporter reporter, boolean inCycle) {
-        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units);
+    Binding.ValueBinding evaluate(Statement.Definition d, Environment env, Reporter reporter, boolean inCycle, Budget budget) {
+        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units, budget);
         Value v = evaluator.eval(d.expr());
         if (inCycle) v = Value.UNKNOWN;
         Unit display = displayUnit(d, v, evaluator, reporter);
@@ -43,8 +43,8 @@ final class Definitions {
     }
 
     /** A solved value's binding: shown in its `in` unit, else in the unit of the bracket's (or start value's) number. */
-    Binding.ValueBinding solved(Statement.Seek s, Value v, Environment env, Reporter reporter) {
-        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units);
+    Binding.ValueBinding solved(Statement.Seek s, Value v, Environment env, Reporter reporter, Budget budget) {
+        Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units, budget);
         Unit display = v.known() ? displayUnit(s, v, evaluator, reporter) : null;
         Tagged tagged = tagged(s.name(), s.basis(), v, reporter);
         return new Binding.ValueBinding(file, s.name().span(), tagged.value(), display, tagged.tag(), false, null);

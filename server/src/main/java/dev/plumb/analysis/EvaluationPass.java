@@ -1,5 +1,6 @@
 package dev.plumb.analysis;
 
+import dev.plumb.diagnostics.Code;
 import dev.plumb.syntax.Ident;
 import dev.plumb.syntax.Statement;
 import dev.plumb.units.UnitRegistry;
@@ -28,32 +29,71 @@ final class EvaluationPass {
     private final Reporter reporter;
     private final Settings settings;
     private final UnitRegistry units;
-    private final java.util.function.BooleanSupplier superseded;
+    private final Budget budget;
+    /** Set once the run's time is up: what is left is not evaluated (one finding said so). */
+    private boolean outOfTime;
     private final Map<Statement, Row> rows = new IdentityHashMap<>();
 
     EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, Settings settings, UnitRegistry units,
-                   java.util.function.BooleanSupplier superseded) {
+                   Budget budget) {
         this.plan = plan;
         this.scope = scope;
         this.text = text;
         this.reporter = reporter;
         this.settings = settings;
         this.units = units;
-        this.superseded = superseded;
+        this.budget = budget;
     }
 
     /** @param duplicates statements defining a name a second time: evaluated for their findings, bound to nothing */
     Evaluated run(Iterable<Statement> duplicates) {
         Environment.Builder values = new Environment.Builder(scope);
         for (String name : plan.order()) {
-            Workspace.checkSuperseded(superseded);
             Statement s = plan.own().get(name);
-            Binding.ValueBinding bound = evaluate(s, values.now(), plan.inCycle().contains(name));
+            Binding.ValueBinding bound = withinBudget(s, values.now(), plan.inCycle().contains(name));
             if (bound != null) values.put(name, bound);
         }
         Environment done = values.build();
-        for (Statement s : duplicates) evaluate(s, done, false);
+        for (Statement s : duplicates) withinBudget(s, done, false);
         return new Evaluated(done, rows);
+    }
+
+    /** A statement's evaluation, cut short with one finding when it takes more than its budget. */
+    private Binding.ValueBinding withinBudget(Statement s, Environment env, boolean inCycle) {
+        if (outOfTime) return unknown(s);
+        try {
+            budget.nextStatement();
+            return evaluate(s, env, inCycle);
+        } catch (Budget.Exhausted e) {
+            outOfTime = e.limit == Budget.Limit.TIME;
+            reporter.report(Code.LIMIT_BUDGET, where(s), e.limit == Budget.Limit.TIME
+                ? "the check was stopped here after " + Budget.SECONDS + " s: this statement and those after it are not "
+                    + "evaluated (their values are unknown); a calc needs far less: look for a formula that does "
+                    + "repeated work, such as a function that calls another twice at every level"
+                : "this statement was stopped after " + String.format(java.util.Locale.ROOT, "%,d", Budget.STEPS_PER_STATEMENT)
+                    + " evaluation steps, more than any calc needs: its value is unknown. Look for a formula that does "
+                    + "repeated work, such as a function that calls another twice at every level (the work doubles "
+                    + "with each level)");
+            return unknown(s);
+        }
+    }
+
+    /** Where a finding about a statement goes: the name it defines, else the statement. */
+    private static dev.plumb.diagnostics.Span where(Statement s) {
+        Ident name = DeclarationPass.definedName(s);
+        return name != null ? name.span() : s.span();
+    }
+
+    /** A statement not evaluated: its row and binding say its value is unknown. */
+    private Binding.ValueBinding unknown(Statement s) {
+        Ident name = DeclarationPass.definedName(s);
+        if (name == null) return null;
+        rows.put(s, new Row.ValueRow(s.span(), name.text(), s instanceof Statement.Definition d && d.input(), Value.UNKNOWN,
+            "?", null, null, null, null, null, s));
+        return s instanceof Statement.Definition || s instanceof Statement.Seek || s instanceof Statement.Broken
+            ? new Binding.ValueBinding(plan.definitions().bare(Value.UNKNOWN).file(), name.span(), Value.UNKNOWN, null, null,
+                false, null)
+            : null;
     }
 
     /** Makes the statement's row; returns the binding of the value it defines, or null when it defines none. */
@@ -84,7 +124,7 @@ final class EvaluationPass {
         }
         if (s instanceof Statement.Seek f) return seek(f, env, inCycle);
         if (!(s instanceof Statement.Definition d)) return null;
-        Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle);
+        Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle, budget);
         String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
         rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), shown, bound.basis(), d.note(),
             bound.origin(), null, bound.display(), s));
@@ -97,8 +137,8 @@ final class EvaluationPass {
             rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null, null, f));
             return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
         }
-        SeekRunner.Outcome outcome = new SeekRunner(plan, scope, env, reporter, text, units).run(f);
-        Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter);
+        SeekRunner.Outcome outcome = new SeekRunner(plan, scope, env, reporter, text, units, budget).run(f);
+        Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter, budget);
         String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
         rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), shown, bound.basis(), f.note(), null,
             outcome.solution(), bound.display(), f));

@@ -25,22 +25,27 @@ final class Evaluator {
     /** The values of the scope's own definitions (Environment.NONE: they are final in the scope). */
     private final Environment env;
     private final Map<String, Value> locals;
+    /** The run's budget: every node evaluated takes one step of it. */
+    private final Budget budget;
     private final Reporter reporter;
     private final String text;
     private final UnitRegistry units;
     private final BasisRules basis;
     private final Arithmetic arithmetic;
 
+    /** An evaluation outside any run (a block's declarations), with a budget of its own. */
     Evaluator(Scope scope, Reporter reporter, String text, UnitRegistry units) {
         this(scope, Map.of(), reporter, text, units);
     }
 
     Evaluator(Scope scope, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
-        this(scope, Environment.NONE, locals, reporter, text, units);
+        this(scope, Environment.NONE, locals, reporter, text, units, Budget.standalone());
     }
 
-    Evaluator(Scope scope, Environment env, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units) {
+    Evaluator(Scope scope, Environment env, Map<String, Value> locals, Reporter reporter, String text, UnitRegistry units,
+              Budget budget) {
         this.scope = scope;
+        this.budget = budget;
         this.env = env;
         this.locals = locals;
         this.reporter = reporter;
@@ -51,6 +56,7 @@ final class Evaluator {
     }
 
     Value eval(Expr e) {
+        budget.step();
         if (e instanceof Expr.Group g) return eval(g.inner());
         if (e instanceof Expr.Binary b) return binary(b);
         if (e instanceof Expr.Reference r) return reference(r);
@@ -66,7 +72,7 @@ final class Evaluator {
 
     /** The same evaluation, reporting nothing: to learn what a formula gives without judging it. */
     Evaluator quiet() {
-        return new Evaluator(scope, env, locals, new Reporter(), text, units);
+        return new Evaluator(scope, env, locals, new Reporter(), text, units, budget);
     }
 
     /** What a name stands for here: an own definition's value from the environment, else the scope's binding. */
@@ -86,6 +92,10 @@ final class Evaluator {
 
     UnitRegistry units() {
         return units;
+    }
+
+    Budget budget() {
+        return budget;
     }
 
     /** The environment to evaluate a body defined in {@code where} with: ours when it is our scope. */
@@ -199,7 +209,7 @@ final class Evaluator {
         for (int i = 0; i < params.size(); i++) bound.put(params.get(i).text(), args.get(i));
         Reporter inner = reporter.inCall(name, c.span(), f.file());
         String bodyText = f.scope() == scope ? text : f.scope().text();
-        return new Evaluator(f.scope(), environmentOf(f.scope()), bound, inner, bodyText, units).eval(f.def().body());
+        return new Evaluator(f.scope(), environmentOf(f.scope()), bound, inner, bodyText, units, budget).eval(f.def().body());
     }
 
     private boolean arity(Expr.Call c, int min, int max, String signature) {

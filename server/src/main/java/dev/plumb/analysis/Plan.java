@@ -32,16 +32,17 @@ record Plan(Map<String, Statement> own, List<String> order, Set<String> inCycle,
 
     /**
      * Evaluates {@code definitions} (in this order) over {@code base}, with {@code overrides} bound
-     * first in place of their definitions; every finding goes to {@code sink}. The result holds the
-     * overrides and the new values over {@code base}, which is left as it was.
+     * first in place of their definitions; every finding goes to {@code sink}, every step is taken
+     * from {@code budget}. The result holds the overrides and the new values over {@code base},
+     * which is left as it was.
      */
     Environment evaluate(Environment base, Map<String, Value> overrides, List<Statement.Definition> which,
-                         Reporter sink) {
+                         Reporter sink, Budget budget) {
         Environment.Builder run = new Environment.Builder(base);
         overrides.forEach((name, v) -> run.put(name, definitions.bare(v)));
         for (Statement.Definition d : which) {
             String name = d.name().text();
-            run.put(name, definitions.evaluate(d, run.now(), sink, inCycle.contains(name)));
+            run.put(name, definitions.evaluate(d, run.now(), sink, inCycle.contains(name), budget));
         }
         return run.build();
     }

@@ -131,16 +131,16 @@ final class RangeAdvice {
             Dimension wanted = p.dimension() == null ? null : ParameterDimensions.of(p.dimension().text());
             if (wanted != null && !wanted.equals(args.get(i).dimension())) return false;
         }
-        Evaluator silent = new Evaluator(other.scope(), RangeCheck.bind(params, args), new Reporter(),
-            other.scope().text(), units);
+        Evaluator silent = new Evaluator(other.scope(), Environment.NONE, RangeCheck.bind(params, args), new Reporter(),
+            other.scope().text(), units, caller.budget());
         return RangeCheck.within(other.def().valid(), silent);
     }
 
     private boolean covers(Binding.TableBinding other, List<Value> args) {
         if (args.size() != 1 || !args.get(0).dimension().equals(other.data().argument)) return false;
         if (!other.data().covers(args.get(0).si())) return false;
-        Evaluator silent = new Evaluator(other.scope(), Map.of(other.def().param().name().text(), args.get(0)),
-            new Reporter(), other.scope().text(), units);
+        Evaluator silent = new Evaluator(other.scope(), Environment.NONE, Map.of(other.def().param().name().text(),
+            args.get(0)), new Reporter(), other.scope().text(), units, caller.budget());
         return RangeCheck.within(other.def().valid(), silent);
     }
 }

@@ -32,8 +32,10 @@ final class SeekRunner {
     private final Reporter reporter;
     private final String text;
     private final UnitRegistry units;
+    private final Budget budget;
 
-    SeekRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units) {
+    SeekRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units, Budget budget) {
+        this.budget = budget;
         this.plan = plan;
         this.scope = scope;
         this.env = env;
@@ -128,7 +130,7 @@ final class SeekRunner {
 
     /** Evaluates NAME's dependents at a trial value, then both sides of the equation. */
     private Value[] evaluateAt(String name, Value x, List<Statement.Definition> dependents, Reporter r, Statement.Seek f) {
-        Environment trial = plan.evaluate(env, java.util.Map.of(name, x), dependents, r);
+        Environment trial = plan.evaluate(env, java.util.Map.of(name, x), dependents, r, budget);
         Evaluator e = evaluator(trial, r);
         Value lhs = e.eval(f.lhs());
         Value rhs = e.eval(f.rhs());
@@ -136,7 +138,7 @@ final class SeekRunner {
     }
 
     private Evaluator evaluator(Environment at, Reporter r) {
-        return new Evaluator(scope, at, java.util.Map.of(), r, text, units);
+        return new Evaluator(scope, at, java.util.Map.of(), r, text, units, budget);
     }
 
     /**
@@ -145,7 +147,7 @@ final class SeekRunner {
      */
     private Value[] finalSides(String name, Dimension dim, double at, List<Statement.Definition> dependents,
                                Statement.Seek f, Reporter dependentsTo) {
-        Environment trial = plan.evaluate(env, java.util.Map.of(name, Value.of(at, dim)), dependents, dependentsTo);
+        Environment trial = plan.evaluate(env, java.util.Map.of(name, Value.of(at, dim)), dependents, dependentsTo, budget);
         Evaluator real = evaluator(trial, reporter);
         Value lhs = real.eval(f.lhs());
         Value rhs = real.eval(f.rhs());

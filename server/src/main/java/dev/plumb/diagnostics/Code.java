@@ -41,6 +41,7 @@ public enum Code {
     USE_CYCLE("use.cycle", Severity.ERROR),
     USE_OUTSIDE_WORKSPACE("use.outside-workspace", Severity.ERROR),
     USE_HAS_ERRORS("use.has-errors", Severity.ERROR),
+    LIMIT_BUDGET("limit.budget", Severity.ERROR),
     LIMIT_MEMORY("limit.memory", Severity.ERROR);
 
     private final String id;

@@ -120,8 +120,12 @@ final class Analyses {
         if (d == null) return null;
         Result r = latest.get(uri);
         if (r != null && r.version() == d.version()) return r.analysis();
-        Analysis a = analyze(d);
-        store(d, a);
+        // A request's own run stops, like a scheduled one, once an edit or a close makes it pointless.
+        Analysis a = analyze(d, () -> {
+            OpenDocument now = documents.get(uri);
+            return now == null || now.version() != d.version();
+        });
+        if (a != null) store(d, a);
         return a;
     }
 
@@ -149,10 +153,6 @@ final class Analyses {
         if (now == null || now.version() != d.version()) return false;
         latest.put(d.uri(), new Result(d.version(), a));
         return true;
-    }
-
-    private Analysis analyze(OpenDocument d) {
-        return analyze(d, () -> false);
     }
 
     /** The engine on a document's text; null when a newer edit made the run pointless on the way. */

@@ -21,9 +21,9 @@ import org.junit.jupiter.api.Test;
 
 /** docs/diagnostics.md documents every code, and its examples give the messages it quotes. */
 class DiagnosticsDocTest {
-    /** Codes whose example needs several files or a file that is not text (see UseTest). */
+    /** Codes whose example needs several files, a file that is not text (see UseTest), or a long run (BudgetTest). */
     private static final Set<Code> NOT_RUNNABLE = Set.of(Code.SYNTAX_NESTING, Code.FILE_NOT_TEXT, Code.FILE_UNREADABLE,
-        Code.USE_NOT_FOUND, Code.USE_CYCLE, Code.USE_OUTSIDE_WORKSPACE, Code.USE_HAS_ERRORS, Code.LIMIT_MEMORY);
+        Code.USE_NOT_FOUND, Code.USE_CYCLE, Code.USE_OUTSIDE_WORKSPACE, Code.USE_HAS_ERRORS, Code.LIMIT_MEMORY, Code.LIMIT_BUDGET);
 
     /** One "## code" section of the page. */
     record Section(String heading, String body) {
