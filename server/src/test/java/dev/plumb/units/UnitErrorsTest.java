@@ -34,6 +34,24 @@ class UnitErrorsTest {
     }
 
     @Test
+    void gaugePressuresAreRefusedWithAdvice() {
+        UnitResult.Error e = error("psig", "'psig' is a gauge pressure, a difference from the local"
+                + " atmospheric pressure, which Plumb cannot know: write the absolute pressure in psia,"
+                + " or write the gauge reading in psi and add the atmosphere yourself: p = p_g + p_atm",
+                0, 4);
+        assertEquals(List.of(), e.suggestions()); // no quick fix: each choice changes the value
+        error("lbf/psig", e.message(), 4, 4);
+        UnitResult.Error bar = assertInstanceOf(UnitResult.Error.class, UNITS.resolve("barg"));
+        assertTrue(bar.message().contains("write the absolute pressure in bar,"), bar.message());
+    }
+
+    @Test
+    void waterColumnsTakeTheirDigit() {
+        assertEquals("inH2O", error("inH20", "unknown unit 'inH20'", 0, 5).suggestions().get(0));
+        error("H2", "write the exponent with '^', as in H^2", 1, 1);
+    }
+
+    @Test
     void atMostThreeSuggestions() {
         assertTrue(error("mtr", "unknown unit 'mtr'", 0, 3).suggestions().size() <= 3);
     }
