@@ -68,7 +68,7 @@ final class LibraryUnits {
         out.add(read("h", "hour", Units.HOUR));
         out.add(read("d", "day", Units.DAY).alias("day"));
         out.add(read("L", "litre", Units.LITRE).alias("l").withPrefixes());
-        out.add(read("°", "degree (angle)", USCustomary.DEGREE_ANGLE).alias("deg"));
+        out.add(read("°", "degree of angle", USCustomary.DEGREE_ANGLE).alias("deg"));
         out.add(read("%", "percent", Units.PERCENT));
         // US customary and imperial units.
         out.add(read("ft", "foot", USCustomary.FOOT));
@@ -78,8 +78,8 @@ final class LibraryUnits {
         out.add(read("nmi", "nautical mile", USCustomary.NAUTICAL_MILE));
         out.add(read("mph", "mile per hour", USCustomary.MILE_PER_HOUR));
         out.add(read("kn", "knot", USCustomary.KNOT).alias("knot"));
-        out.add(read("lb", "pound (mass)", USCustomary.POUND));
-        out.add(read("lbm", "pound-mass", USCustomary.POUND));
+        out.add(read("lb", "avoirdupois pound", USCustomary.POUND));
+        out.add(read("lbm", "avoirdupois pound", USCustomary.POUND));
         out.add(read("lbf", "pound-force", Imperial.POUND_FORCE));
         out.add(read("kgf", "kilogram-force", Imperial.KILOGRAM_FORCE));
         out.add(read("hp", "horsepower", USCustomary.HORSEPOWER));

@@ -52,17 +52,17 @@ final class TradeUnits {
                 // slug → kg: 1.459 390 E+01 (B.8); defined as lbf·s²/ft.
                 AtomDefinition.of("slug", "slug", ratio(POUND_FORCE_N, FOOT_M), Dimension.MASS),
                 // ounce (avoirdupois) (oz) → kg: 2.834 952 E-02 (B.8); 1/16 lb exactly.
-                AtomDefinition.of("oz", "ounce (avoirdupois, a mass)", ratio(POUND_KG, "16"),
+                AtomDefinition.of("oz", "avoirdupois ounce", ratio(POUND_KG, "16"),
                         Dimension.MASS),
                 // ton, short (2000 lb) → kg: 9.071 847 E+02 (B.8); 2000 lb exactly.
-                AtomDefinition.of("ton", "short ton (2000 lb)", exact(times("2000", POUND_KG)),
+                AtomDefinition.of("ton", "short ton", exact(times("2000", POUND_KG)),
                         Dimension.MASS),
                 // ton, metric (t) → kg: 1.0 E+03, exact (B.8). No prefixes: "kt" would read as
                 // a kilotonne where people mean a knot.
-                AtomDefinition.of("t", "tonne (metric ton, 1000 kg)", 1.0e3, Dimension.MASS),
+                AtomDefinition.of("t", "tonne", 1.0e3, Dimension.MASS),
                 // --- force and force per length ---
                 // kip (1 kip = 1000 lbf) → N: 4.448 222 E+03 (B.8).
-                AtomDefinition.of("kip", "kip (1000 lbf)", exact(times("1000", POUND_FORCE_N)), force)
+                AtomDefinition.of("kip", "kip", exact(times("1000", POUND_FORCE_N)), force)
                         .alias("kipf"),
                 // dyne (dyn) → N: 1.0 E-05, exact (B.8).
                 AtomDefinition.of("dyn", "dyne", 1.0e-5, force),
@@ -96,27 +96,27 @@ final class TradeUnits {
                 // torr (Torr) → Pa: 1.333 224 E+02 (B.8); 101 325/760 Pa by definition.
                 AtomDefinition.of("Torr", "torr", ratio("101325", "760"), pressure).alias("torr"),
                 // millimeter of mercury, conventional (mmHg) → Pa: 1.333 224 E+02 (B.8).
-                AtomDefinition.of("mmHg", "millimetre of mercury (conventional)",
+                AtomDefinition.of("mmHg", "conventional millimetre of mercury",
                         exact(times(MERCURY, STANDARD_GRAVITY, "0.001")), pressure),
                 // inch of mercury, conventional (inHg) → Pa: 3.386 389 E+03 (B.8).
-                AtomDefinition.of("inHg", "inch of mercury (conventional)",
+                AtomDefinition.of("inHg", "conventional inch of mercury",
                         exact(times(MERCURY, STANDARD_GRAVITY, "0.0254")), pressure),
                 // millimeter of water, conventional (mmH2O) → Pa: 9.806 65 E+00, exact (B.8).
-                AtomDefinition.of("mmH2O", "millimetre of water (conventional)",
+                AtomDefinition.of("mmH2O", "conventional millimetre of water",
                         exact(times(WATER, STANDARD_GRAVITY, "0.001")), pressure),
                 // inch of water, conventional (inH2O) → Pa: 2.490 889 E+02 (B.8).
-                AtomDefinition.of("inH2O", "inch of water (conventional)",
+                AtomDefinition.of("inH2O", "conventional inch of water",
                         exact(times(WATER, STANDARD_GRAVITY, "0.0254")), pressure),
                 // foot of water, conventional (ftH2O) → Pa: 2.989 067 E+03 (B.8).
-                AtomDefinition.of("ftH2O", "foot of water (conventional)",
+                AtomDefinition.of("ftH2O", "conventional foot of water",
                         exact(times(WATER, STANDARD_GRAVITY, FOOT_M)), pressure),
                 // --- energy ---
                 // British thermal unit_IT (Btu_IT) → J: 1.055 056 E+03 (B.8); exactly
                 // 4.1868 J/(g·K) × 453.592 37 g × (1/1.8) K.
-                AtomDefinition.of("BTU", "British thermal unit (International Table)",
+                AtomDefinition.of("BTU", "International Table British thermal unit",
                         ratio(times("4.1868", "453.59237"), "1.8"), energy).alias("Btu"),
                 // kilocalorie_IT (kcal_IT) → J: 4.1868 E+03, exact (B.8).
-                AtomDefinition.of("kcal", "kilocalorie (International Table)", 4.1868e3, energy),
+                AtomDefinition.of("kcal", "International Table kilocalorie", 4.1868e3, energy),
                 // watt hour (W·h) → J: 3.6 E+03, exact (B.8); kWh, MWh, GWh by prefix.
                 AtomDefinition.of("Wh", "watt hour", 3.6e3, energy).withPrefixes(),
                 // --- volume and flow ---
@@ -135,12 +135,12 @@ final class TradeUnits {
                 // --- time and rotation ---
                 // The Julian year, 365.25 d exactly (the mean of the four-year leap cycle; the
                 // astronomers' year "a"). NIST B.8 lists the 365-day year, 3.1536 E+07 s.
-                AtomDefinition.of("yr", "year (Julian, 365.25 days)", exact(times("365.25", "86400")),
+                AtomDefinition.of("yr", "Julian year", exact(times("365.25", "86400")),
                         Dimension.TIME),
                 // revolution per minute (rpm) → rad/s: 1.047 198 E-01 (B.8). An angular speed:
                 // 2π rad per minute. The radian is a plain number, so rpm is 0.1047 s⁻¹, not
                 // 1/60 Hz: a revolution frequency in Hz is the value divided by 2π.
-                AtomDefinition.of("rpm", "revolution per minute (an angular speed, 2π rad/min)",
+                AtomDefinition.of("rpm", "revolution per minute (angular speed)",
                         2 * Math.PI / 60, perTime),
                 // --- viscosity ---
                 // poise (P) → Pa·s: 1.0 E-01, exact (B.8).

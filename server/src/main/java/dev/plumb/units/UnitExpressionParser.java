@@ -219,7 +219,7 @@ final class UnitExpressionParser {
                 throw fail(refusal, start, pos - start);
             }
             throw new Failure(new UnitResult.Error("unknown unit '" + spelling + "'", start,
-                    pos - start, suggestions.suggest(spelling)));
+                    pos - start, suggestions.suggest(spelling, atoms)));
         }
         return new Value(unit.factor(), unit.dimension(), unit.symbol(), unit);
     }
