@@ -416,8 +416,8 @@ local function probe_checks(client, published, ws)
   typo = unknown_unit()
   local actions, aerr = request(client, 'textDocument/codeAction',
     { textDocument = { uri = uri }, range = typo.range, context = { diagnostics = { typo } } }, buf)
-  local fix = find_by(actions, 'title', "Change to 'm'")
-  check([[codeAction on "3 mtr" offers the quick fix "Change to 'm'"]], fix ~= nil and fix.kind == 'quickfix',
+  local fix = find_by(actions, 'title', "Change to 'm' (metre, a length)")
+  check([[codeAction on "3 mtr" offers the quick fix "Change to 'm' (metre, a length)"]], fix ~= nil and fix.kind == 'quickfix',
     show(titles_of(actions)) .. (actions and '' or ' ' .. aerr))
   if fix then
     local edits = fix.edit and fix.edit.changes and fix.edit.changes[uri]

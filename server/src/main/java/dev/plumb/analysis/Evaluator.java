@@ -134,7 +134,7 @@ final class Evaluator {
         UnitResult.Error err = (UnitResult.Error) result;
         int start = written.span().start() + err.offset();
         int end = Math.min(written.span().end(), start + Math.max(1, err.length()));
-        String message = err.message() + Suggestions.didYouMean(err.suggestions());
+        String message = err.message() + err.didYouMean();
         // Only a lone word can have been meant as a value's name; then the whole word is the mistake.
         if (afterNumber && written.text().matches("[\\p{L}_][\\p{L}\\p{Nd}_]*")) {
             start = written.span().start();
@@ -143,7 +143,7 @@ final class Evaluator {
                 + written.text() + " write `2 * " + written.text() + "`";
         }
         List<dev.plumb.diagnostics.Fix> fixes = new ArrayList<>();
-        for (String s : err.suggestions()) fixes.add(new dev.plumb.diagnostics.Fix("Change to '" + s + "'", new Span(start, end), s));
+        for (UnitResult.Suggestion s : err.offers()) fixes.add(new dev.plumb.diagnostics.Fix("Change to " + s.described(), new Span(start, end), s.spelling()));
         reporter.report(Code.UNIT_UNKNOWN, new Span(start, end), message, fixes, List.of());
         return null;
     }

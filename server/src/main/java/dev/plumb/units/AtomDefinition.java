@@ -13,9 +13,9 @@ record AtomDefinition(List<String> spellings, AtomUnit unit, boolean prefixable)
         spellings = List.copyOf(spellings);
     }
 
-    static AtomDefinition of(String canonical, double factor, Dimension dimension) {
+    static AtomDefinition of(String canonical, String name, double factor, Dimension dimension) {
         return new AtomDefinition(List.of(canonical),
-                new AtomUnit(canonical, factor, 0, dimension), false);
+                new AtomUnit(canonical, name, factor, 0, dimension), false);
     }
 
     AtomDefinition alias(String... more) {

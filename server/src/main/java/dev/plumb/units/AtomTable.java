@@ -45,7 +45,8 @@ final class AtomTable {
     }
 
     private static AtomUnit prefixed(SiPrefixes.Prefix prefix, AtomUnit base) {
-        return new AtomUnit(prefix.canonical() + base.symbol(), prefix.apply(base.factor()),
+        return new AtomUnit(prefix.canonical() + base.symbol(), prefix.name() + base.name(),
+                prefix.apply(base.factor()),
                 0, base.dimension());
     }
 

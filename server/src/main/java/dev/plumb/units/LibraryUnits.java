@@ -32,71 +32,71 @@ final class LibraryUnits {
     static List<AtomDefinition> all() {
         List<AtomDefinition> out = new ArrayList<>();
         // SI base units; the kilogram enters as the gram so that prefixes give kg, mg, µg.
-        out.add(read("m", Units.METRE).withPrefixes());
-        out.add(read("g", Units.GRAM).withPrefixes());
-        out.add(read("s", Units.SECOND).withPrefixes());
-        out.add(read("A", Units.AMPERE).withPrefixes());
-        out.add(read("K", Units.KELVIN).withPrefixes());
-        out.add(read("mol", Units.MOLE).withPrefixes());
-        out.add(read("cd", Units.CANDELA).withPrefixes());
+        out.add(read("m", "metre", Units.METRE).withPrefixes());
+        out.add(read("g", "gram", Units.GRAM).withPrefixes());
+        out.add(read("s", "second", Units.SECOND).withPrefixes());
+        out.add(read("A", "ampere", Units.AMPERE).withPrefixes());
+        out.add(read("K", "kelvin", Units.KELVIN).withPrefixes());
+        out.add(read("mol", "mole", Units.MOLE).withPrefixes());
+        out.add(read("cd", "candela", Units.CANDELA).withPrefixes());
         // SI derived units with special names.
-        out.add(read("rad", Units.RADIAN).withPrefixes());
-        out.add(read("sr", Units.STERADIAN));
-        out.add(read("Hz", Units.HERTZ).withPrefixes());
-        out.add(read("N", Units.NEWTON).withPrefixes());
-        out.add(read("Pa", Units.PASCAL).withPrefixes());
-        out.add(read("J", Units.JOULE).withPrefixes());
-        out.add(read("W", Units.WATT).withPrefixes());
-        out.add(read("C", Units.COULOMB).withPrefixes());
-        out.add(read("V", Units.VOLT).withPrefixes());
-        out.add(read("F", Units.FARAD).withPrefixes());
-        out.add(read("\u03A9", Units.OHM).alias("\u2126", "ohm").withPrefixes()); // Ω, ohm sign
-        out.add(read("S", Units.SIEMENS).withPrefixes());
-        out.add(read("Wb", Units.WEBER).withPrefixes());
-        out.add(read("T", Units.TESLA).withPrefixes());
-        out.add(read("H", Units.HENRY).withPrefixes());
-        out.add(read("lm", Units.LUMEN).withPrefixes());
-        out.add(read("lx", Units.LUX).withPrefixes());
-        out.add(read("Bq", Units.BECQUEREL).withPrefixes());
-        out.add(read("Gy", Units.GRAY).withPrefixes());
-        out.add(read("Sv", Units.SIEVERT).withPrefixes());
-        out.add(read("kat", Units.KATAL).withPrefixes());
-        out.add(read("°C", Units.CELSIUS).alias("degC"));
+        out.add(read("rad", "radian", Units.RADIAN).withPrefixes());
+        out.add(read("sr", "steradian", Units.STERADIAN));
+        out.add(read("Hz", "hertz", Units.HERTZ).withPrefixes());
+        out.add(read("N", "newton", Units.NEWTON).withPrefixes());
+        out.add(read("Pa", "pascal", Units.PASCAL).withPrefixes());
+        out.add(read("J", "joule", Units.JOULE).withPrefixes());
+        out.add(read("W", "watt", Units.WATT).withPrefixes());
+        out.add(read("C", "coulomb", Units.COULOMB).withPrefixes());
+        out.add(read("V", "volt", Units.VOLT).withPrefixes());
+        out.add(read("F", "farad", Units.FARAD).withPrefixes());
+        out.add(read("\u03A9", "ohm", Units.OHM).alias("\u2126", "ohm").withPrefixes()); // Ω, ohm sign
+        out.add(read("S", "siemens", Units.SIEMENS).withPrefixes());
+        out.add(read("Wb", "weber", Units.WEBER).withPrefixes());
+        out.add(read("T", "tesla", Units.TESLA).withPrefixes());
+        out.add(read("H", "henry", Units.HENRY).withPrefixes());
+        out.add(read("lm", "lumen", Units.LUMEN).withPrefixes());
+        out.add(read("lx", "lux", Units.LUX).withPrefixes());
+        out.add(read("Bq", "becquerel", Units.BECQUEREL).withPrefixes());
+        out.add(read("Gy", "gray", Units.GRAY).withPrefixes());
+        out.add(read("Sv", "sievert", Units.SIEVERT).withPrefixes());
+        out.add(read("kat", "katal", Units.KATAL).withPrefixes());
+        out.add(read("°C", "degree Celsius", Units.CELSIUS).alias("degC"));
         // Units accepted for use with the SI. Time units take no prefixes: "min" must stay
         // minutes and "h", "d" must stay hour and day.
-        out.add(read("min", Units.MINUTE));
-        out.add(read("h", Units.HOUR));
-        out.add(read("d", Units.DAY));
-        out.add(read("L", Units.LITRE).alias("l").withPrefixes());
-        out.add(read("°", USCustomary.DEGREE_ANGLE).alias("deg"));
-        out.add(read("%", Units.PERCENT));
+        out.add(read("min", "minute", Units.MINUTE));
+        out.add(read("h", "hour", Units.HOUR));
+        out.add(read("d", "day", Units.DAY).alias("day"));
+        out.add(read("L", "litre", Units.LITRE).alias("l").withPrefixes());
+        out.add(read("°", "degree of angle", USCustomary.DEGREE_ANGLE).alias("deg"));
+        out.add(read("%", "percent", Units.PERCENT));
         // US customary and imperial units.
-        out.add(read("ft", USCustomary.FOOT));
-        out.add(read("in", USCustomary.INCH));
-        out.add(read("yd", USCustomary.YARD));
-        out.add(read("mi", USCustomary.MILE));
-        out.add(read("nmi", USCustomary.NAUTICAL_MILE));
-        out.add(read("mph", USCustomary.MILE_PER_HOUR));
-        out.add(read("kn", USCustomary.KNOT).alias("knot"));
-        out.add(read("lb", USCustomary.POUND));
-        out.add(read("lbm", USCustomary.POUND));
-        out.add(read("lbf", Imperial.POUND_FORCE));
-        out.add(read("kgf", Imperial.KILOGRAM_FORCE));
-        out.add(read("hp", USCustomary.HORSEPOWER));
-        out.add(read("°F", USCustomary.FAHRENHEIT).alias("degF"));
-        out.add(read("°R", USCustomary.RANKINE).alias("degR"));
+        out.add(read("ft", "foot", USCustomary.FOOT));
+        out.add(read("in", "inch", USCustomary.INCH));
+        out.add(read("yd", "yard", USCustomary.YARD));
+        out.add(read("mi", "mile", USCustomary.MILE));
+        out.add(read("nmi", "nautical mile", USCustomary.NAUTICAL_MILE));
+        out.add(read("mph", "mile per hour", USCustomary.MILE_PER_HOUR));
+        out.add(read("kn", "knot", USCustomary.KNOT).alias("knot"));
+        out.add(read("lb", "avoirdupois pound", USCustomary.POUND));
+        out.add(read("lbm", "avoirdupois pound", USCustomary.POUND));
+        out.add(read("lbf", "pound-force", Imperial.POUND_FORCE));
+        out.add(read("kgf", "kilogram-force", Imperial.KILOGRAM_FORCE));
+        out.add(read("hp", "horsepower", USCustomary.HORSEPOWER));
+        out.add(read("°F", "degree Fahrenheit", USCustomary.FAHRENHEIT).alias("degF"));
+        out.add(read("°R", "degree Rankine", USCustomary.RANKINE).alias("degR"));
         return out;
     }
 
     /** Reads one library unit into plain numbers. */
-    static AtomDefinition read(String canonical, javax.measure.Unit<?> unit) {
+    static AtomDefinition read(String canonical, String name, javax.measure.Unit<?> unit) {
         UnitConverter toSystem = toSystemUnit(unit);
         var numbers = Calculus.currentNumberSystem();
         Number zero = toSystem.convert(RationalNumber.of(0));
         Number one = toSystem.convert(RationalNumber.of(1));
         double factor = numbers.subtract(one, zero).doubleValue();
         double offset = zero.doubleValue();
-        AtomUnit atom = new AtomUnit(canonical, factor, offset, dimensionOf(unit));
+        AtomUnit atom = new AtomUnit(canonical, name, factor, offset, dimensionOf(unit));
         return new AtomDefinition(List.of(canonical), atom, false);
     }
 

@@ -3,6 +3,7 @@ package dev.plumb.units;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import javax.measure.MetricPrefix;
 
 /**
@@ -12,7 +13,7 @@ import javax.measure.MetricPrefix;
 final class SiPrefixes {
 
     /** A prefix spelling and its power of ten. */
-    record Prefix(String spelling, String canonical, int exponent) {
+    record Prefix(String spelling, String canonical, String name, int exponent) {
 
         /** factor × 10^exponent, computed in decimal so "mg" is exactly 1e-6 as a double. */
         double apply(double factor) {
@@ -29,10 +30,11 @@ final class SiPrefixes {
     static List<Prefix> all() {
         List<Prefix> out = new ArrayList<>();
         for (MetricPrefix p : MetricPrefix.values()) {
-            out.add(new Prefix(p.getSymbol(), p.getSymbol(), p.getExponent()));
+            String name = p.name().toLowerCase(Locale.ROOT); // KILO → kilo
+            out.add(new Prefix(p.getSymbol(), p.getSymbol(), name, p.getExponent()));
             if (p.getSymbol().equals(MICRO_SIGN)) {
-                out.add(new Prefix(GREEK_MU, MICRO_SIGN, p.getExponent()));
-                out.add(new Prefix("u", MICRO_SIGN, p.getExponent()));
+                out.add(new Prefix(GREEK_MU, MICRO_SIGN, name, p.getExponent()));
+                out.add(new Prefix("u", MICRO_SIGN, name, p.getExponent()));
             }
         }
         return List.copyOf(out);

@@ -192,6 +192,15 @@ final class UnitExpressionParser {
             while (!atEnd() && Character.isLetter(text.charAt(pos))) {
                 pos++;
             }
+            // A water column names the molecule: "inH2O". A 2 after a capital H belongs to the
+            // atom, with what follows it ("inH20" is then an unknown unit near inH2O).
+            if (pos > start && text.charAt(pos - 1) == 'H'
+                    && (text.startsWith("2O", pos) || text.startsWith("20", pos))) {
+                pos += 2;
+                while (!atEnd() && Character.isLetterOrDigit(text.charAt(pos))) {
+                    pos++;
+                }
+            }
         }
         String spelling = text.substring(start, pos);
         if (!atEnd() && isAsciiDigit(text.charAt(pos))) {
@@ -205,8 +214,12 @@ final class UnitExpressionParser {
         }
         AtomUnit unit = atoms.find(spelling);
         if (unit == null) {
+            String refusal = GaugePressures.refusal(spelling);
+            if (refusal != null) {
+                throw fail(refusal, start, pos - start);
+            }
             throw new Failure(new UnitResult.Error("unknown unit '" + spelling + "'", start,
-                    pos - start, suggestions.suggest(spelling)));
+                    pos - start, suggestions.suggest(spelling, atoms)));
         }
         return new Value(unit.factor(), unit.dimension(), unit.symbol(), unit);
     }

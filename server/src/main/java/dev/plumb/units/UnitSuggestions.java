@@ -26,7 +26,10 @@ final class UnitSuggestions {
             Map.entry("metres", "m"), Map.entry("sec", "s"), Map.entry("second", "s"),
             Map.entry("seconds", "s"), Map.entry("hr", "h"), Map.entry("hour", "h"),
             Map.entry("hours", "h"), Map.entry("minute", "min"), Map.entry("minutes", "min"),
-            Map.entry("mins", "min"), Map.entry("day", "d"), Map.entry("days", "d"),
+            Map.entry("mins", "min"), Map.entry("days", "d"),
+            Map.entry("year", "yr"), Map.entry("years", "yr"), Map.entry("tonne", "t"),
+            Map.entry("tonnes", "t"), Map.entry("kips", "kip"), Map.entry("gallon", "gal"),
+            Map.entry("gallons", "gal"), Map.entry("ounce", "oz"), Map.entry("ounces", "oz"),
             Map.entry("gram", "g"), Map.entry("kilogram", "kg"), Map.entry("kilo", "kg"),
             Map.entry("newton", "N"), Map.entry("pascal", "Pa"), Map.entry("joule", "J"),
             Map.entry("watt", "W"), Map.entry("kelvin", "K"), Map.entry("degk", "K"),
@@ -55,7 +58,59 @@ final class UnitSuggestions {
         this.unprefixed = Set.copyOf(unprefixed);
     }
 
-    List<String> suggest(String unknown) {
+    /** Close known units for {@code unknown}, each told by its name, kind and size. */
+    List<UnitResult.Suggestion> suggest(String unknown, AtomTable atoms) {
+        return spellings(unknown).stream()
+                .map(s -> new UnitResult.Suggestion(s, describe(s, atoms)))
+                .toList();
+    }
+
+    private String describe(String spelling, AtomTable atoms) {
+        AtomUnit atom = atoms.find(spelling);
+        if (atom != null) {
+            return describe(atom);
+        }
+        // A compound offered for a word ("kph" → "km/h"): its kind and size.
+        Unit unit = ((UnitResult.Ok) UnitExpressionParser.parse(spelling, atoms, this)).unit();
+        return kindAndSize(unit.symbol(), unit.factor(), unit.dimension());
+    }
+
+    /**
+     * "metre, a length"; "pound-force per square inch, a pressure: 1 psi = 6894.757 Pa";
+     * "degree Fahrenheit, a temperature". A suggestion written as a compound ("km/h") is
+     * described by its parts' kind.
+     */
+    static String describe(AtomUnit atom) {
+        if (atom.offset() != 0) {
+            return atom.name() + ", " + kind(atom.dimension());
+        }
+        return atom.name() + ", " + kindAndSize(atom.symbol(), atom.factor(), atom.dimension());
+    }
+
+    /** "a pressure: 1 psi = 6894.757 Pa", or just "a length" for a coherent SI unit. */
+    private static String kindAndSize(String symbol, double factor, Dimension d) {
+        if (factor == 1) {
+            return kind(d);
+        }
+        DimensionNames.Entry entry = DimensionNames.lookup(d);
+        String si = entry == null ? d.siUnits() : entry.symbol();
+        return kind(d) + ": 1 " + symbol + " = " + QuantityFormat.number(factor, 7)
+                + (si.isEmpty() ? "" : " " + si);
+    }
+
+    private static String kind(Dimension d) {
+        String name = DimensionNames.nameOf(d);
+        if (name == null) {
+            return "a quantity in " + d.siUnits();
+        }
+        return (startsWithVowel(name) ? "an " : "a ") + name;
+    }
+
+    private static boolean startsWithVowel(String word) {
+        return "aeiou".indexOf(word.charAt(0)) >= 0;
+    }
+
+    List<String> spellings(String unknown) {
         String lower = unknown.toLowerCase(Locale.ROOT);
         Set<String> out = new LinkedHashSet<>();
         pool.stream().filter(s -> s.toLowerCase(Locale.ROOT).equals(lower))

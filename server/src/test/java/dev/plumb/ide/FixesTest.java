@@ -35,9 +35,21 @@ class FixesTest {
 
     @Test
     void aCloseSpellingOfAUnitOrANameIsOffered() {
-        check("L = 3 mt$0r\n", "Change to 'm'", "L = 3 m\n");
+        check("L = 3 mt$0r\n", "Change to 'm' (metre, a length)", "L = 3 m\n");
         check("input speed = 3 m/s\nq = 0.5 * 1.2 kg/m^3 * spe$0ed2^2\n", "Change to 'speed'",
             "input speed = 3 m/s\nq = 0.5 * 1.2 kg/m^3 * speed^2\n");
+    }
+
+    @Test
+    void aUnitOfAnotherSizeOrKindSaysSoInItsTitle() {
+        List<String> offered = titles("p = 3 mp$0a\n");
+        // mPa is 0.001 Pa and MPa 1e6 Pa: the titles tell the two apart before either is taken.
+        assertTrue(offered.contains("Change to 'mPa' (millipascal, a pressure: 1 mPa = 0.001 Pa)"),
+            offered.toString());
+        assertTrue(offered.contains("Change to 'MPa' (megapascal, a pressure: 1 MPa = 1e6 Pa)"),
+            offered.toString());
+        assertTrue(offered.contains("Change to 'mph' (mile per hour, a velocity: 1 mph = 0.44704 m/s)"),
+            offered.toString());
     }
 
     @Test

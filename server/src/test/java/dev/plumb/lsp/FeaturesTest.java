@@ -162,7 +162,7 @@ class FeaturesTest {
         List<String> titles = actions("x.plumb", text, new Range(new Position(2, 0), new Position(6, 14))).stream()
             .map(CodeAction::getTitle).toList();
         assertTrue(titles.contains("Insert '*'"), titles.toString());
-        assertTrue(titles.contains("Change to 'm'"), titles.toString());
+        assertTrue(titles.contains("Change to 'm' (metre, a length)"), titles.toString());
         assertTrue(titles.stream().anyMatch(t -> t.startsWith("Use cd_sphere_sn")), titles.toString());
         assertTrue(titles.contains("Show q in SI (Pa)"), titles.toString());
         assertTrue(titles.contains("Show q in psi"), titles.toString());

@@ -112,6 +112,92 @@ class NistFactorsTest {
         exact("bar", "1.0 E+05"); // B.8 bar (bar) → pascal (Pa), exact; from memory
     }
 
+    @Test
+    void ounce() {
+        rounded("oz", "2.834 952 E-02"); // B.8 ounce (avoirdupois) (oz) → kg; from memory
+    }
+
+    @Test
+    void shortTon() {
+        rounded("ton", "9.071 847 E+02"); // B.8 ton, short (2000 lb) → kg; from memory
+        exact("ton", "9.071 847 4 E+02"); // by hand: 2000 × 0.453 592 37 kg = 907.184 74 kg
+    }
+
+    @Test
+    void tonne() {
+        exact("t", "1.0 E+03"); // B.8 ton, metric (t) → kilogram (kg), exact; from memory
+    }
+
+    @Test
+    void kip() {
+        rounded("kip", "4.448 222 E+03"); // B.8 kip (1 kip = 1000 lbf) → newton (N); from memory
+        rounded("kipf", "4.448 222 E+03"); // B.8 kip → N; from memory
+        // by hand: 1000 × 0.453 592 37 kg × 9.806 65 m/s² = 4448.221 615 260 5 N
+        exact("kip", "4.448 221 615 260 5 E+03");
+    }
+
+    @Test
+    void dyne() {
+        exact("dyn", "1.0 E-05"); // B.8 dyne (dyn) → newton (N), exact; from memory
+    }
+
+    @Test
+    void poundForcePerFoot() {
+        rounded("plf", "1.459 390 E+01"); // B.8 pound-force per foot (lbf/ft) → N/m; from memory
+    }
+
+    @Test
+    void kipPerFoot() {
+        // by hand: 1000 × B.8 pound-force per foot (lbf/ft) → N/m 1.459 390 E+01; from memory
+        rounded("klf", "1.459 390 E+04");
+    }
+
+    @Test
+    void psiAbsolute() {
+        rounded("psia", "6.894 757 E+03"); // B.8 psi (pound-force per square inch) → Pa; from memory
+    }
+
+    @Test
+    void kipPerSquareInch() {
+        rounded("ksi", "6.894 757 E+06"); // B.8 kip per square inch (ksi) → Pa; from memory
+    }
+
+    @Test
+    void poundForcePerSquareFoot() {
+        rounded("psf", "4.788 026 E+01"); // B.8 pound-force per square foot (lbf/ft²) → Pa; from memory
+        rounded("lbf/ft^2", "4.788 026 E+01"); // the same, written out
+    }
+
+    @Test
+    void kipPerSquareFoot() {
+        // by hand: 1000 × B.8 pound-force per square foot (lbf/ft²) → Pa 4.788 026 E+01; from memory
+        rounded("ksf", "4.788 026 E+04");
+    }
+
+    @Test
+    void torr() {
+        rounded("Torr", "1.333 224 E+02"); // B.8 torr (Torr) → pascal (Pa); from memory
+        rounded("torr", "1.333 224 E+02"); // B.8 torr → Pa; from memory
+    }
+
+    @Test
+    void mercuryColumns() {
+        // B.8 millimeter of mercury, conventional (mmHg) → Pa; from memory
+        rounded("mmHg", "1.333 224 E+02");
+        // B.8 inch of mercury, conventional (inHg) → Pa; from memory
+        rounded("inHg", "3.386 389 E+03");
+    }
+
+    @Test
+    void waterColumns() {
+        // B.8 millimeter of water, conventional (mmH2O) → Pa, exact; from memory
+        exact("mmH2O", "9.806 65 E+00");
+        // B.8 inch of water, conventional (inH2O) → Pa; from memory
+        rounded("inH2O", "2.490 889 E+02");
+        // B.8 foot of water, conventional (ftH2O) → Pa; from memory
+        rounded("ftH2O", "2.989 067 E+03");
+    }
+
     // --- power ---
 
     @Test
@@ -119,6 +205,27 @@ class NistFactorsTest {
         // B.8 horsepower (550 ft·lbf/s) → watt (W) 7.456 999 E+02; from memory. The library's
         // horsepower is this mechanical one, not the electric (746 W) or metric one.
         rounded("hp", "7.456 999 E+02");
+    }
+
+    // --- energy ---
+
+    @Test
+    void britishThermalUnit() {
+        // B.8 British thermal unit_IT (Btu_IT) → joule (J); from memory
+        rounded("BTU", "1.055 056 E+03");
+        rounded("Btu", "1.055 056 E+03");
+    }
+
+    @Test
+    void kilocalorie() {
+        exact("kcal", "4.1868 E+03"); // B.8 kilocalorie_IT (kcal_IT) → joule (J), exact; from memory
+    }
+
+    @Test
+    void wattHour() {
+        exact("Wh", "3.6 E+03"); // B.8 watt hour (W · h) → joule (J), exact; from memory
+        exact("kWh", "3.6 E+06"); // B.8 kilowatt hour (kW · h) → joule (J), exact; from memory
+        exact("MWh", "3.6 E+09"); // by hand: 1000 × 3.6 E+06 J
     }
 
     // --- viscosity ---
@@ -155,6 +262,40 @@ class NistFactorsTest {
         exact("min", "6.0 E+01"); // B.8 minute (min) → second (s), exact; from memory
         exact("h", "3.6 E+03"); // B.8 hour (h) → second (s), exact; from memory
         exact("d", "8.64 E+04"); // B.8 day (d) → second (s), exact; from memory
+    }
+
+    @Test
+    void usGallon() {
+        rounded("gal", "3.785 412 E-03"); // B.8 gallon [U.S.] (gal) → cubic meter (m³); from memory
+        exact("gal", "3.785 411 784 E-03"); // by hand: 231 in³ × (0.0254 m/in)³
+    }
+
+    @Test
+    void flowRates() {
+        // B.8 gallon [U.S.] per minute (gpm) (gal/min) → m³/s; from memory
+        rounded("gpm", "6.309 020 E-05");
+        // B.8 cubic foot per minute (ft³/min) → m³/s; from memory
+        rounded("cfm", "4.719 474 E-04");
+        // B.8 cubic foot per second (ft³/s) → m³/s; from memory
+        rounded("cfs", "2.831 685 E-02");
+    }
+
+    @Test
+    void dayWrittenOut() {
+        exact("day", "8.64 E+04"); // B.8 day (d) → second (s), exact; from memory
+    }
+
+    @Test
+    void julianYear() {
+        // by hand: 365.25 d × 8.64 E+04 s/d (B.8 day, exact; from memory) = 31 557 600 s. NIST
+        // B.8's year (365 days) is 3.1536 E+07 s; Plumb's yr is the Julian year, on purpose.
+        exact("yr", "3.155 76 E+07");
+    }
+
+    @Test
+    void revolutionPerMinute() {
+        // B.8 revolution per minute (rpm) (r/min) → radian per second (rad/s); from memory
+        rounded("rpm", "1.047 198 E-01");
     }
 
     @Test

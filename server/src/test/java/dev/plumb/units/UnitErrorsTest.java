@@ -34,6 +34,52 @@ class UnitErrorsTest {
     }
 
     @Test
+    void gaugePressuresAreRefusedWithAdvice() {
+        UnitResult.Error e = error("psig", "'psig' is a gauge pressure, a difference from the local"
+                + " atmospheric pressure, which Plumb cannot know: write the absolute pressure in psia,"
+                + " or write the gauge reading in psi and add the atmosphere yourself: p = p_g + p_atm",
+                0, 4);
+        assertEquals(List.of(), e.suggestions()); // no quick fix: each choice changes the value
+        error("lbf/psig", e.message(), 4, 4);
+        UnitResult.Error bar = assertInstanceOf(UnitResult.Error.class, UNITS.resolve("barg"));
+        assertTrue(bar.message().contains("write the absolute pressure in bar,"), bar.message());
+    }
+
+    @Test
+    void waterColumnsTakeTheirDigit() {
+        assertEquals("inH2O", error("inH20", "unknown unit 'inH20'", 0, 5).suggestions().get(0));
+        error("H2", "write the exponent with '^', as in H^2", 1, 1);
+    }
+
+    @Test
+    void everySuggestionSaysWhatItIs() {
+        // A suggestion of another size or kind must say so: name, kind of quantity, SI size.
+        // by hand: 1 mi = 1.609 344 km (NIST SP 811 B.8 mile, exact; from memory), 1 min = 60 s
+        assertEquals(" (did you mean 'm' (metre, a length) or 'mi' (mile, a length: 1 mi = 1609.344 m)"
+                + " or 'min' (minute, a time: 1 min = 60 s)?)", error("mtr", "unknown unit 'mtr'", 0, 3)
+                .didYouMean());
+        // by hand: 1 km/h = 1000 m / 3600 s = 0.277 777 8 m/s to seven figures
+        assertEquals("'km/h' (a velocity: 1 km/h = 0.2777778 m/s)",
+                error("kph", "unknown unit 'kph'", 0, 3).offers().get(0).described());
+        assertEquals("'degF' (degree Fahrenheit, a temperature)",
+                error("degf", "unknown unit 'degf'", 0, 4).offers().get(0).described());
+    }
+
+    @Test
+    void theUnitsEngineersWriteAreKnownNotCorrected() {
+        // Once offered psi (144 × psf), psi (ksi/1000), kg (for kip) and T (tesla, for t).
+        for (String known : List.of("psf", "ksi", "kip", "t", "ton", "klf", "plf", "psia")) {
+            assertInstanceOf(UnitResult.Ok.class, UNITS.resolve(known), known);
+        }
+    }
+
+    @Test
+    void aOneLetterCaseSlipNamesTheKind() {
+        assertEquals("'N' (newton, a force)", error("n", "unknown unit 'n'", 0, 1).offers().get(0)
+                .described());
+    }
+
+    @Test
     void atMostThreeSuggestions() {
         assertTrue(error("mtr", "unknown unit 'mtr'", 0, 3).suggestions().size() <= 3);
     }

@@ -1,5 +1,6 @@
 package dev.plumb.units;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -36,6 +37,39 @@ class UnitRegistryTest {
         }
         assertFalse(symbols.contains("kg/m^3"));
         assertThrows(UnsupportedOperationException.class, () -> symbols.add("x"));
+    }
+
+    @Test
+    void noSpellingHidesAPrefixedUnit() {
+        // An exact spelling wins over a prefix split, so a new unit spelled like a prefix and a
+        // prefixable unit ("Pm", "kWh" defined whole) would silently hide that reading.
+        List<AtomDefinition> all = new ArrayList<>(LibraryUnits.all());
+        all.addAll(TradeUnits.all());
+        Set<String> exact = new java.util.HashSet<>();
+        all.forEach(d -> exact.addAll(d.spellings()));
+        List<String> hidden = new ArrayList<>();
+        for (AtomDefinition d : all) {
+            if (!d.prefixable()) {
+                continue;
+            }
+            for (String base : d.spellings()) {
+                for (SiPrefixes.Prefix p : SiPrefixes.all()) {
+                    if (exact.contains(p.spelling() + base)) {
+                        hidden.add(p.spelling() + base);
+                    }
+                }
+            }
+        }
+        assertEquals(List.of(), hidden);
+    }
+
+    @Test
+    void everyUnitHasAName() {
+        List<AtomDefinition> all = new ArrayList<>(LibraryUnits.all());
+        all.addAll(TradeUnits.all());
+        for (AtomDefinition d : all) {
+            assertFalse(d.unit().name().isBlank(), d.spellings().toString());
+        }
     }
 
     @Test
