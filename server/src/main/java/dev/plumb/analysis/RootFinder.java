@@ -22,7 +22,8 @@ final class RootFinder {
     static final int MAX_EVALUATIONS = 200;
     static final int OUTWARD_STEPS = 40;
 
-    enum Status { SOLVED, NO_ROOT, NOT_CONVERGED, NO_VALUE }
+    /** TOO_WIDE: a root was bracketed, but only to within a fraction of the bracket, too coarse for its size. */
+    enum Status { SOLVED, NO_ROOT, NOT_CONVERGED, NO_VALUE, TOO_WIDE }
 
     /** One evaluation of the residual during refinement, with the bracket known after it. */
     record Iterate(int n, double x, double residual, double low, double high) {
@@ -117,6 +118,11 @@ final class RootFinder {
                 return new Result(Status.NOT_CONVERGED, root, residual, record, brackets, Math.min(known[0], known[2]),
                     Math.max(known[0], known[2]), fLow, fHigh, null);
             }
+            // The absolute floor is a fraction of the bracket: a root far smaller than the bracket
+            // is then known only roughly. Say so rather than give a rough value as solved.
+            if (!log && residual != 0 && absolute > 1e-6 * Math.abs(root)) {
+                return new Result(Status.TOO_WIDE, root, residual, record, brackets, low, high, fLow, fHigh, null);
+            }
             return new Result(Status.SOLVED, root, residual, record, brackets, low, high, fLow, fHigh, null);
         } catch (TooManyEvaluationsException e) {
             return new Result(Status.NOT_CONVERGED, Double.NaN, Double.NaN, record, brackets, Math.min(known[0], known[2]),
@@ -144,7 +150,8 @@ final class RootFinder {
         for (int i = 0; i < n; i++) {
             double t = (double) i / (n - 1);
             xs[i] = log ? Math.copySign(Math.exp(Math.log(Math.abs(low)) + t * (Math.log(Math.abs(high)) - Math.log(Math.abs(low)))), low)
-                : low + t * (high - low);
+                : Double.isFinite(high - low) ? low + t * (high - low)
+                    : low * (1 - t) + high * t;   // a bracket of ±1e308: its width overflows
         }
         xs[0] = low;
         xs[n - 1] = high;
@@ -171,8 +178,9 @@ final class RootFinder {
     private static double[] wider(DoubleUnaryOperator f, double low, double high) {
         boolean positive = low > 0;
         boolean negative = high < 0;
-        double wl = positive ? low / 1000 : negative ? low * 1000 : low - 10 * (high - low);
-        double wh = positive ? high * 1000 : negative ? high / 1000 : high + 10 * (high - low);
+        double width = Math.min(high - low, Double.MAX_VALUE);
+        double wl = Math.max(-Double.MAX_VALUE, positive ? low / 1000 : negative ? low * 1000 : low - 10 * width);
+        double wh = Math.min(Double.MAX_VALUE, positive ? high * 1000 : negative ? high / 1000 : high + 10 * width);
         double[] xs = samples(wl, wh, 2 * SCAN_POINTS);
         double[] fs = new double[xs.length];
         for (int i = 0; i < xs.length; i++) fs[i] = f.applyAsDouble(xs[i]);

@@ -71,6 +71,12 @@ final class SeekRunner {
                 return failed(name);
             }
             dim = low.dimension();
+            if (low.si() == high.si()) {
+                reporter.report(Code.SOLVE_NO_ROOT, Span.cover(f.low().span(), f.high().span()), "the bracket "
+                    + Shown.source(text, Span.cover(f.low().span(), f.high().span())) + " holds a single value, so there is "
+                    + "nothing to search: give two different ends, LOW .. HIGH, around the value you expect");
+                return failed(name);
+            }
             residual = residual(name, dim, dependents, f);
             result = RootFinder.within(residual, low.si(), high.si());
             first = low.si();
@@ -93,6 +99,13 @@ final class SeekRunner {
         switch (result.status()) {
             case NO_ROOT -> {
                 reportNoRoot(f, result, dim, unit, sides[0].dimension());
+                return failed(name);
+            }
+            case TOO_WIDE -> {
+                reporter.report(Code.SOLVE_NOT_CONVERGED, f.name().span(), "the bracket is too wide to find the root of "
+                    + name + " to the accuracy Plumb needs: it lies near " + show(result.root(), dim, unit) + ", small beside a "
+                    + "bracket from " + show(result.low(), dim, unit) + " to " + show(result.high(), dim, unit)
+                    + "; narrow the bracket around the value you expect");
                 return failed(name);
             }
             case NOT_CONVERGED -> {

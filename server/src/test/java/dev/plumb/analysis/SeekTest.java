@@ -190,6 +190,21 @@ class SeekTest {
     }
 
     @Test
+    void extremeBracketsAreSearchedOrRefusedNeverSilentlyWrong() {
+        // by hand: w^3 = 0 at w = 0 exactly
+        Analysis a = Fixture.analyze("seek w in -3 .. 3 where w^3 = 0\n");
+        assertEquals(List.of(), codes(a));
+        assertEquals(0, Fixture.value(a, "w").value().si(), 0);
+        // x = 3 lies in a bracket of ±1e308, far too wide to pin it down: said, not guessed
+        Analysis wide = Fixture.analyze("seek x in -1e308 .. 1e308 where x = 3\n");
+        assertEquals(List.of(Code.SOLVE_NOT_CONVERGED), codes(wide));
+        assertTrue(wide.diagnostics().get(0).message().contains("narrow the bracket"), wide.diagnostics().get(0).message());
+        Analysis empty = Fixture.analyze("seek y in 0 .. 0 where y = 0\n");
+        assertEquals(List.of(Code.SOLVE_NO_ROOT), codes(empty));
+        assertTrue(empty.diagnostics().get(0).message().contains("holds a single value"));
+    }
+
+    @Test
     void theBracketMustHaveOneDimension() {
         Analysis a = Fixture.analyze("seek x in 1 m .. 2 s where x = 1.5 m\n");
         assertEquals(List.of(Code.UNIT_MISMATCH), codes(a));
