@@ -85,6 +85,55 @@ class EngineFuzzTest {
         assertEquals(fresh.chunks(), reparsed.chunks(), what);
     }
 
+    /**
+     * A document in a hostile workspace (links to a folder outside, to `/`, to /dev/zero, to a
+     * FIFO, a `.plumb` link to a `.env`): whatever it `use`s, nothing outside the workspace and
+     * nothing of a refused file shows in any finding, hover or completion, and the run ends.
+     */
+    @FuzzTest(maxDuration = "2m")
+    void useInAHostileWorkspaceShowsNothingOutside(byte[] bytes) {
+        HostileWorkspace ws = HostileWorkspace.get();
+        String fuzzed = new String(bytes, StandardCharsets.UTF_8);
+        StringBuilder text = new StringBuilder();
+        for (String path : HostileWorkspace.PATHS) {
+            if (Math.floorMod(fuzzed.hashCode() ^ path.hashCode(), 3) != 0) text.append("use \"").append(path).append("\"\n");
+        }
+        text.append(fuzzed).append("\nz = ").append(HostileWorkspace.SECRET).append("\n");
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(ws.root().resolve("main.plumb"),
+            text.toString());
+        StringBuilder shown = new StringBuilder();
+        for (Diagnostic d : a.diagnostics()) shown.append(d.message()).append('\n');
+        for (int at = 0; at <= a.text().length(); at += Math.max(1, a.text().length() / 16)) {
+            String hover = HoverText.at(a, at);
+            if (hover != null) shown.append(hover).append('\n');
+        }
+        Completion.at(a, a.text().length()).forEach(c -> shown.append(c.label()).append(' ').append(c.detail()).append('\n'));
+        String all = shown.toString();
+        for (String secret : HostileWorkspace.CONTENTS) {
+            assertTrue(!all.contains(secret), "shows '" + secret + "' from outside or from a refused file:\n" + all);
+        }
+    }
+
+    /** Quick fixes and formatting edit only inside the text, never overlapping; formatting changes only blanks. */
+    @FuzzTest(maxDuration = "2m")
+    void editsStayInsideTheTextAndFormattingChangesOnlyBlanks(byte[] bytes) {
+        String text = new String(bytes, StandardCharsets.UTF_8);
+        Analysis a = analyze(text);
+        for (Fixes.Action action : Fixes.at(a, new Span(0, text.length()))) {
+            int end = -1;
+            for (dev.plumb.ide.Edit e : action.edits().stream()
+                .sorted(java.util.Comparator.comparingInt(dev.plumb.ide.Edit::offset)).toList()) {
+                assertTrue(e.offset() >= 0 && e.end() <= text.length() && e.offset() >= end, action.title() + ": " + e);
+                end = e.end();
+            }
+        }
+        for (dev.plumb.ide.Edit e : dev.plumb.ide.Formatter.format(text)) {
+            assertTrue(e.offset() >= 0 && e.end() <= text.length(), e.toString());
+            assertTrue(text.substring(e.offset(), e.end()).isBlank() && e.replacement().isBlank(),
+                "formatting changes only blanks: " + e);
+        }
+    }
+
     private static String escaped(String s) {
         StringBuilder b = new StringBuilder("\"");
         s.codePoints().forEach(c -> b.append(c >= 0x20 && c < 0x7f ? Character.toString(c) : String.format("\\u{%x}", c)));
