@@ -5,10 +5,13 @@ import java.nio.charset.StandardCharsets;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
-/** The `plumb` command line. */
+/**
+ * The `plumb` command line for people and CI. The language server's command is added by the
+ * launcher ({@code dev.plumb.app.Plumb}), so that this package never depends on the protocol.
+ */
 @Command(name = "plumb", mixinStandardHelpOptions = true, version = "plumb 0.1.0",
     description = "Checks plain-text drag, lift and skin-friction calcs: units, limits and checks.",
-    subcommands = {CheckCommand.class, EvalCommand.class, LspCommand.class})
+    subcommands = {CheckCommand.class, EvalCommand.class})
 public final class Main implements Runnable {
     /** Exit codes: 0 clean, 1 errors or failed checks, 2 usage or input/output problems. */
     static final int CLEAN = 0;
@@ -23,14 +26,15 @@ public final class Main implements Runnable {
         throw new CommandLine.ParameterException(spec.commandLine(), "name a command: check or eval");
     }
 
-    public static void main(String[] args) {
-        System.exit(run(args, new PrintStream(System.out, true, StandardCharsets.UTF_8),
-            new PrintStream(System.err, true, StandardCharsets.UTF_8)));
-    }
-
     /** Runs the command line with the given streams; returns the exit code. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
+        return run(args, out, err, java.util.Map.of());
+    }
+
+    /** As {@link #run(String[], PrintStream, PrintStream)}, with more commands by name (the launcher's). */
+    public static int run(String[] args, PrintStream out, PrintStream err, java.util.Map<String, Object> more) {
         CommandLine cli = new CommandLine(new Main());
+        more.forEach(cli::addSubcommand);
         cli.setOut(new java.io.PrintWriter(new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8), true));
         // Errors echo what was typed (paths, option values): neutralised like every report.
         cli.setErr(new NeutralWriter(new java.io.OutputStreamWriter(err, StandardCharsets.UTF_8), java.util.Set.of()));

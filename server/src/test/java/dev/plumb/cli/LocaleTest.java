@@ -26,7 +26,7 @@ class LocaleTest {
         Path calc = dir.resolve("air.plumb");
         Files.writeString(calc, "title \"Luftdichte ρ\"\nρ_air = 1.2 kg/m^3\nμ = 1.8e-5 Pa*s\n", StandardCharsets.UTF_8);
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        ProcessBuilder pb = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), Main.class.getName(),
+        ProcessBuilder pb = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), "dev.plumb.app.Plumb",
             "eval", "--no-color", calc.toString());
         pb.environment().keySet().removeIf(k -> k.startsWith("LC_") || k.equals("LANG") || k.equals("JAVA_TOOL_OPTIONS"));
         pb.environment().put("LANG", "C");

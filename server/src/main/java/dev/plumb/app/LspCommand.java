@@ -1,4 +1,4 @@
-package dev.plumb.cli;
+package dev.plumb.app;
 
 import dev.plumb.lsp.LspMain;
 import java.util.concurrent.Callable;
