@@ -55,8 +55,15 @@ public final class Formatter {
             if (line != null) block.add(line);
         }
         if (!block.isEmpty()) new AlignedBlock(text, block).edits(edits);
+        // Formatting moves blanks and nothing else: a gap holding anything more (a byte-order
+        // mark inside a line, say) is left as written, whatever the rules above decided.
+        edits.removeIf(e -> !onlyBlanks(text.substring(e.offset(), e.end())) || !onlyBlanks(e.replacement()));
         edits.sort(Comparator.comparingInt(Edit::offset));
         return edits;
+    }
+
+    private static boolean onlyBlanks(String s) {
+        return s.chars().allMatch(c -> c == ' ' || c == '\t');
     }
 
     /** The text with the edits made; the edits must not overlap. */

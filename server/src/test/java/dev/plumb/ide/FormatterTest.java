@@ -30,6 +30,15 @@ class FormatterTest {
     // ---- lining up -------------------------------------------------------------------
 
     @Test
+    void aByteOrderMarkInsideALineIsNeverRemoved() {
+        // Found by the fuzzer: a gap holding U+FEFF was once rewritten as blanks, losing it.
+        String text = "input a = 1.2 kg/m^3   as fluid\ufeff   \"air\"\ninput bb = 2 m\n";
+        String formatted = Formatter.apply(text, Formatter.format(text));
+        assertEquals(text.chars().filter(c -> c == 0xFEFF).count(), formatted.chars().filter(c -> c == 0xFEFF).count());
+        assertEquals(text.replaceAll("[ \t]", ""), formatted.replaceAll("[ \t]", ""), "only blanks change");
+    }
+
+    @Test
     void aSmallCalcLinesUpSectionBySection() {
         check("""
             title "Survey buoy B-7: drag on the antenna whip"
