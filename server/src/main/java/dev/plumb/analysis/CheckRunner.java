@@ -54,6 +54,9 @@ final class CheckRunner {
         List<Value> values = new ArrayList<>();
         for (Expr e : c.operands()) values.add(evaluator.eval(e));
         if (values.stream().anyMatch(v -> !v.known())) {
+            // Never skipped in silence: a check that cannot be judged is a finding of its own.
+            reporter.report(Code.CHECK_NOT_EVALUATED, c.span(), "this check is not evaluated, so it neither passes nor fails: "
+                + missing(c, evaluator) + "; fix that, and the check runs");
             return new Row.CheckRow(c.span(), source, null, "not evaluated: a value it needs is unknown", c.note());
         }
         for (int i = 1; i < values.size(); i++) {
@@ -93,6 +96,21 @@ final class CheckRunner {
         String why = c.note() == null ? "" : " (" + c.note() + ")";
         reporter.report(Code.CHECK_FAILED, c.span(), "check failed: " + String.join("; ", failures) + why);
         return new Row.CheckRow(c.span(), source, false, shownValues.toString(), c.note());
+    }
+
+    /** Which values the check lacks, by name where a name has no value. */
+    private static String missing(Statement.Check c, Evaluator evaluator) {
+        java.util.Set<String> unknown = new java.util.LinkedHashSet<>();
+        for (Expr e : c.operands()) {
+            References.each(e, (name, span) -> {
+                Binding b = evaluator.lookup(name);
+                if (b == null || (b instanceof Binding.ValueBinding v && !v.value().known())) unknown.add(name);
+            });
+        }
+        if (unknown.isEmpty()) return "a value it needs could not be computed (see the finding on this line)";
+        List<String> names = new ArrayList<>(unknown);
+        return (names.size() == 1 ? names.get(0) + " has" : String.join(", ", names) + " have") + " no value (see the "
+            + "finding that says why)";
     }
 
     private boolean holds(Value a, Comparator op, Value b) {

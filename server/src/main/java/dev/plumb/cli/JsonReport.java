@@ -35,6 +35,7 @@ final class JsonReport {
         summary.addProperty("hints", t.count(Severity.HINT) + t.count(Severity.INFO));
         summary.addProperty("checksPassed", t.checksPassed());
         summary.addProperty("checksFailed", t.checksFailed());
+        summary.addProperty("checksNotEvaluated", t.checksNotEvaluated());
         root.add("summary", summary);
         root.addProperty("notice", Caution.TEXT);
         out.println(new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root));

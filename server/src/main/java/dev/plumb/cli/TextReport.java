@@ -18,9 +18,10 @@ final class TextReport {
             for (Diagnostic d : c.diagnostics()) out.println(line(c, d, style));
         }
         Tally t = Tally.of(results);
-        String checks = t.checksFailed() == 0
+        String checks = t.checksFailed() == 0 && t.checksNotEvaluated() == 0
             ? style.good(t.checksPassed() + " checks passed")
-            : t.checksPassed() + " checks passed, " + style.bad(t.checksFailed() + " failed");
+            : t.checksPassed() + " checks passed, " + style.bad(t.checksFailed() + " failed")
+                + (t.checksNotEvaluated() == 0 ? "" : ", " + style.bad(t.checksNotEvaluated() + " not evaluated"));
         out.println(style.bold("Checked " + t.files() + " file" + (t.files() == 1 ? "" : "s") + ": ")
             + plural(t.count(Severity.ERROR), "error") + ", " + plural(t.count(Severity.WARNING), "warning") + ", "
             + plural(t.count(Severity.HINT) + t.count(Severity.INFO), "hint") + "; " + checks + ".");
@@ -38,26 +39,28 @@ final class TextReport {
     }
 
     /** Totals over a run. */
-    record Tally(int files, long errors, long warnings, long hints, long infos, long checksPassed, long checksFailed) {
+    record Tally(int files, long errors, long warnings, long hints, long infos, long checksPassed, long checksFailed,
+                 long checksNotEvaluated) {
         static Tally of(List<Batch.Checked> results) {
             long[] sev = new long[Severity.values().length];
             long passed = 0;
             long failed = 0;
+            long notEvaluated = 0;
             for (Batch.Checked c : results) {
                 for (Diagnostic d : c.diagnostics()) sev[d.severity().ordinal()]++;
                 for (Row r : c.analysis().rows()) {
-                    if (r instanceof Row.CheckRow cr && cr.passed() != null) {
-                        if (cr.passed()) passed++;
-                        else failed++;
-                    }
+                    if (!(r instanceof Row.CheckRow cr)) continue;
+                    if (cr.passed() == null) notEvaluated++;
+                    else if (cr.passed()) passed++;
+                    else failed++;
                 }
             }
-            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], passed, failed);
+            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], passed, failed, notEvaluated);
         }
 
-        /** 1 when anything needs fixing (an error or a failed check), else 0. */
+        /** 0 only when every check was evaluated and passed and there is no error; else 1. */
         int exitCode() {
-            return errors > 0 || checksFailed > 0 ? Main.FINDINGS : Main.CLEAN;
+            return errors > 0 || checksFailed > 0 || checksNotEvaluated > 0 ? Main.FINDINGS : Main.CLEAN;
         }
 
         long count(Severity s) {

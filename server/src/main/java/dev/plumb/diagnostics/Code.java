@@ -25,6 +25,7 @@ public enum Code {
     MATH_DOMAIN("math.domain", Severity.ERROR),
     MATH_NOT_FINITE("math.not-finite", Severity.ERROR),
     CHECK_FAILED("check.failed", Severity.ERROR),
+    CHECK_NOT_EVALUATED("check.not-evaluated", Severity.ERROR),
     RANGE_OUTSIDE("range.outside", Severity.WARNING),
     RANGE_REGIME("range.regime", Severity.WARNING),
     RANGE_NO_FORMULA("range.no-formula", Severity.ERROR),

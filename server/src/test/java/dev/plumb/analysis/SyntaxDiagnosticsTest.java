@@ -62,6 +62,7 @@ class SyntaxDiagnosticsTest {
             #          ^ syntax.error: expected a value, a name or '(' but found the end of the line
             V = A * L
             check V > 1 m^3
+            #<^^^^^^^^^^^^^^ check.not-evaluated: V has no value
             """);
     }
 
