@@ -110,6 +110,8 @@ class EngineFuzzTest {
         Completion.at(a, a.text().length()).forEach(c -> shown.append(c.label()).append(' ').append(c.detail()).append('\n'));
         String all = shown.toString();
         for (String secret : HostileWorkspace.CONTENTS) {
+            // The document's own words may be quoted back to it; only what it does not hold is a leak.
+            if (a.text().contains(secret)) continue;
             assertTrue(!all.contains(secret), "shows '" + secret + "' from outside or from a refused file:\n" + all);
         }
     }
