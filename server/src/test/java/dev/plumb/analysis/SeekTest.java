@@ -156,9 +156,8 @@ class SeekTest {
 
     @Test
     void aJumpIsNotARoot() {
-        Analysis a = Fixture.analyze("seek a in -1 .. 2 where 1 / a = 0\n");
-        assertEquals(List.of(Code.SOLVE_NOT_CONVERGED), codes(a));
-        assertTrue(a.diagnostics().get(0).message().contains("jump"));
+        Fixture.assertOneFinding("seek a in -1 .. 2 where 1 / a = 0\n", Code.SOLVE_NOT_CONVERGED,
+            Code.SOLVE_NOT_CONVERGED.severity(), "jump");
     }
 
     @Test
@@ -196,18 +195,15 @@ class SeekTest {
         assertEquals(List.of(), codes(a));
         assertEquals(0, Fixture.value(a, "w").value().si(), 0);
         // x = 3 lies in a bracket of ±1e308, far too wide to pin it down: said, not guessed
-        Analysis wide = Fixture.analyze("seek x in -1e308 .. 1e308 where x = 3\n");
-        assertEquals(List.of(Code.SOLVE_NOT_CONVERGED), codes(wide));
-        assertTrue(wide.diagnostics().get(0).message().contains("narrow the bracket"), wide.diagnostics().get(0).message());
-        Analysis empty = Fixture.analyze("seek y in 0 .. 0 where y = 0\n");
-        assertEquals(List.of(Code.SOLVE_NO_ROOT), codes(empty));
-        assertTrue(empty.diagnostics().get(0).message().contains("holds a single value"));
+        Fixture.assertOneFinding("seek x in -1e308 .. 1e308 where x = 3\n", Code.SOLVE_NOT_CONVERGED,
+            Code.SOLVE_NOT_CONVERGED.severity(), "narrow the bracket");
+        Fixture.assertOneFinding("seek y in 0 .. 0 where y = 0\n", Code.SOLVE_NO_ROOT,
+            Code.SOLVE_NO_ROOT.severity(), "holds a single value");
     }
 
     @Test
     void theBracketMustHaveOneDimension() {
-        Analysis a = Fixture.analyze("seek x in 1 m .. 2 s where x = 1.5 m\n");
-        assertEquals(List.of(Code.UNIT_MISMATCH), codes(a));
-        assertTrue(a.diagnostics().get(0).message().contains("the bracket's ends differ"));
+        Fixture.assertOneFinding("seek x in 1 m .. 2 s where x = 1.5 m\n", Code.UNIT_MISMATCH,
+            Code.UNIT_MISMATCH.severity(), "the bracket's ends differ");
     }
 }

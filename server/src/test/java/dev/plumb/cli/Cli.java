@@ -14,4 +14,13 @@ record Cli(int exitCode, String out, String err) {
             new PrintStream(err, true, StandardCharsets.UTF_8));
         return new Cli(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
     }
+
+    /** Writes a calc into a workspace folder (it gets a .git marker), making folders as needed. */
+    static java.nio.file.Path write(java.nio.file.Path dir, String name, String text) throws java.io.IOException {
+        java.nio.file.Files.createDirectories(dir.resolve(".git"));
+        java.nio.file.Path p = dir.resolve(name);
+        java.nio.file.Files.createDirectories(p.getParent());
+        java.nio.file.Files.writeString(p, text);
+        return p;
+    }
 }

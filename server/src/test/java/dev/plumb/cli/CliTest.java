@@ -18,11 +18,7 @@ class CliTest {
     Path dir;
 
     private Path write(String name, String text) throws IOException {
-        Files.createDirectories(dir.resolve(".git"));
-        Path p = dir.resolve(name);
-        Files.createDirectories(p.getParent());
-        Files.writeString(p, text);
-        return p;
+        return Cli.write(dir, name, text);
     }
 
     @Test

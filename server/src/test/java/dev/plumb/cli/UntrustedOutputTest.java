@@ -21,11 +21,7 @@ class UntrustedOutputTest {
     Path dir;
 
     private Path write(String name, String text) throws IOException {
-        Files.createDirectories(dir.resolve(".git"));
-        Path p = dir.resolve(name);
-        Files.createDirectories(p.getParent());
-        Files.writeString(p, text);
-        return p;
+        return Cli.write(dir, name, text);
     }
 
     static void noControls(String output) {
