@@ -23,14 +23,15 @@ final class TextReport {
             : t.checksPassed() + " checks passed, " + style.bad(t.checksFailed() + " failed");
         out.println(style.bold("Checked " + t.files() + " file" + (t.files() == 1 ? "" : "s") + ": ")
             + plural(t.count(Severity.ERROR), "error") + ", " + plural(t.count(Severity.WARNING), "warning") + ", "
-            + plural(t.count(Severity.HINT) + t.count(Severity.INFO), "hint") + "; " + checks + ".");
+            + plural(t.count(Severity.HINT) + t.count(Severity.INFO), "hint")
+            + (t.accepted() == 0 ? "" : ", " + t.accepted() + " accepted") + "; " + checks + ".");
         out.println(Caution.TEXT);
     }
 
     static String line(Batch.Checked c, Diagnostic d, Style style) {
         // The calc's own text (names, notes, paths) is neutralised before colours are added.
         return Printable.line(Location.of(c.analysis(), d)) + ": " + style.severity(d.severity()) + " " + d.code().id() + ": "
-            + Printable.line(d.message());
+            + Printable.line(d.message()) + (d.isAccepted() ? " [accepted: " + Printable.line(d.accepted()) + "]" : "");
     }
 
     private static String plural(long n, String word) {
@@ -38,13 +39,18 @@ final class TextReport {
     }
 
     /** Totals over a run. */
-    record Tally(int files, long errors, long warnings, long hints, long infos, long checksPassed, long checksFailed) {
+    record Tally(int files, long errors, long warnings, long hints, long infos, long accepted, long checksPassed,
+                 long checksFailed) {
         static Tally of(List<Batch.Checked> results) {
             long[] sev = new long[Severity.values().length];
+            long accepted = 0;
             long passed = 0;
             long failed = 0;
             for (Batch.Checked c : results) {
-                for (Diagnostic d : c.diagnostics()) sev[d.severity().ordinal()]++;
+                for (Diagnostic d : c.diagnostics()) {
+                    if (d.isAccepted()) accepted++;
+                    else sev[d.severity().ordinal()]++;
+                }
                 for (Row r : c.analysis().rows()) {
                     if (r instanceof Row.CheckRow cr && cr.passed() != null) {
                         if (cr.passed()) passed++;
@@ -52,12 +58,16 @@ final class TextReport {
                     }
                 }
             }
-            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], passed, failed);
+            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], accepted, passed, failed);
         }
 
-        /** 1 when anything needs fixing (an error or a failed check), else 0. */
-        int exitCode() {
-            return errors > 0 || checksFailed > 0 ? Main.FINDINGS : Main.CLEAN;
+        /**
+         * 1 when anything needs fixing (an error or a failed check, and with {@code failOnWarnings}
+         * an open warning too), else 0. Accepted findings never fail a run.
+         */
+        int exitCode(boolean failOnWarnings) {
+            boolean fails = errors > 0 || checksFailed > 0 || failOnWarnings && warnings > 0;
+            return fails ? Main.FINDINGS : Main.CLEAN;
         }
 
         long count(Severity s) {
