@@ -160,6 +160,8 @@ VALID       : 'valid';
 REGIME      : 'regime';
 ACCURACY    : 'accuracy';
 DOMAIN      : 'domain';
+ACCEPT      : 'accept';
+AT          : 'at';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

@@ -26,6 +26,7 @@ statement
     | check
     | seek
     | oldSolve
+    | accept
     | correlationHead
     | tableHead
     | blockLine
@@ -48,6 +49,13 @@ value       : expr ( WHEN condition ( ( OTHERWISE | ASSIGN ) expr WHEN condition
 condition   : expr ( comparator expr )+;
 check       : CHECK expr ( comparator expr )+ note?;
 seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
+/**
+ * A reviewer accepts one finding: its code, the value whose statement it is on, and why. The
+ * reason is optional here only so that the engine can say clearly that it is missing.
+ */
+accept      : ACCEPT findingCode AT name note?;
+/** A diagnostic code as written, `range.outside`, `math.division-by-zero`. */
+findingCode : name ( DOT name | MINUS name )*;
 /** The solve statement's former spelling: read only to say how it is written now. */
 oldSolve    : FIND name ( WITHIN expr DOTDOT expr | GUESS expr ) SO THAT expr ASSIGN expr tail;
 
@@ -98,5 +106,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN
+    | DOMAIN | ACCEPT | AT
     ;

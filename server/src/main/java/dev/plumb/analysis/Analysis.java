@@ -83,8 +83,14 @@ public record Analysis(Path file, String text, ParsedSource syntax, Map<String, 
         return syntax.lines();
     }
 
+    /** The open findings of a severity: accepted ones are counted by {@link #accepted()}. */
     public long count(Severity severity) {
-        return diagnostics.stream().filter(d -> d.severity() == severity).count();
+        return diagnostics.stream().filter(d -> d.severity() == severity && !d.isAccepted()).count();
+    }
+
+    /** The findings a reviewer has accepted in the calc. */
+    public long accepted() {
+        return diagnostics.stream().filter(Diagnostic::isAccepted).count();
     }
 
     public boolean hasErrors() {

@@ -73,7 +73,8 @@ final class Analyzer {
             if (v != null) scope.put(name, v);
         }
         List<Row> inOrder = rowsInOrder(statements, rows);
-        List<Diagnostic> diagnostics = reporter.all(request -> resolve(request, declared.own(), inOrder));
+        List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
+            reporter.all(request -> resolve(request, declared.own(), inOrder)));
         return new Analysis(file, text, parsed, headers(statements), inOrder, sorted(diagnostics), scope,
             resolved.importedUses(), imports.files(), resolved.references(), reporter.calls());
     }

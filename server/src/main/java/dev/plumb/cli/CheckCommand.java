@@ -18,15 +18,23 @@ import picocli.CommandLine.Spec;
 /** `plumb check PATH…`: every finding with its location, a summary, and an exit code for CI. */
 @Command(name = "check", mixinStandardHelpOptions = true,
     description = "Check calc files and folders (all *.plumb below them). Exit 0: no errors; 1: errors or "
-        + "failed checks; 2: usage or file problems.")
+        + "failed checks (or open warnings, with --fail-on warning); 2: usage or file problems.")
 final class CheckCommand implements Callable<Integer> {
     enum Format { text, json, sarif }
+
+    /** The least severity of an open finding that fails the run. */
+    enum FailOn { error, warning }
 
     @Parameters(arity = "1..*", paramLabel = "PATH", description = "files or folders to check")
     List<Path> paths;
 
     @Option(names = "--format", defaultValue = "text", description = "text, json or sarif (SARIF 2.1.0, for code review hosts; default: ${DEFAULT-VALUE})")
     Format format;
+
+    @Option(names = "--fail-on", defaultValue = "error", paramLabel = "SEVERITY",
+        description = "error or warning: with warning, an open (not accepted) warning also makes the exit code 1, "
+            + "for CI that demands none (default: ${DEFAULT-VALUE})")
+    FailOn failOn;
 
     @Mixin
     CommonOptions common;
@@ -65,6 +73,6 @@ final class CheckCommand implements Callable<Integer> {
             default -> TextReport.write(results, out, style);
         }
         out.flush();
-        return TextReport.Tally.of(results).exitCode();
+        return TextReport.Tally.of(results).exitCode(failOn == FailOn.warning);
     }
 }

@@ -33,6 +33,7 @@ final class JsonReport {
         summary.addProperty("errors", t.count(Severity.ERROR));
         summary.addProperty("warnings", t.count(Severity.WARNING));
         summary.addProperty("hints", t.count(Severity.HINT) + t.count(Severity.INFO));
+        summary.addProperty("accepted", t.accepted());
         summary.addProperty("checksPassed", t.checksPassed());
         summary.addProperty("checksFailed", t.checksFailed());
         summary.addProperty("checksNotEvaluated", t.checksNotEvaluated());
@@ -52,6 +53,7 @@ final class JsonReport {
         o.addProperty("endLine", a.lines().line(end));
         o.addProperty("endColumn", a.lines().column(end));
         o.addProperty("message", d.message());
+        if (d.isAccepted()) o.addProperty("accepted", d.accepted());
         return o;
     }
 }

@@ -102,6 +102,16 @@ final class SarifReport {
             related.add(l);
         }
         if (!related.isEmpty()) r.add("relatedLocations", related);
+        if (d.isAccepted()) {
+            // Accepted in the calc itself: SARIF 2.1.0's own suppression, with the reviewer's reason.
+            JsonObject suppression = new JsonObject();
+            suppression.addProperty("kind", "inSource");
+            suppression.addProperty("status", "accepted");
+            suppression.addProperty("justification", d.accepted());
+            JsonArray suppressions = new JsonArray();
+            suppressions.add(suppression);
+            r.add("suppressions", suppressions);
+        }
         return r;
     }
 

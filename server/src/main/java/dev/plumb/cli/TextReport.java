@@ -24,14 +24,15 @@ final class TextReport {
                 + (t.checksNotEvaluated() == 0 ? "" : ", " + style.bad(t.checksNotEvaluated() + " not evaluated"));
         out.println(style.bold("Checked " + t.files() + " file" + (t.files() == 1 ? "" : "s") + ": ")
             + plural(t.count(Severity.ERROR), "error") + ", " + plural(t.count(Severity.WARNING), "warning") + ", "
-            + plural(t.count(Severity.HINT) + t.count(Severity.INFO), "hint") + "; " + checks + ".");
+            + plural(t.count(Severity.HINT) + t.count(Severity.INFO), "hint")
+            + (t.accepted() == 0 ? "" : ", " + t.accepted() + " accepted") + "; " + checks + ".");
         out.println(Caution.TEXT);
     }
 
     static String line(Batch.Checked c, Diagnostic d, Style style) {
         // The calc's own text (names, notes, paths) is neutralised before colours are added.
         return Printable.line(Location.of(c.analysis(), d)) + ": " + style.severity(d.severity()) + " " + d.code().id() + ": "
-            + Printable.line(d.message());
+            + Printable.line(d.message()) + (d.isAccepted() ? " [accepted: " + Printable.line(d.accepted()) + "]" : "");
     }
 
     private static String plural(long n, String word) {
@@ -39,15 +40,19 @@ final class TextReport {
     }
 
     /** Totals over a run. */
-    record Tally(int files, long errors, long warnings, long hints, long infos, long checksPassed, long checksFailed,
-                 long checksNotEvaluated) {
+    record Tally(int files, long errors, long warnings, long hints, long infos, long accepted, long checksPassed,
+                 long checksFailed, long checksNotEvaluated) {
         static Tally of(List<Batch.Checked> results) {
             long[] sev = new long[Severity.values().length];
+            long accepted = 0;
             long passed = 0;
             long failed = 0;
             long notEvaluated = 0;
             for (Batch.Checked c : results) {
-                for (Diagnostic d : c.diagnostics()) sev[d.severity().ordinal()]++;
+                for (Diagnostic d : c.diagnostics()) {
+                    if (d.isAccepted()) accepted++;
+                    else sev[d.severity().ordinal()]++;
+                }
                 for (Row r : c.analysis().rows()) {
                     if (!(r instanceof Row.CheckRow cr)) continue;
                     if (cr.passed() == null) notEvaluated++;
@@ -55,12 +60,16 @@ final class TextReport {
                     else failed++;
                 }
             }
-            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], passed, failed, notEvaluated);
+            return new Tally(results.size(), sev[0], sev[1], sev[3], sev[2], accepted, passed, failed, notEvaluated);
         }
 
-        /** 0 only when every check was evaluated and passed and there is no error; else 1. */
-        int exitCode() {
-            return errors > 0 || checksFailed > 0 || checksNotEvaluated > 0 ? Main.FINDINGS : Main.CLEAN;
+        /**
+         * 1 when anything needs fixing (an error, a failed check, a check not evaluated, and with
+         * {@code failOnWarnings} an open warning too), else 0. Accepted findings never fail a run.
+         */
+        int exitCode(boolean failOnWarnings) {
+            boolean fails = errors > 0 || checksFailed > 0 || checksNotEvaluated > 0 || failOnWarnings && warnings > 0;
+            return fails ? Main.FINDINGS : Main.CLEAN;
         }
 
         long count(Severity s) {

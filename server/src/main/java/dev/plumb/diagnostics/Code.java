@@ -43,7 +43,9 @@ public enum Code {
     USE_OUTSIDE_WORKSPACE("use.outside-workspace", Severity.ERROR),
     USE_HAS_ERRORS("use.has-errors", Severity.ERROR),
     LIMIT_BUDGET("limit.budget", Severity.ERROR),
-    LIMIT_MEMORY("limit.memory", Severity.ERROR);
+    LIMIT_MEMORY("limit.memory", Severity.ERROR),
+    ACCEPT_INVALID("accept.invalid", Severity.ERROR),
+    ACCEPT_STALE("accept.stale", Severity.WARNING);
 
     private final String id;
     private final Severity severity;

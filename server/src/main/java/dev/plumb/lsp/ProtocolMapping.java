@@ -31,7 +31,8 @@ final class ProtocolMapping {
     static List<Diagnostic> diagnostics(Analysis a, Positions.Encoding enc, ServerSettings settings) {
         List<Diagnostic> out = new ArrayList<>();
         for (dev.plumb.diagnostics.Diagnostic d : a.diagnostics()) {
-            Diagnostic p = new Diagnostic(Positions.range(a.text(), d.span().start(), d.span().end(), enc), dev.plumb.diagnostics.Printable.text(d.message()),
+            Diagnostic p = new Diagnostic(Positions.range(a.text(), d.span().start(), d.span().end(), enc), dev.plumb.diagnostics.Printable.text(
+                d.isAccepted() ? d.message() + " [accepted: " + d.accepted() + "]" : d.message()),
                 severity(d.severity()), SOURCE, d.code().id());
             List<DiagnosticRelatedInformation> related = new ArrayList<>();
             for (Related r : d.related()) {

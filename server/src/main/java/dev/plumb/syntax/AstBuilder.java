@@ -181,6 +181,24 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     /** The former `find … within … so that …`: an error that shows the statement in today's words. */
     @Override
+    public Object visitAccept(PlumbParser.AcceptContext ctx) {
+        PlumbParser.FindingCodeContext c = ctx.findingCode();
+        Span code = span(c);
+        // As written, blanks included: `range . outside` is no code.
+        String written = c.getStart().getInputStream()
+            .getText(Interval.of(c.getStart().getStartIndex(), c.getStop().getStopIndex()));
+        String reason = note(ctx.note());
+        if (reason == null || reason.isBlank()) {
+            Span where = ctx.note() == null ? new Span(span(ctx).end(), span(ctx).end()) : span(ctx.note());
+            errors.add(Diagnostic.of(Code.SYNTAX_ERROR, where, "an acceptance needs its reason, in quotes: write why this "
+                + "finding is acceptable, e.g. `accept " + written + " at " + ctx.name().getText()
+                + " \"validated against test report TR-118\"`"), ctx.getStart().getStartIndex());
+            return new Statement.Broken(span(ctx), null);
+        }
+        return new Statement.Accept(span(ctx), written, code, ident(ctx.name()), reason);
+    }
+
+    @Override
     public Object visitOldSolve(PlumbParser.OldSolveContext ctx) {
         Respelling r = new Respelling(ctx);
         r.replace(ctx.FIND().getSymbol(), "seek");

@@ -124,6 +124,9 @@ final class Shift {
                 ident(t.family()), ident(t.basis()), bounds(t.valid()), expr(t.accuracy()), ident(t.interpolate()),
                 columns, rows, ident(t.flow()), bounds(t.domain()));
         }
+        if (s instanceof Statement.Accept a) {
+            return new Statement.Accept(span(a.span()), a.code(), span(a.codeSpan()), ident(a.target()), a.reason());
+        }
         Statement.Broken b = (Statement.Broken) s;
         return new Statement.Broken(span(b.span()), ident(b.name()));
     }

@@ -116,6 +116,13 @@ public sealed interface Statement {
     }
 
     /**
+     * `accept CODE at NAME "reason"`: a reviewer has accepted the finding {@code code} (as written)
+     * on the statement that defines {@code target}, for the stated reason.
+     */
+    record Accept(Span span, String code, Span codeSpan, Ident target, String reason) implements Statement {
+    }
+
+    /**
      * A statement with a syntax error. Its name, when it had one, still counts as defined so that
      * later uses do not add "unknown name" noise to the syntax error already reported.
      */

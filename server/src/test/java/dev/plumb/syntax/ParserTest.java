@@ -128,6 +128,19 @@ class ParserTest {
     }
 
     @Test
+    void acceptStatementKeepsTheCodeAsWrittenTheValueAndTheReason() {
+        String text = "accept math.division-by-zero at Cd_1 \"validated, report TR-118\"";
+        var a = assertInstanceOf(Statement.Accept.class, one(text));
+        assertEquals("math.division-by-zero", a.code());
+        assertEquals("math.division-by-zero", slice(text, a.codeSpan()));
+        assertEquals("Cd_1", a.target().text());
+        assertEquals("validated, report TR-118", a.reason());
+        assertEquals(text, slice(text, a.span()));
+        // Blanks inside a code are kept, so that `range . outside` is no code.
+        assertEquals("range . outside", ((Statement.Accept) one("accept range . outside at x \"r\"")).code());
+    }
+
+    @Test
     void useStatement() {
         var u = assertInstanceOf(Statement.Use.class, one("use \"site/air.plumb\""));
         assertEquals("site/air.plumb", u.path());
