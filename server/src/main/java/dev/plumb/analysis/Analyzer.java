@@ -60,10 +60,10 @@ final class Analyzer {
         Budget budget = Budget.standard(superseded);
         EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, settings, units, budget)
             .run(declared.duplicates());
-        Map<Statement, Row> rows = new java.util.IdentityHashMap<>(evaluated.rows());
+        Map<Statement, Row> checkRows = new java.util.IdentityHashMap<>();
         CheckRunner checks = new CheckRunner(scope, evaluated.values(), reporter, text, settings, units, budget);
         for (Statement s : statements) {
-            if (s instanceof Statement.Check c) rows.put(c, checks.withinBudget(c));
+            if (s instanceof Statement.Check c) checkRows.put(c, checks.withinBudget(c));
         }
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
 
@@ -72,7 +72,7 @@ final class Analyzer {
             Binding.ValueBinding v = evaluated.values().get(name);
             if (v != null) scope.put(name, v);
         }
-        List<Row> inOrder = rowsInOrder(statements, rows);
+        List<Row> inOrder = rowsInOrder(statements, evaluated.rows(), checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));
         return new Analysis(file, text, parsed, headers(statements), inOrder, sorted(diagnostics), scope,
@@ -116,12 +116,16 @@ final class Analyzer {
         return headers;
     }
 
-    private static List<Row> rowsInOrder(List<Statement> statements, Map<Statement, Row> rows) {
-        List<Row> out = new ArrayList<>();
+    private static List<Row> rowsInOrder(List<Statement> statements, Map<Statement, Row> rows, Map<Statement, Row> checks) {
+        List<Row> out = new ArrayList<>(statements.size());
         for (Statement s : statements) {
             if (s instanceof Statement.Section sec) out.add(new Row.SectionRow(sec.span(), sec.title()));
             else if (s instanceof Statement.Narrative n) out.add(new Row.NarrativeRow(n.span(), n.text()));
-            else if (rows.containsKey(s)) out.add(rows.get(s));
+            else if (s instanceof Statement.Check) out.add(checks.get(s));
+            else {
+                Row r = rows.get(s);
+                if (r != null) out.add(r);
+            }
         }
         return out;
     }

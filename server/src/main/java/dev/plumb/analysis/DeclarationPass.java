@@ -29,7 +29,7 @@ final class DeclarationPass {
      */
     record Declarations(Map<String, Statement> own, Set<Statement> duplicates) {
         Declarations {
-            own = Collections.unmodifiableMap(new LinkedHashMap<>(own));
+            own = Collections.unmodifiableMap(own);
             Set<Statement> byIdentity = Collections.newSetFromMap(new IdentityHashMap<>());
             byIdentity.addAll(duplicates);
             duplicates = Collections.unmodifiableSet(byIdentity);

@@ -72,8 +72,9 @@ final class Environment {
             return new Environment(owner, below, java.util.Collections.unmodifiableMap(values));
         }
 
+        /** The values built, read-only; the builder is not used after this. */
         Environment build() {
-            return new Environment(owner, below, Map.copyOf(values));
+            return new Environment(owner, below, java.util.Collections.unmodifiableMap(values));
         }
     }
 }

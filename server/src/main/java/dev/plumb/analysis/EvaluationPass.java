@@ -18,8 +18,7 @@ final class EvaluationPass {
     /** The document's own values, and the row of each statement that defines a name (by identity). */
     record Evaluated(Environment values, Map<Statement, Row> rows) {
         Evaluated {
-            IdentityHashMap<Statement, Row> copy = new IdentityHashMap<>(rows);
-            rows = java.util.Collections.unmodifiableMap(copy);
+            rows = java.util.Collections.unmodifiableMap(rows);
         }
     }
 

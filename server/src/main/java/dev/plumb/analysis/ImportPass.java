@@ -65,8 +65,14 @@ final class ImportPass {
         try {
             target = folder.resolve(u.path()).normalize();
         } catch (java.nio.file.InvalidPathException e) {
-            reporter.report(Code.USE_NOT_FOUND, u.pathSpan(), "cannot use \"" + u.path().replace("\0", "\\0")
-                + "\": it is not a file path here (" + e.getReason() + "): write the path of a .plumb file");
+            // Under a locale that is not UTF-8 (LANG=C), the Java runtime cannot name files outside
+            // ASCII at all: say so, rather than blame the path.
+            boolean locale = !u.path().chars().allMatch(c -> c < 128)
+                && !"UTF-8".equalsIgnoreCase(System.getProperty("sun.jnu.encoding", "UTF-8"));
+            reporter.report(Code.USE_NOT_FOUND, u.pathSpan(), "cannot use \"" + u.path().replace("\0", "\\0") + "\": " + (locale
+                ? "this Java runs under a locale that cannot name files outside ASCII; start Plumb with the `plumb` "
+                    + "launcher, or set LC_ALL=C.UTF-8"
+                : "it is not a file path here (" + e.getReason() + "): write the path of a .plumb file"));
             return;
         }
         Path root = workspace.sources().workspaceRoot(file);

@@ -22,9 +22,10 @@ record Plan(Map<String, Statement> own, List<String> order, Set<String> inCycle,
             Map<String, List<Statement.Definition>> seekDependents, Definitions definitions) {
 
     Plan {
-        own = Collections.unmodifiableMap(new LinkedHashMap<>(own));
-        order = List.copyOf(order);
-        inCycle = Set.copyOf(inCycle);
+        // Read-only views: the passes that built these hand them over and keep no reference.
+        own = Collections.unmodifiableMap(own);
+        order = Collections.unmodifiableList(order);
+        inCycle = Collections.unmodifiableSet(inCycle);
         Map<String, List<Statement.Definition>> copy = new LinkedHashMap<>();
         seekDependents.forEach((k, v) -> copy.put(k, List.copyOf(v)));
         seekDependents = Collections.unmodifiableMap(copy);

@@ -22,8 +22,9 @@ final class Planner {
     }
 
     Plan run(Map<String, Statement> own, Map<String, Set<String>> graph, Definitions definitions) {
-        Map<String, Set<String>> uses = new LinkedHashMap<>();
-        graph.forEach((k, v) -> uses.put(k, new LinkedHashSet<>(v)));
+        // SeekDependents replaces the entries of solved names with sets of its own; the others are
+        // only read, so a shallow copy of the graph is enough.
+        Map<String, Set<String>> uses = new LinkedHashMap<>(graph);
         Map<String, Set<String>> solvedWith = SeekDependents.adjust(own, uses);
         DependencyOrder.Result order = DependencyOrder.of(uses);
         Map<String, List<Statement.Definition>> dependents = new LinkedHashMap<>();

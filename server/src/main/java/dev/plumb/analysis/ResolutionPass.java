@@ -33,15 +33,14 @@ final class ResolutionPass {
      */
     record Resolution(Map<String, Set<String>> uses, List<Analysis.Reference> references, Set<String> used,
                       Map<Path, Set<String>> importedUses) {
+        /** Read-only views of what the pass built and handed over (it keeps no reference): no copies. */
         Resolution {
-            Map<String, Set<String>> graph = new LinkedHashMap<>();
-            uses.forEach((k, v) -> graph.put(k, Collections.unmodifiableSet(new LinkedHashSet<>(v))));
-            uses = Collections.unmodifiableMap(graph);
-            references = List.copyOf(references);
-            used = Set.copyOf(used);
-            Map<Path, Set<String>> imported = new HashMap<>();
-            importedUses.forEach((k, v) -> imported.put(k, Set.copyOf(v)));
-            importedUses = Map.copyOf(imported);
+            uses.replaceAll((k, v) -> Collections.unmodifiableSet(v));
+            uses = Collections.unmodifiableMap(uses);
+            references = Collections.unmodifiableList(references);
+            used = Collections.unmodifiableSet(used);
+            importedUses.replaceAll((k, v) -> Collections.unmodifiableSet(v));
+            importedUses = Collections.unmodifiableMap(importedUses);
         }
     }
 

@@ -44,6 +44,28 @@ class LocaleTest {
     }
 
     @Test
+    @Timeout(value = 120, unit = TimeUnit.SECONDS)
+    void withoutTheLauncherAFileNameOutsideAsciiGetsAMessageThatSaysWhy() throws Exception {
+        // Under LANG=C the Java runtime itself cannot name "ρ.plumb"; the message says so and how to fix it.
+        Files.createDirectories(dir.resolve(".git"));
+        Files.writeString(dir.resolve("ρ.plumb"), "rho = 1.2 kg/m^3\n", StandardCharsets.UTF_8);
+        Path calc = dir.resolve("main.plumb");
+        Files.writeString(calc, "use \"ρ.plumb\"\nx = rho * 2\n", StandardCharsets.UTF_8);
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        ProcessBuilder pb = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), "dev.plumb.app.Plumb",
+            "check", calc.toString());
+        pb.environment().keySet().removeIf(k -> k.startsWith("LC_") || k.equals("LANG") || k.equals("JAVA_TOOL_OPTIONS"));
+        pb.environment().put("LANG", "C");
+        pb.environment().put("LC_ALL", "C");
+        pb.redirectErrorStream(true);
+        Process p = pb.start();
+        String text = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        // Either the runtime can name the file (then the calc is clean), or the message says why not.
+        assertTrue(p.exitValue() == 0 || text.contains("LC_ALL=C.UTF-8"), text);
+    }
+
+    @Test
     void theLauncherRunsJavaUnderAUtf8LocaleAndABoundedHeap() throws IOException {
         // The launcher cannot run in a test (it builds the jar first); its promises are read from it.
         List<String> script = Files.readAllLines(dev.plumb.RepoRoot.get().resolve("plumb"));
