@@ -18,18 +18,21 @@ final class Arithmetic {
     private final BasisRules basis;
     /** How an operand is named in a message ("d = 60 mm"). */
     private final BiFunction<Expr, Value, String> operand;
+    private final HandConversions conversions;
 
     Arithmetic(Reporter reporter, String text, BasisRules basis, BiFunction<Expr, Value, String> operand) {
         this.reporter = reporter;
         this.text = text;
         this.basis = basis;
         this.operand = operand;
+        this.conversions = new HandConversions(reporter, text, operand);
     }
 
     Value apply(Expr.Binary b, Value l, Value r) {
         return switch (b.op()) {
             case ADD, SUBTRACT -> addOrSubtract(b, l, r);
             case MULTIPLY -> {
+                conversions.check(b, l, r);
                 Dimension d = l.dimension().times(r.dimension());
                 yield finite(b, l, r, Value.of(l.si() * r.si(), d).noted(basis.multiply(b, l, r, d))
                     .asAngle(Angles.scaled(l, r) || Angles.scaled(r, l)));
@@ -75,6 +78,7 @@ final class Arithmetic {
                 "division by zero: the divisor " + Shown.source(text, b.right().span()) + " is 0");
             return Value.UNKNOWN;
         }
+        conversions.check(b, l, r);
         Dimension d = l.dimension().divide(r.dimension());
         return finite(b, l, r, Value.of(l.si() / r.si(), d).noted(basis.divide(l, r, d)).asAngle(Angles.scaled(l, r)));
     }

@@ -106,11 +106,17 @@ final class Definitions {
             Unit u = evaluator.resolveUnit(d.displayUnit(), false);
             if (u == null || !v.known()) return fallback;
             if (!u.dimension().equals(v.dimension())) {
+                // A dimension no common quantity has is more often a slip in the formula than in the unit.
+                boolean unusual = !v.dimensionless() && v.dimension().name() == null;
                 String fix = v.dimensionless()
                     ? ": a plain number has no unit to show; drop `in " + d.displayUnit().text() + "`, or give a number"
                         + " in the expression its unit (write `5 mm`, not `5 in mm`)"
+                    : unusual
+                    ? ". No common quantity has that dimension, so the formula is the likely mistake, not the unit: "
+                        + "check the operands of " + Shown.source(text, d.expr().span())
+                        + " (a factor too many or too few, a wrong power, a unit on the wrong number)"
                     : ": use a unit of that dimension, such as " + fallback.symbol();
-                List<Fix> fixes = v.dimensionless() ? List.of()
+                List<Fix> fixes = v.dimensionless() || unusual ? List.of()
                     : List.of(new Fix("Show it in " + fallback.symbol(), d.displayUnit().span(), fallback.symbol()));
                 reporter.report(Code.UNIT_MISMATCH, d.displayUnit().span(), "`in " + d.displayUnit().text() + "` shows "
                     + u.dimension().describe() + ", but " + d.name().text() + " is " + v.dimension().describe() + fix,

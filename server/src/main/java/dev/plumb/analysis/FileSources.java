@@ -59,11 +59,21 @@ public final class FileSources implements Sources {
 
     @Override
     public Path workspaceRoot(Path file) {
-        Path folder = file.toAbsolutePath().normalize().getParent();
-        for (Path p = folder; p != null; p = p.getParent()) {
+        Path marked = markedRoot(file);
+        return marked != null ? marked : file.toAbsolutePath().normalize().getParent();
+    }
+
+    @Override
+    public boolean workspaceMarked(Path file) {
+        return markedRoot(file) != null;
+    }
+
+    /** The nearest folder at or above the file's that holds .git or plumb.toml, or null. */
+    private static Path markedRoot(Path file) {
+        for (Path p = file.toAbsolutePath().normalize().getParent(); p != null; p = p.getParent()) {
             if (Files.exists(p.resolve(".git")) || Files.exists(p.resolve("plumb.toml"))) return p;
         }
-        return folder;
+        return null;
     }
 
 }

@@ -77,8 +77,14 @@ final class ImportPass {
         }
         Path root = workspace.sources().workspaceRoot(file);
         if (!target.startsWith(root)) {
-            reporter.report(Code.USE_OUTSIDE_WORKSPACE, u.pathSpan(), "\"" + u.path() + "\" leads outside the workspace ("
-                + root + ", the nearest folder holding .git or plumb.toml): copy the file into the workspace");
+            String why = workspace.sources().workspaceMarked(file)
+                ? "\"" + u.path() + "\" leads outside the workspace (" + root + ", the nearest folder holding .git or "
+                    + "plumb.toml): copy the file into the workspace"
+                : "\"" + u.path() + "\" leads outside the workspace: no folder above this file holds .git or plumb.toml, "
+                    + "so the workspace is only the file's own folder (" + root + "). To let `use` reach further, create an "
+                    + "empty file named plumb.toml in the folder that holds all the calcs of the project (it marks the "
+                    + "workspace root), or copy the file into this folder";
+            reporter.report(Code.USE_OUTSIDE_WORKSPACE, u.pathSpan(), why);
             return;
         }
         Path self = file.toAbsolutePath().normalize();

@@ -98,7 +98,7 @@ final class SeekRunner {
         }
         switch (result.status()) {
             case NO_ROOT -> {
-                reportNoRoot(f, result, dim, unit, sides[0].dimension());
+                reportNoRoot(f, result, dim, unit, sides[0].dimension(), dependents);
                 return failed(name);
             }
             case TOO_WIDE -> {
@@ -195,7 +195,8 @@ final class SeekRunner {
             + "` cannot be evaluated at " + where + ": " + why + "; fix that, and the solve runs");
     }
 
-    private void reportNoRoot(Statement.Seek f, RootFinder.Result r, Dimension dim, Unit unit, Dimension residualDim) {
+    private void reportNoRoot(Statement.Seek f, RootFinder.Result r, Dimension dim, Unit unit, Dimension residualDim,
+                              List<Statement.Definition> dependents) {
         Unit ru = DisplayUnits.defaultFor(residualDim);
         String ends = "LHS − RHS is " + showResidual(r.fLow(), residualDim, ru) + " at " + show(r.low(), dim, unit) + " and "
             + showResidual(r.fHigh(), residualDim, ru) + " at " + show(r.high(), dim, unit);
@@ -204,8 +205,38 @@ final class SeekRunner {
                 + show(r.wider()[1], dim, unit) + ": widen the bracket to include it"
             : "; no sign change either in a range a thousand times wider: check the equation";
         String where = f.start() != null ? " searching outward from the start value" : " in the bracket";
-        reporter.report(Code.SOLVE_NO_ROOT, f.name().span(), "no root of " + f.name().text() + where
+        List<String> ranges = rangeFindings(f, dim, unit, dependents, r.low(), r.high());
+        String name = f.name().text();
+        if (!ranges.isEmpty()) {
+            reporter.report(Code.SOLVE_NO_ROOT, f.name().span(), "no root of " + name + where + ", and the equation "
+                + "uses a correlation outside its valid range there, which is usually why: "
+                + String.join("; ", ranges.subList(0, Math.min(3, ranges.size())))
+                + (ranges.size() > 3 ? " (and " + (ranges.size() - 3) + " more)" : "")
+                + ". Check that the correlation suits this case, or choose one valid over the bracket, before widening it. "
+                + "The two sides do not cross (" + ends + ")" + fix);
+            return;
+        }
+        reporter.report(Code.SOLVE_NO_ROOT, f.name().span(), "no root of " + name + where
             + ": the two sides do not cross (" + ends + ")" + fix);
+    }
+
+    /**
+     * The range findings (range.outside, range.regime) of the equation and its dependents at the
+     * bracket's two ends, each introduced by where it was found; evaluated quietly, collected.
+     */
+    private List<String> rangeFindings(Statement.Seek f, Dimension dim, Unit unit, List<Statement.Definition> dependents,
+                                       double low, double high) {
+        List<String> out = new ArrayList<>();
+        for (double x : new double[] {low, high}) {
+            Reporter collected = new Reporter();
+            evaluateAt(f.name().text(), Value.of(x, dim), dependents, collected, f);
+            for (dev.plumb.diagnostics.Diagnostic d : collected.all()) {
+                if (d.code() == Code.RANGE_OUTSIDE || d.code() == Code.RANGE_REGIME) {
+                    out.add("at " + f.name().text() + " = " + show(x, dim, unit) + ", " + d.message());
+                }
+            }
+        }
+        return out;
     }
 
     private void reportMultiple(Statement.Seek f, RootFinder.Result r, Dimension dim, Unit unit) {

@@ -22,6 +22,14 @@ public interface Sources {
     /** The workspace root of a file: `use` may not reach outside it. */
     Path workspaceRoot(Path file);
 
+    /**
+     * True when the file's workspace root is a folder marked by `.git` or `plumb.toml`; false
+     * when no folder above the file is, and its root is only its own folder.
+     */
+    default boolean workspaceMarked(Path file) {
+        return true;
+    }
+
     sealed interface Loaded {
     }
 

@@ -37,4 +37,9 @@ final class OverlaySources implements Sources {
     public Path workspaceRoot(Path file) {
         return disk.workspaceRoot(file);
     }
+
+    @Override
+    public boolean workspaceMarked(Path file) {
+        return disk.workspaceMarked(file);
+    }
 }

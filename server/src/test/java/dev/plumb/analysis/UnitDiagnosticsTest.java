@@ -3,6 +3,7 @@ package dev.plumb.analysis;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /** unit.*: unknown units and dimension errors, each with a message that says what to do. */
@@ -30,6 +31,18 @@ class UnitDiagnosticsTest {
     @Test
     void mismatchesNameBothDimensionsInWordsAndSi() {
         Fixture.checkResource("unit.mismatch.plumb");
+    }
+
+    @Test
+    void anInUnitForAValueOfAnUnusualDimensionOffersNoUnit() {
+        // by hand: N·m·s = kg·m/s²·m·s = kg·m²/s, which no named quantity has
+        Analysis a = Fixture.analyze("input F = 2 N\ninput L = 1 m\ninput t = 3 s\nQ = F * L * t   in N*m\n");
+        assertEquals(1, a.diagnostics().size(), a.diagnostics().toString());
+        assertTrue(a.diagnostics().get(0).message().contains("the formula is the likely mistake"));
+        assertEquals(List.of(), a.diagnostics().get(0).fixes());
+        // A named dimension still gets its unit as the fix: F / L is a force per length, N/m.
+        Analysis named = Fixture.analyze("input F = 2 N\ninput L = 1 m\nq = F / L   in N\n");
+        assertEquals("N/m", named.diagnostics().get(0).fixes().get(0).text());
     }
 
     @Test

@@ -158,6 +158,25 @@ class UseTest {
     }
 
     @Test
+    void withNoMarkerAnywhereTheMessageSaysHowToMakeAWorkspace() throws IOException {
+        Path bare = Files.createDirectories(dir.resolve("bare/calc"));
+        for (Path p = bare; p != null; p = p.getParent()) {
+            org.junit.jupiter.api.Assumptions.assumeFalse(Files.exists(p.resolve(".git")) || Files.exists(p.resolve("plumb.toml")),
+                "a folder above the temporary folder marks a workspace: " + p);
+        }
+        Files.writeString(dir.resolve("bare/shared.plumb"), "k = 2\n");
+        Path main = bare.resolve("main.plumb");
+        Files.writeString(main, """
+            use "../shared.plumb"
+            #   ^^^^^^^^^^^^^^^^^ use.outside-workspace: "../shared.plumb" leads outside the workspace: no folder above this file holds .git or plumb.toml, so the workspace is only the file's own folder
+            """, StandardCharsets.UTF_8);
+        Analysis a = workspace().analyze(main);
+        Fixture.check(a);
+        String message = a.diagnostics().get(0).message();
+        assertTrue(message.contains("create an empty file named plumb.toml"), message);
+    }
+
+    @Test
     void aGitFolderAlsoMarksTheWorkspaceRoot() throws IOException {
         Path inner = Files.createDirectories(root.resolve("project"));
         Files.createDirectories(inner.resolve(".git"));
