@@ -35,6 +35,8 @@ final class Budget {
     private final long deadline;
     private final BooleanSupplier superseded;
     private long steps;
+    /** Piecewise formulas found to agree in dimension in this run, by their pieces' identity. */
+    private final java.util.Map<Object, java.util.Set<java.util.List<Object>>> agreed = new java.util.IdentityHashMap<>();
 
     Budget(long stepsPerStatement, long seconds, BooleanSupplier superseded) {
         this.stepsPerStatement = stepsPerStatement;
@@ -50,6 +52,23 @@ final class Budget {
     /** A budget of its own for a small evaluation outside any run (a block's accuracy line). */
     static Budget standalone() {
         return standard(() -> false);
+    }
+
+    /** Whether these pieces were found to agree in dimension, with this piece applying and these parameters. */
+    boolean agreed(Object pieces, int applying, java.util.List<Object> dimensions) {
+        java.util.Set<java.util.List<Object>> seen = agreed.get(pieces);
+        return seen != null && seen.contains(key(applying, dimensions));
+    }
+
+    void rememberAgreed(Object pieces, int applying, java.util.List<Object> dimensions) {
+        agreed.computeIfAbsent(pieces, p -> new java.util.HashSet<>()).add(key(applying, dimensions));
+    }
+
+    private static java.util.List<Object> key(int applying, java.util.List<Object> dimensions) {
+        java.util.List<Object> key = new java.util.ArrayList<>(dimensions.size() + 1);
+        key.add(applying);
+        key.addAll(dimensions);
+        return key;
     }
 
     /** One step of evaluation. */

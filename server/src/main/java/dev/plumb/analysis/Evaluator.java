@@ -98,6 +98,17 @@ final class Evaluator {
         return budget;
     }
 
+    /** The dimensions of the parameters bound here (a function's or correlation's), for memos keyed by them. */
+    java.util.List<Object> parameterDimensions() {
+        if (locals.isEmpty()) return java.util.List.of();
+        java.util.List<Object> out = new java.util.ArrayList<>(locals.size() * 2);
+        for (var e : new java.util.TreeMap<>(locals).entrySet()) {
+            out.add(e.getKey());
+            out.add(e.getValue().dimension());
+        }
+        return out;
+    }
+
     /** The environment to evaluate a body defined in {@code where} with: ours when it is our scope. */
     Environment environmentOf(Scope where) {
         return env.of(where) ? env : Environment.NONE;

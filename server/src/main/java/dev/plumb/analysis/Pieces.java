@@ -40,7 +40,7 @@ final class Pieces {
             if (!holds) continue;
             Value v = eval.eval(piece.expr());
             // A formula whose pieces disagree is wrong whichever applies: its value is unknown.
-            if (v.known() && pieces.size() > 1 && !sameDimension(pieces, i, v)) return new Chosen(Value.UNKNOWN, piece);
+            if (v.known() && pieces.size() > 1 && !agree(pieces, i, v)) return new Chosen(Value.UNKNOWN, piece);
             return new Chosen(v, piece);
         }
         noneApplies.accept(String.join("; ", falseConditions));
@@ -81,6 +81,19 @@ final class Pieces {
         }
         String written = Shown.source(text, condition.span());
         return values.isEmpty() ? written + " is false" : written + " is false (" + String.join(", ", values) + ")";
+    }
+
+    /**
+     * Whether the pieces agree in dimension. Within one run their dimensions depend only on the
+     * parameters', so an agreement found once is remembered (a correlation called a thousand
+     * times is judged once); a disagreement is judged, and reported, at every call.
+     */
+    private boolean agree(List<Statement.Piece> pieces, int applying, Value v) {
+        List<Object> key = eval.parameterDimensions();
+        if (eval.budget().agreed(pieces, applying, key)) return true;
+        boolean same = sameDimension(pieces, applying, v);
+        if (same) eval.budget().rememberAgreed(pieces, applying, key);
+        return same;
     }
 
     /** Judges the other pieces' dimensions against the one that applies, quietly evaluated. */
