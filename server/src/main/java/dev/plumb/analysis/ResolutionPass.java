@@ -84,7 +84,7 @@ final class ResolutionPass {
                     }
                     Binding b = scope.lookup(n);
                     if (b == null) {
-                        unknownName(n, span);
+                        unknownName(n, span, nameOf(s));
                     } else if (b.file() != null) {
                         importedUses.computeIfAbsent(b.file(), k -> new HashSet<>()).add(n);
                     }
@@ -132,9 +132,11 @@ final class ResolutionPass {
         return i == null ? "" : i.text();
     }
 
-    private void unknownName(String n, Span span) {
+    /** @param self the name the statement defines: offering it would make the definition use itself */
+    private void unknownName(String n, Span span, String self) {
         Set<String> known = new HashSet<>(scope.visibleNames());
         known.addAll(own.keySet());
+        known.remove(self);
         List<String> close = Suggestions.closest(n, known, 3);
         String message = "unknown name '" + n + "'" + Suggestions.didYouMean(close);
         if (units.resolve(n) instanceof UnitResult.Ok) {

@@ -17,7 +17,10 @@ import java.util.List;
  */
 public final class Fixes {
     /** One action: a title, whether it fixes a finding, and its edits. */
-    public record Action(String title, boolean quickFix, List<Edit> edits, Diagnostic fixes) {
+    public record Action(String title, boolean quickFix, List<Edit> edits, Diagnostic fixes, boolean preferred) {
+        public Action(String title, boolean quickFix, List<Edit> edits, Diagnostic fixes) {
+            this(title, quickFix, edits, fixes, false);
+        }
     }
 
 
@@ -58,7 +61,8 @@ public final class Fixes {
     private static List<Action> quickFixes(Diagnostic d) {
         List<Action> out = new ArrayList<>();
         for (Fix f : d.fixes()) {
-            out.add(new Action(f.title(), true, List.of(new Edit(f.span().start(), f.span().length(), f.text())), d));
+            out.add(new Action(f.title(), true, List.of(new Edit(f.span().start(), f.span().length(), f.text())), d,
+                f.preferred()));
         }
         return out;
     }

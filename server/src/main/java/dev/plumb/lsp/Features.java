@@ -167,6 +167,8 @@ final class Features {
         for (Fixes.Action f : Fixes.at(a, span)) {
             CodeAction action = new CodeAction(f.title());
             action.setKind(f.quickFix() ? CodeActionKind.QuickFix : CodeActionKind.RefactorRewrite);
+            // Only a repair that keeps what the user meant may be applied by an editor on its own.
+            if (f.preferred()) action.setIsPreferred(true);
             action.setEdit(new WorkspaceEdit(Map.of(uri, edits(a, f.edits(), enc))));
             out.add(Either.forRight(action));
         }

@@ -209,7 +209,7 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         String changed = "`find` became `seek`, " + (ctx.WITHIN() != null ? "`within` became `in`" : "`guess` became `from`")
             + " and `so that` became `where`";
         errors.add(Diagnostic.of(Code.SYNTAX_RENAMED, span(ctx), "the solve statement is now written `" + oneLine(now)
-            + "`: " + changed).withFix(new Fix("Write it as `seek …`", span(ctx), now)), ctx.getStart().getStartIndex());
+            + "`: " + changed).withFix(new Fix("Write it as `seek …`", span(ctx), now, true)), ctx.getStart().getStartIndex());
         return new Statement.Broken(span(ctx), ident(ctx.name()));
     }
 
@@ -337,7 +337,7 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         if (old) {
             String now = bracketed.text();
             errors.add(Diagnostic.of(Code.SYNTAX_RENAMED, span(ctx), "a column names its unit with `in`: write `"
-                + now + "`").withFix(new Fix("Write the units with `in`", span(ctx), now)), ctx.getStart().getStartIndex());
+                + now + "`").withFix(new Fix("Write the units with `in`", span(ctx), now, true)), ctx.getStart().getStartIndex());
             return new Statement.Broken(span(ctx), null);
         }
         return new BlockLine.Columns(span(ctx), columns);

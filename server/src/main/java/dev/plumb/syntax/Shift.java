@@ -39,7 +39,7 @@ final class Shift {
 
     private Diagnostic diagnostic(Diagnostic d) {
         List<Related> related = each(d.related(), r -> new Related(r.file(), span(r.span()), r.message()));
-        List<Fix> fixes = each(d.fixes(), f -> new Fix(f.title(), span(f.span()), f.text()));
+        List<Fix> fixes = each(d.fixes(), f -> new Fix(f.title(), span(f.span()), f.text(), f.preferred()));
         return new Diagnostic(d.code(), d.severity(), span(d.span()), d.message(), related, fixes);
     }
 

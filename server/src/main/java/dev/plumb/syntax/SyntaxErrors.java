@@ -39,7 +39,7 @@ final class SyntaxErrors extends BaseErrorListener {
         boolean visible = t.getType() != Token.EOF && t.getType() != dev.plumb.grammar.PlumbLexer.NEWLINE;
         int end = visible ? lines.fromCodePoint(t.getStopIndex() + 1) : start;
         Diagnostic d = Diagnostic.of(Code.SYNTAX_ERROR, new Span(start, end), message);
-        if (pendingInsert != null) d = d.withFix(new dev.plumb.diagnostics.Fix(pendingTitle, new Span(start, start), pendingInsert));
+        if (pendingInsert != null) d = d.withFix(new dev.plumb.diagnostics.Fix(pendingTitle, new Span(start, start), pendingInsert, true));
         pendingTitle = null;
         pendingInsert = null;
         diagnostics.add(d);

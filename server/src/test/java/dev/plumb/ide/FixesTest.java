@@ -106,6 +106,32 @@ class FixesTest {
     }
 
     @Test
+    void onlyRepairsThatKeepTheMeaningArePreferred() {
+        // A missing `*` or a former spelling keeps what was written; a close unit spelling may
+        // change a value 1000-fold (mPa and MPa), so an editor must not apply it on its own.
+        assertTrue(preferred("input b = 2 m\nA = b $0b\n", "Insert '*'"));
+        assertTrue(preferred("x = 2\nfind y wi$0thin 1 .. 3 so that y = x\n", "Write it as `seek …`"));
+        Marked m = Marked.of("p = 3 mp$0a\n");
+        List<Fixes.Action> offered = Fixes.at(m.analysis(), new Span(m.cursor(), m.cursor()));
+        assertTrue(offered.size() >= 2, offered.toString());
+        assertTrue(offered.stream().noneMatch(Fixes.Action::preferred), offered.toString());
+    }
+
+    @Test
+    void aSpellingFixNeverMakesADefinitionUseItself() {
+        // `speed = spede * 2`: 'speed' is the closest name, but offering it would make a circle.
+        List<String> offered = titles("input sped = 3 m/s\nspeed = spe$0de * 2\n");
+        assertTrue(offered.contains("Change to 'sped'"), offered.toString());
+        assertTrue(offered.stream().noneMatch(t -> t.equals("Change to 'speed'")), offered.toString());
+    }
+
+    private static boolean preferred(String marked, String title) {
+        Marked m = Marked.of(marked);
+        return Fixes.at(m.analysis(), new Span(m.cursor(), m.cursor())).stream()
+            .filter(a -> a.title().equals(title)).findFirst().orElseThrow().preferred();
+    }
+
+    @Test
     void aFindingInsideAFunctionBodyOffersNoEditOfTheCall() {
         // The range warning of the library call inside f is shown at f's call; its repair would
         // edit the body, so none is offered at the call.
