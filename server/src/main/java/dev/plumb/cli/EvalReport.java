@@ -36,6 +36,9 @@ final class EvalReport {
             if (r instanceof Row.SectionRow s) {
                 out.println();
                 out.println(style.bold(Printable.line(s.title())));
+            } else if (r instanceof Row.NarrativeRow n) {
+                // The calc's prose, in its place: the evaluation reads like the calc it evaluates.
+                out.println(Printable.line("  " + n.text()).stripTrailing());
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
