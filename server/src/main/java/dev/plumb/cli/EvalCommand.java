@@ -27,6 +27,13 @@ final class EvalCommand implements Callable<Integer> {
         description = "also print each `seek`'s iterations: trial value, residual and bracket (SI)")
     boolean steps;
 
+    /** How the values are written: for people, or for other tools. */
+    enum Format { text, json, csv }
+
+    @picocli.CommandLine.Option(names = "--format", defaultValue = "text",
+        description = "text, json (every value, check and finding) or csv (one row per value); default: ${DEFAULT-VALUE}")
+    Format format;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -43,6 +50,14 @@ final class EvalCommand implements Callable<Integer> {
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();
+        if (format != Format.text) {
+            // Machine formats are the data alone: no colours, no notice a parser would trip on.
+            PrintWriter plain = spec.commandLine().getOut();
+            if (format == Format.json) ValueExport.json(a, checked.diagnostics(), plain);
+            else ValueExport.csv(a, plain);
+            plain.flush();
+            return TextReport.Tally.of(results).exitCode(false);
+        }
         EvalReport.write(a, out, style, steps);
         if (!checked.diagnostics().isEmpty()) {
             out.println();

@@ -42,7 +42,7 @@ final class JsonReport {
         out.println(new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root));
     }
 
-    private static JsonObject diagnostic(Analysis a, Diagnostic d) {
+    static JsonObject diagnostic(Analysis a, Diagnostic d) {
         JsonObject o = new JsonObject();
         o.addProperty("code", d.code().id());
         o.addProperty("severity", d.severity().label());

@@ -1,0 +1,89 @@
+package dev.plumb.cli;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Row;
+import dev.plumb.diagnostics.Diagnostic;
+import dev.plumb.units.DisplayUnits;
+import dev.plumb.units.Unit;
+import java.io.PrintWriter;
+import java.util.List;
+
+/**
+ * `plumb eval --format json|csv`: every value of a calc for other tools — its name, the line it
+ * is defined on, its value in SI and in its display unit, the unit, the dimension in words, and
+ * its note; the checks and findings too in JSON.
+ */
+final class ValueExport {
+    private ValueExport() {
+    }
+
+    static void json(Analysis a, List<Diagnostic> diagnostics, PrintWriter out) {
+        JsonObject root = new JsonObject();
+        root.addProperty("path", Location.path(a.file()));
+        JsonArray values = new JsonArray();
+        JsonArray checks = new JsonArray();
+        for (Row r : a.rows()) {
+            if (r instanceof Row.ValueRow v) {
+                JsonObject o = new JsonObject();
+                o.addProperty("name", v.name());
+                o.addProperty("line", a.lines().line(v.span().start()));
+                o.addProperty("input", v.input());
+                if (v.value().known()) {
+                    o.addProperty("valueSi", v.value().si());
+                    o.addProperty("siUnit", DisplayUnits.defaultFor(v.value().dimension()).symbol());
+                    o.addProperty("dimension", v.value().dimension().describe());
+                }
+                o.addProperty("shown", v.shown());
+                Unit display = v.display();
+                if (display != null) o.addProperty("unit", display.symbol());
+                if (v.note() != null) o.addProperty("note", v.note());
+                if (v.origin() != null) o.addProperty("correlation", v.origin().correlation());
+                values.add(o);
+            } else if (r instanceof Row.CheckRow c) {
+                JsonObject o = new JsonObject();
+                o.addProperty("check", c.source());
+                o.addProperty("line", a.lines().line(c.span().start()));
+                o.addProperty("verdict", c.passed() == null ? "not evaluated" : c.passed() ? "pass" : "fail");
+                o.addProperty("detail", c.detail());
+                if (c.note() != null) o.addProperty("note", c.note());
+                checks.add(o);
+            }
+        }
+        root.add("values", values);
+        root.add("checks", checks);
+        JsonArray findings = new JsonArray();
+        for (Diagnostic d : diagnostics) findings.add(JsonReport.diagnostic(a, d));
+        root.add("diagnostics", findings);
+        out.println(new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root));
+    }
+
+    /** One row per value, RFC 4180 quoting; an unknown value has empty number cells and "?" as shown. */
+    static void csv(Analysis a, PrintWriter out) {
+        out.print("name,line,input,value_si,si_unit,shown,unit,dimension,note\r\n");
+        for (Row r : a.rows()) {
+            if (!(r instanceof Row.ValueRow v)) continue;
+            boolean known = v.value().known();
+            String[] cells = {
+                v.name(), String.valueOf(a.lines().line(v.span().start())), String.valueOf(v.input()),
+                known ? String.valueOf(v.value().si()) : "", known ? DisplayUnits.defaultFor(v.value().dimension()).symbol() : "",
+                v.shown(), v.display() == null ? "" : v.display().symbol(), known ? v.value().dimension().describe() : "",
+                v.note() == null ? "" : v.note()};
+            StringBuilder line = new StringBuilder();
+            for (int i = 0; i < cells.length; i++) {
+                if (i > 0) line.append(',');
+                // A calc's own text may hold control characters: written escaped, never raw.
+                line.append(quoted(dev.plumb.diagnostics.Printable.line(cells[i])));
+            }
+            out.print(line.append("\r\n"));
+        }
+    }
+
+    /** A cell quoted when it holds a comma, a quote or a line break (RFC 4180), quotes doubled. */
+    private static String quoted(String cell) {
+        boolean plain = cell.chars().noneMatch(c -> c == ',' || c == '"' || c == '\n' || c == '\r');
+        return plain ? cell : "\"" + cell.replace("\"", "\"\"") + "\"";
+    }
+}

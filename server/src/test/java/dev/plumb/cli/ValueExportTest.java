@@ -1,0 +1,58 @@
+package dev.plumb.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** `plumb eval --format json|csv`: every value for other tools, parseable, nothing lost. */
+class ValueExportTest {
+    @TempDir
+    Path dir;
+
+    private static final String CALC = """
+        input b = 1.2 m    "panel width, drawing \\"S-01\\", rev B"
+        input h = 800 mm
+        A = b * h          in cm^2
+        x = A + 1 s
+        check A < 2 m^2
+        """;
+
+    @Test
+    void jsonHasEveryValueInSiAndAsShownWithTheChecksAndFindings() throws IOException {
+        Path calc = Cli.write(dir, "panel.plumb", CALC);
+        Cli run = Cli.run("eval", "--format", "json", calc.toString());
+        JsonObject root = JsonParser.parseString(run.out()).getAsJsonObject();
+        assertEquals(4, root.getAsJsonArray("values").size(), run.out());
+        JsonObject area = root.getAsJsonArray("values").get(2).getAsJsonObject();
+        assertEquals("A", area.get("name").getAsString());
+        // by hand: 1.2 m × 0.8 m = 0.96 m² = 9600 cm²
+        assertEquals(0.96, area.get("valueSi").getAsDouble(), 1e-12);
+        assertEquals("m²", area.get("siUnit").getAsString());
+        assertEquals("9600 cm²", area.get("shown").getAsString());
+        assertEquals(3, area.get("line").getAsInt());
+        JsonObject unknown = root.getAsJsonArray("values").get(3).getAsJsonObject();
+        assertTrue(!unknown.has("valueSi") && unknown.get("shown").getAsString().equals("?"), unknown.toString());
+        assertEquals("pass", root.getAsJsonArray("checks").get(0).getAsJsonObject().get("verdict").getAsString());
+        assertEquals("unit.mismatch", root.getAsJsonArray("diagnostics").get(0).getAsJsonObject().get("code").getAsString());
+        assertEquals(1, run.exitCode(), "the error still fails the run");
+    }
+
+    @Test
+    void csvHasOneQuotedRowPerValue() throws IOException {
+        Path calc = Cli.write(dir, "panel.plumb", CALC);
+        Cli run = Cli.run("eval", "--format", "csv", calc.toString());
+        List<String> rows = run.out().lines().toList();
+        assertEquals("name,line,input,value_si,si_unit,shown,unit,dimension,note", rows.get(0));
+        assertEquals(5, rows.size(), run.out());
+        // RFC 4180: a cell with a comma or a quote is quoted, its quotes doubled.
+        assertTrue(rows.get(1).endsWith(",\"panel width, drawing \"\"S-01\"\", rev B\""), rows.get(1));
+        assertTrue(rows.get(4).startsWith("x,4,false,,,?,"), rows.get(4));
+    }
+}
