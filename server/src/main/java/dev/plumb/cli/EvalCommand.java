@@ -42,8 +42,14 @@ final class EvalCommand implements Callable<Integer> {
         Style style = common.style();
         PrintWriter out = style.writer(spec.commandLine().getOut());
         PrintWriter err = spec.commandLine().getErr();
+        if (Files.isDirectory(file)) {
+            err.println("plumb: eval takes one calc file, and " + dev.plumb.diagnostics.Printable.line(file.toString())
+                + " is a folder: name a .plumb file in it, or use `plumb check " + dev.plumb.diagnostics.Printable.line(
+                    file.toString()) + "` for every calc below it");
+            return Main.USAGE;
+        }
         if (!Files.isRegularFile(file)) {
-            err.println("plumb: no such file: " + file);
+            err.println("plumb: no such file: " + dev.plumb.diagnostics.Printable.line(file.toString()));
             return Main.USAGE;
         }
         Workspace workspace = new Workspace(common.sources(), common.settings());

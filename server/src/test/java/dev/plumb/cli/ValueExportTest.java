@@ -45,6 +45,14 @@ class ValueExportTest {
     }
 
     @Test
+    void evalOfAFolderSaysItTakesAFile() throws IOException {
+        Cli.write(dir, "panel.plumb", CALC);
+        Cli run = Cli.run("eval", dir.toString());
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("eval takes one calc file") && run.err().contains("plumb check"), run.err());
+    }
+
+    @Test
     void csvHasOneQuotedRowPerValue() throws IOException {
         Path calc = Cli.write(dir, "panel.plumb", CALC);
         Cli run = Cli.run("eval", "--format", "csv", calc.toString());
