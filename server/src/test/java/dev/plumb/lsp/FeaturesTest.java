@@ -22,6 +22,7 @@ import org.eclipse.lsp4j.DidChangeConfigurationParams;
 import org.eclipse.lsp4j.DocumentHighlightParams;
 import org.eclipse.lsp4j.FoldingRangeRequestParams;
 import org.eclipse.lsp4j.InlayHintCapabilities;
+import org.eclipse.lsp4j.HoverParams;
 import org.eclipse.lsp4j.InlayHintParams;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Range;
@@ -230,7 +231,8 @@ class FeaturesTest {
         client.remote.getTextDocumentService().didChange(new org.eclipse.lsp4j.DidChangeTextDocumentParams(
             new org.eclipse.lsp4j.VersionedTextDocumentIdentifier(u, 2),
             List.of(new org.eclipse.lsp4j.TextDocumentContentChangeEvent("x = 1 m + 1 s\n"))));
-        Thread.sleep(400);
+        // A request answered after the change is a barrier: the change has been taken by then.
+        client.remote.getTextDocumentService().hover(new HoverParams(doc(u), new Position(0, 0))).get(10, TimeUnit.SECONDS);
         assertTrue(client.published.stream().noneMatch(p -> p.getVersion() != null && p.getVersion() == 2),
             "nothing is published while typing");
         client.remote.getTextDocumentService().didSave(new org.eclipse.lsp4j.DidSaveTextDocumentParams(doc(u)));
@@ -251,10 +253,15 @@ class FeaturesTest {
         plumb.addProperty("significantFigures", 5);
         settings.add("plumb", plumb);
         client.remote.getWorkspaceService().didChangeConfiguration(new DidChangeConfigurationParams(settings));
-        Thread.sleep(300);
-        var again = s.inlayHint(new InlayHintParams(doc(u), new Range(new Position(0, 0), new Position(1, 0))))
-            .get(10, TimeUnit.SECONDS);
-        assertNotNull(again);
-        assertEquals("  = 0.66667", again.get(0).getLabel().getLeft());
+        // The new settings reach the next analysis: ask until they show, within a bound, never a fixed sleep.
+        String label = null;
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(10);
+        while (System.nanoTime() < deadline && !"  = 0.66667".equals(label)) {
+            var again = s.inlayHint(new InlayHintParams(doc(u), new Range(new Position(0, 0), new Position(1, 0))))
+                .get(10, TimeUnit.SECONDS);
+            assertNotNull(again);
+            label = again.get(0).getLabel().getLeft();
+        }
+        assertEquals("  = 0.66667", label);
     }
 }
