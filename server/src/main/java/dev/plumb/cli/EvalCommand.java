@@ -24,7 +24,7 @@ final class EvalCommand implements Callable<Integer> {
     CommonOptions common;
 
     @picocli.CommandLine.Option(names = "--steps",
-        description = "also print each `seek`'s iterations: trial value, residual and bracket (SI)")
+        description = "also print each `seek`'s iterations: trial value, residual and bracket, in the root's unit")
     boolean steps;
 
     /** How the values are written: for people, or for other tools. */

@@ -44,7 +44,7 @@ final class EvalReport {
                 String basis = tag(v) + used(a, v);
                 out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + solved(v)
                     + note).stripTrailing());
-                if (steps && v.solution() != null) writeSteps(out, v.solution());
+                if (steps && v.solution() != null) writeSteps(out, v.solution(), v);
             } else if (r instanceof Row.FunctionRow f) {
                 out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));
             } else if (r instanceof Row.CheckRow c) {
@@ -63,13 +63,14 @@ final class EvalReport {
             + QuantityFormat.format(v.solution().residual(), unit, 2) + "]";
     }
 
-    /** The refinement's record: each trial, its residual and the bracket after it (SI). */
-    private static void writeSteps(PrintWriter out, Solution s) {
+    /** The refinement's record: each trial, its residual and the bracket after it, in the unit the root is shown in. */
+    private static void writeSteps(PrintWriter out, Solution s, Row.ValueRow root) {
         Unit unit = DisplayUnits.defaultFor(s.residualDimension());
+        Unit x = root.display() != null ? root.display() : DisplayUnits.defaultFor(root.value().dimension());
         for (Solution.Step step : s.steps()) {
-            out.printf("      %3d  x = %-14s residual = %-14s bracket %s .. %s%n", step.n(), QuantityFormat.number(step.x(), 10),
-                QuantityFormat.format(step.residual(), unit, 3), QuantityFormat.number(step.low(), 10),
-                QuantityFormat.number(step.high(), 10));
+            out.printf("      %3d  %s = %-16s residual = %-14s bracket %s .. %s%n", step.n(), Printable.line(root.name()),
+                QuantityFormat.format(step.x(), x, 10), QuantityFormat.format(step.residual(), unit, 3),
+                QuantityFormat.format(step.low(), x, 10), QuantityFormat.format(step.high(), x, 10));
         }
     }
 

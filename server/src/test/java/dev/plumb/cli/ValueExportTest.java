@@ -45,6 +45,17 @@ class ValueExportTest {
     }
 
     @Test
+    void stepsShowEveryTrialInTheUnitTheRootIsShownIn() throws IOException {
+        // by hand: v · 2 s = 3 m gives v = 1.5 m/s = 1500 mm/s
+        Path calc = Cli.write(dir, "steps.plumb", "seek v in 1 mm/s .. 10 m/s where v * 2 s = 3 m\n");
+        Cli run = Cli.run("eval", "--steps", "--no-color", calc.toString());
+        assertTrue(run.out().contains("v = 1500 mm/s"), run.out());
+        List<String> trials = run.out().lines().filter(l -> l.matches("\\s+\\d+  v = .*")).toList();
+        assertTrue(!trials.isEmpty() && trials.stream().allMatch(l -> l.contains(" mm/s ") && l.contains("bracket")),
+            run.out());
+    }
+
+    @Test
     void evalOfAFolderSaysItTakesAFile() throws IOException {
         Cli.write(dir, "panel.plumb", CALC);
         Cli run = Cli.run("eval", dir.toString());
