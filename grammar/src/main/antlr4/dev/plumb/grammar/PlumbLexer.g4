@@ -162,6 +162,7 @@ ACCURACY    : 'accuracy';
 DOMAIN      : 'domain';
 ACCEPT      : 'accept';
 AT          : 'at';
+TRANSITION  : 'transition';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

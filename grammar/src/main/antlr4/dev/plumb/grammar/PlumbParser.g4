@@ -27,6 +27,7 @@ statement
     | seek
     | oldSolve
     | accept
+    | transition
     | correlationHead
     | tableHead
     | blockLine
@@ -54,6 +55,8 @@ seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN ex
  * reason is optional here only so that the engine can say clearly that it is missing.
  */
 accept      : ACCEPT findingCode AT name note?;
+/** Where the boundary layer turns from laminar to turbulent in this calc: `transition Re = 3e5 "why"`. */
+transition  : TRANSITION name ASSIGN NUMBER note?;
 /** A diagnostic code as written, `range.outside`, `math.division-by-zero`. */
 findingCode : name ( DOT name | MINUS name )*;
 /** The solve statement's former spelling: read only to say how it is written now. */
@@ -106,5 +109,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT
+    | DOMAIN | ACCEPT | AT | TRANSITION
     ;

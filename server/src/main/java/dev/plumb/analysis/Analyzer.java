@@ -49,7 +49,8 @@ final class Analyzer {
         parsed.diagnostics().forEach(reporter::add);
         List<Statement> statements = parsed.statements();
 
-        Scope scope = new Scope(text, workspace.library(), settings.criticalReynolds());
+        Double transition = Transitions.of(statements, reporter, Stdlib.isLibrary(file));
+        Scope scope = new Scope(text, workspace.library(), transition != null ? transition : settings.criticalReynolds());
         ImportPass.Imports imports = new ImportPass(workspace, file, chain, reporter, superseded).run(statements);
         imports.names().forEach(scope::put);
         DeclarationPass.Declarations declared = new DeclarationPass(file, text, scope, reporter, units).run(statements);
@@ -75,7 +76,9 @@ final class Analyzer {
         List<Row> inOrder = rowsInOrder(statements, evaluated.rows(), checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));
-        return new Analysis(file, text, parsed, headers(statements), inOrder, sorted(diagnostics), scope,
+        Map<String, String> headers = headers(statements);
+        Transitions.describe(statements, transition).ifPresent(t -> headers.put("transition", t));
+        return new Analysis(file, text, parsed, headers, inOrder, sorted(diagnostics), scope,
             resolved.importedUses(), imports.files(), resolved.references(), reporter.calls());
     }
 

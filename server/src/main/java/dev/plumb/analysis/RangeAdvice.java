@@ -38,14 +38,20 @@ final class RangeAdvice {
         if (def.regime() == null || def.regime().text().equals("tripped")) return;
         String reName = def.params().stream().map(p -> p.name().text()).filter(n -> n.startsWith("Re")).findFirst()
             .orElse(null);
-        if (reName == null || !(caller.lookup("Re_crit") instanceof Binding.ValueBinding crit)
-            || !crit.value().known() || !crit.value().dimensionless()) {
+        if (reName == null) return;
+        // Order: the calc's `transition` statement, then the settings', then the library's Re_crit.
+        // A value that merely happens to be named Re_crit moves nothing.
+        Double set = caller.scope().criticalReynolds();
+        Value critical;
+        if (set != null) {
+            critical = Value.number(set);
+        } else if (caller.scope().fromLibraryOnly("Re_crit") instanceof Binding.ValueBinding crit && crit.value().known()
+            && crit.value().dimensionless()) {
+            critical = crit.value();
+        } else {
             return;
         }
         double re = params.get(reName).si();
-        // Order: the document's own Re_crit, then the settings', then the library's.
-        Value critical = caller.fromLibrary("Re_crit") && caller.scope().criticalReynolds() != null
-            ? Value.number(caller.scope().criticalReynolds()) : crit.value();
         double reCrit = critical.si();
         boolean laminar = def.regime().text().equals("laminar");
         if (laminar ? re <= reCrit : re >= reCrit) return;

@@ -48,6 +48,11 @@ public final class Scope {
         return criticalReynolds;
     }
 
+    /** The library's binding of a name, whatever this document defines under it; null for none. */
+    Binding fromLibraryOnly(String name) {
+        return library.names() == null ? null : library.names().lookup(name);
+    }
+
     /** True when the name comes from the standard library (not defined or imported here). */
     boolean fromLibrary(String name) {
         return !names.containsKey(name) && library.names() != null && library.names().lookup(name) != null;

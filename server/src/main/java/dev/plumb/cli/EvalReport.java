@@ -20,7 +20,7 @@ final class EvalReport {
         // The calc's own text is neutralised before colours are added (NeutralWriter keeps those).
         String title = Printable.line(a.headers().getOrDefault("title", Location.path(a.file())));
         out.println(style.bold(title));
-        for (String key : new String[] {"author", "reviewer", "revision"}) {
+        for (String key : new String[] {"author", "reviewer", "revision", "transition"}) {
             String v = a.headers().get(key);
             if (v != null && !v.isEmpty()) out.println(key + ": " + Printable.line(v));
         }

@@ -30,6 +30,7 @@ public enum Code {
     RANGE_OUTSIDE("range.outside", Severity.WARNING),
     RANGE_REGIME("range.regime", Severity.WARNING),
     RANGE_NO_FORMULA("range.no-formula", Severity.ERROR),
+    RANGE_TRANSITION_NAME("range.transition-name", Severity.WARNING),
     SOLVE_NO_ROOT("solve.no-root", Severity.ERROR),
     SOLVE_NOT_CONVERGED("solve.not-converged", Severity.ERROR),
     SOLVE_MULTIPLE_ROOTS("solve.multiple-roots", Severity.WARNING),

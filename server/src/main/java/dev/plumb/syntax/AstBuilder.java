@@ -179,6 +179,13 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             Span.cover(lhs.span(), rhs.span()), unit, basis, note(tail.note()));
     }
 
+    @Override
+    public Object visitTransition(PlumbParser.TransitionContext ctx) {
+        Token n = ctx.NUMBER().getSymbol();
+        return new Statement.Transition(span(ctx), ident(ctx.name()), Double.parseDouble(n.getText()), span(n),
+            note(ctx.note()));
+    }
+
     /** The former `find … within … so that …`: an error that shows the statement in today's words. */
     @Override
     public Object visitAccept(PlumbParser.AcceptContext ctx) {

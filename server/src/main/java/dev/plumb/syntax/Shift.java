@@ -106,6 +106,9 @@ final class Shift {
         if (s instanceof Statement.Check c) {
             return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note());
         }
+        if (s instanceof Statement.Transition t) {
+            return new Statement.Transition(span(t.span()), ident(t.quantity()), t.value(), span(t.valueSpan()), t.note());
+        }
         if (s instanceof Statement.Seek f) {
             return new Statement.Seek(span(f.span()), ident(f.name()), expr(f.low()), expr(f.high()), expr(f.start()),
                 expr(f.lhs()), expr(f.rhs()), span(f.equation()), unit(f.displayUnit()), ident(f.basis()), f.note());

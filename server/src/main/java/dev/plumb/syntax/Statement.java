@@ -123,6 +123,14 @@ public sealed interface Statement {
     }
 
     /**
+     * {@code transition Re = 3e5 ["note"]}: the Reynolds number at which this calc's boundary
+     * layers turn turbulent, for the regime checks of its correlations (the library's default
+     * otherwise). {@code quantity} is the word written before `=` (it must be Re).
+     */
+    record Transition(Span span, Ident quantity, double value, Span valueSpan, String note) implements Statement {
+    }
+
+    /**
      * A statement with a syntax error. Its name, when it had one, still counts as defined so that
      * later uses do not add "unknown name" noise to the syntax error already reported.
      */

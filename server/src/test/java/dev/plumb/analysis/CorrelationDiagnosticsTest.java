@@ -18,6 +18,7 @@ class CorrelationDiagnosticsTest {
     @Test
     void aPiecewiseCorrelationWithNoApplicablePiece() {
         Fixture.checkResource("range.no-formula.plumb");
+        Fixture.checkResource("range.transition-name.plumb");
     }
 
     @Test

@@ -217,12 +217,12 @@ class CorrelationTest {
         Analysis a = new Workspace(new FileSources(), early).analyzeText(Fixture.FILE, calc);
         assertEquals(List.of(Code.RANGE_REGIME), codes(a));
         assertTrue(a.diagnostics().get(0).message().contains("Re_crit = 300000"));
-        Analysis own = new Workspace(new FileSources(), early).analyzeText(Fixture.FILE, "Re_crit = 6e5\n" + calc);
-        assertEquals(List.of(), codes(own), "the document's own Re_crit wins over the settings");
+        Analysis own = new Workspace(new FileSources(), early).analyzeText(Fixture.FILE, "transition Re = 6e5\n" + calc);
+        assertEquals(List.of(), codes(own), "the calc's own transition wins over the settings");
     }
 
     @Test
-    void aDocumentsOwnReCritMovesTheRegimeThreshold() {
+    void aCalcsTransitionStatementMovesTheRegimeThresholdAndAValueNamedReCritDoesNot() {
         String blasius = """
             correlation cf_lam(Re)
                 regime laminar
@@ -230,8 +230,12 @@ class CorrelationTest {
             end
             """;
         assertEquals(List.of(), codes(Fixture.analyze(blasius + "Cf = cf_lam(4e5)\n")));
-        Analysis early = Fixture.analyze(blasius + "Re_crit = 3e5 \"rough leading edge\"\nCf = cf_lam(4e5)\n");
+        Analysis early = Fixture.analyze(blasius + "transition Re = 3e5 \"rough leading edge\"\nCf = cf_lam(4e5)\n");
         assertEquals(List.of(Code.RANGE_REGIME), codes(early));
         assertTrue(early.diagnostics().get(0).message().contains("Re_crit = 300000"));
+        assertEquals("Re = 300000, rough leading edge", early.headers().get("transition"));
+        // A value that happens to be named Re_crit moves nothing, and is pointed out.
+        Analysis named = Fixture.analyze(blasius + "Re_crit = 3e5\nCf = cf_lam(4e5)\n");
+        assertEquals(List.of(Code.RANGE_TRANSITION_NAME), codes(named));
     }
 }

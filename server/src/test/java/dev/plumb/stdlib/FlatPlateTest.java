@@ -250,8 +250,8 @@ class FlatPlateTest {
     @MethodSource("ranges")
     void endsOfTheRangeAreQuiet(String name, double lo, double hi) {
         // A document whose Re_crit equals the end is in neither regime's warning zone there.
-        RangeAssertions.assertCleanDocument("Re_crit = " + lo + "\nx = " + name + "(" + lo + ")\n");
-        RangeAssertions.assertCleanDocument("Re_crit = " + hi + "\nx = " + name + "(" + hi + ")\n");
+        RangeAssertions.assertCleanDocument("transition Re = " + lo + "\nx = " + name + "(" + lo + ")\n");
+        RangeAssertions.assertCleanDocument("transition Re = " + hi + "\nx = " + name + "(" + hi + ")\n");
     }
 
     @ParameterizedTest(name = "{0}")
@@ -313,7 +313,7 @@ class FlatPlateTest {
         // A document with Re_crit = 1e6 and a 1/7-law plate at 8e5: the layer is laminar there
         // unless tripped, so the fix is a laminar or mixed-flow law, not the ITTC line (which
         // covers 8e5 but assumes a trip).
-        Diagnostic w = RangeAssertions.assertOneWarning("Re_crit = 1e6\nx = cf_plate_turb_avg(8e5)\n",
+        Diagnostic w = RangeAssertions.assertOneWarning("transition Re = 1e6\nx = cf_plate_turb_avg(8e5)\n",
             RangeAssertions.REGIME, "cf_plate_turb_avg", n(8e5), n(1e6));
         assertTrue(w.message().contains("cf_plate_blasius_avg"), w::message);
         RangeAssertions.assertNotOffered(w, "cf_ittc1957");
@@ -338,15 +338,15 @@ class FlatPlateTest {
     void aDocumentsReCritMovesTheThreshold() {
         // Laminar at 4e5: fine with the library's 5e5, warned once the document says 3e5.
         RangeAssertions.assertClean("cf_plate_blasius_avg(4e5)");
-        RangeAssertions.assertOneWarning("Re_crit = 3e5\nx = cf_plate_blasius_avg(4e5)\n", RangeAssertions.REGIME,
+        RangeAssertions.assertOneWarning("transition Re = 3e5\nx = cf_plate_blasius_avg(4e5)\n", RangeAssertions.REGIME,
             "cf_plate_blasius_avg", n(4e5), n(3e5));
         // Turbulent at 4e5: warned with 5e5, not with 3e5 (the range warning of the 1/7 law stays).
         RangeAssertions.assertOneWarning("x = cf_plate_turb_avg(4e5)\n", RangeAssertions.REGIME, "cf_plate_turb_avg", n(4e5), n(5e5));
-        RangeAssertions.assertNone("Re_crit = 3e5\nx = cf_plate_turb_avg(4e5)\n", RangeAssertions.REGIME);
-        RangeAssertions.assertOneWarning("Re_crit = 3e5\nx = cf_plate_turb_avg(4e5)\n", RangeAssertions.OUTSIDE,
+        RangeAssertions.assertNone("transition Re = 3e5\nx = cf_plate_turb_avg(4e5)\n", RangeAssertions.REGIME);
+        RangeAssertions.assertOneWarning("transition Re = 3e5\nx = cf_plate_turb_avg(4e5)\n", RangeAssertions.OUTSIDE,
             "cf_plate_turb_avg", n(4e5), n(5e5));
         // And upwards: a document with Re_crit = 1e6 may use Blasius at 8e5 without a warning.
-        RangeAssertions.assertCleanDocument("Re_crit = 1e6\nx = cf_plate_blasius_avg(8e5)\n");
+        RangeAssertions.assertCleanDocument("transition Re = 1e6\nx = cf_plate_blasius_avg(8e5)\n");
     }
 
     @Test
