@@ -87,17 +87,16 @@ final class Definitions {
         return null;
     }
 
+    /** The solved value's unit (the one rule, DisplayChoice.ofSeek), reporting an `in` unit that is wrong or unknown. */
     private Unit displayUnit(Statement.Seek s, Value v, Evaluator evaluator, Reporter reporter) {
         if (s.displayUnit() != null) {
             Unit u = evaluator.resolveUnit(s.displayUnit(), false);
-            if (u != null && u.dimension().equals(v.dimension())) return u;
-            if (u != null) {
+            if (u != null && !u.dimension().equals(v.dimension())) {
                 reporter.report(Code.UNIT_MISMATCH, s.displayUnit().span(), "`in " + s.displayUnit().text() + "` shows "
                     + u.dimension().describe() + ", but " + s.name().text() + " is " + v.dimension().describe());
             }
-            return DisplayUnits.defaultFor(v.dimension());
         }
-        return DisplayChoice.writtenOrSi(s.low() != null ? s.low() : s.start(), v.dimension(), units);
+        return DisplayChoice.ofSeek(s, v.dimension(), units);
     }
 
     private Unit displayUnit(Statement.Definition d, Value v, Evaluator evaluator, Reporter reporter) {

@@ -26,6 +26,20 @@ final class DisplayChoice {
         return null;
     }
 
+    /**
+     * The unit a solved value is shown in: its `in` unit when that has the value's dimension
+     * (a mismatch is reported where the binding is made), else the unit of the bracket's (or
+     * start value's) number, else SI. The solver's messages and the value's row use the same.
+     */
+    static Unit ofSeek(dev.plumb.syntax.Statement.Seek s, Dimension dimension, UnitRegistry units) {
+        if (s.displayUnit() != null && units.resolve(s.displayUnit().text()) instanceof UnitResult.Ok ok
+            && ok.unit().dimension().equals(dimension)) {
+            return ok.unit();
+        }
+        if (s.displayUnit() != null) return DisplayUnits.defaultFor(dimension);
+        return writtenOrSi(s.low() != null ? s.low() : s.start(), dimension, units);
+    }
+
     /** The written unit of {@code e} when it has the dimension, else the SI unit of the dimension. */
     static Unit writtenOrSi(Expr e, Dimension dimension, UnitRegistry units) {
         Unit u = e == null ? null : written(e, units);

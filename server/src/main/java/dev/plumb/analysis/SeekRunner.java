@@ -81,7 +81,7 @@ final class SeekRunner {
             result = RootFinder.within(residual, low.si(), high.si());
             first = low.si();
         }
-        Unit unit = unitOf(f, dim);
+        Unit unit = DisplayChoice.ofSeek(f, dim, units);
         boolean solved = result.status() == RootFinder.Status.SOLVED;
         double at = solved ? result.root() : result.status() == RootFinder.Status.NO_ROOT ? result.low() : first;
         int before = reporter.size();
@@ -245,15 +245,6 @@ final class SeekRunner {
         reporter.report(Code.SOLVE_MULTIPLE_ROOTS, f.name().span(), f.name().text() + " has " + r.brackets().size()
             + " roots in the bracket, between " + String.join("; ", all) + "; the first, "
             + show(r.root(), dim, unit) + ", is taken: narrow the bracket to choose another");
-    }
-
-    /** The unit trial values are shown in: the `in` unit, else the bracket's (or start value's). */
-    private Unit unitOf(Statement.Seek f, Dimension dim) {
-        if (f.displayUnit() != null && units.resolve(f.displayUnit().text()) instanceof dev.plumb.units.UnitResult.Ok ok
-            && ok.unit().dimension().equals(dim)) {
-            return ok.unit();
-        }
-        return DisplayChoice.writtenOrSi(f.low() != null ? f.low() : f.start(), dim, units);
     }
 
     private static String show(double si, Dimension dim, Unit unit) {

@@ -222,6 +222,18 @@ class CorrelationTest {
     }
 
     @Test
+    void aTransitionStatementWrittenWronglySaysHowToWriteIt() {
+        Analysis word = Fixture.analyze("transition Rey = 3e5\n");
+        assertEquals(List.of(Code.SYNTAX_ERROR), codes(word));
+        assertTrue(word.diagnostics().get(0).message().contains("transition Re = 3e5"), word.diagnostics().toString());
+        assertEquals(List.of(Code.MATH_DOMAIN), codes(Fixture.analyze("transition Re = 0\n")));
+        Analysis twice = Fixture.analyze("transition Re = 3e5\ntransition Re = 1e6\n");
+        assertEquals(List.of(Code.NAME_DUPLICATE), codes(twice));
+        assertEquals(2, twice.lines().line(twice.diagnostics().get(0).span().start()), "the second one is reported");
+        assertEquals("Re = 300000", twice.headers().get("transition"), "the first one counts");
+    }
+
+    @Test
     void aCalcsTransitionStatementMovesTheRegimeThresholdAndAValueNamedReCritDoesNot() {
         String blasius = """
             correlation cf_lam(Re)
