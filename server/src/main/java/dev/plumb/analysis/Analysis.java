@@ -17,10 +17,13 @@ import java.util.Set;
  * @param scope the names the document defines and imports, with their values
  * @param importedUses for each imported file, the names of it this document uses
  * @param imports the files this document uses, directly
+ * @param settings the options it was made with (the layers that show values read the significant figures here)
+ * @param graph the document's own definitions by identity: what each uses, the findings on each
  */
 public record Analysis(Path file, String text, ParsedSource syntax, Map<String, String> headers, List<Row> rows,
                        List<Diagnostic> diagnostics, Scope scope, Map<Path, Set<String>> importedUses,
-                       List<Path> imports, List<Reference> references, List<CallSite> calls) {
+                       List<Path> imports, List<Reference> references, List<CallSite> calls, Settings settings,
+                       DefinitionGraph graph) {
 
     /**
      * What stands in for a file or folder that could not be read at all: no text, one finding at
@@ -29,7 +32,7 @@ public record Analysis(Path file, String text, ParsedSource syntax, Map<String, 
     public static Analysis unreadable(Path file, dev.plumb.diagnostics.Code code, String message) {
         Diagnostic d = Diagnostic.of(code, new dev.plumb.diagnostics.Span(0, 0), message);
         return new Analysis(file, "", ParsedSource.unread(""), Map.of(), List.of(), List.of(d), new Scope(""), Map.of(),
-            List.of(), List.of(), List.of());
+            List.of(), List.of(), List.of(), Settings.DEFAULT, DefinitionGraph.empty(file));
     }
 
     /**
@@ -39,8 +42,36 @@ public record Analysis(Path file, String text, ParsedSource syntax, Map<String, 
      * @param used for a correlation with several formulas, which one gave the value here (the fit
      *     a selector chose, or the fits it blended); null when there was no choice
      */
-    public record CallSite(dev.plumb.diagnostics.Span callee, String name, String arguments, String verdict,
-                           String used) {
+    public record CallSite(dev.plumb.diagnostics.Span callee, String name, List<Argument> arguments, Standing standing,
+                           List<String> breaches, String range, String used) {
+        public CallSite {
+            arguments = List.copyOf(arguments);
+            breaches = List.copyOf(breaches);
+        }
+    }
+
+    /** One argument of a call: the parameter's name, the value passed, the unit it reads best in (null: SI). */
+    public record Argument(String name, Value value, dev.plumb.units.Unit unit) {
+    }
+
+    /**
+     * Where a call's arguments sit. {@code breaches} of a {@link CallSite} say, in words, which
+     * bound each breach crossed (for OUTSIDE) or why the formula is undefined there (OUTSIDE_DOMAIN);
+     * {@code range} is the entry's stated range, empty when it states none.
+     */
+    public enum Standing {
+        /** Within every stated bound. */
+        INSIDE,
+        /** Beyond a stated bound: the value is an extrapolation. */
+        OUTSIDE,
+        /** Where the formula is undefined: no value. */
+        OUTSIDE_DOMAIN,
+        /** The entry states no range. */
+        NO_RANGE,
+        /** A table read between its rows. */
+        TABLE_INSIDE,
+        /** A table read beyond its first or last row (extrapolated). */
+        TABLE_BEYOND
     }
 
     /** The correlation calls written within a span (a definition's line), in source order. */

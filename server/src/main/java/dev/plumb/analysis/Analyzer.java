@@ -59,7 +59,7 @@ final class Analyzer {
         bindBlocks(scope, plan);
 
         Budget budget = Budget.standard(superseded);
-        EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, settings, units, budget)
+        EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, units, budget)
             .run(declared.duplicates());
         Map<Statement, Row> checkRows = new java.util.IdentityHashMap<>();
         CheckRunner checks = new CheckRunner(scope, evaluated.values(), reporter, text, settings, units, budget);
@@ -78,8 +78,22 @@ final class Analyzer {
             reporter.all(request -> resolve(request, declared.own(), inOrder)));
         Map<String, String> headers = headers(statements);
         Transitions.describe(statements, transition).ifPresent(t -> headers.put("transition", t));
-        return new Analysis(file, text, parsed, headers, inOrder, sorted(diagnostics), scope,
-            resolved.importedUses(), imports.files(), resolved.references(), reporter.calls());
+        List<Diagnostic> findings = sorted(diagnostics);
+        return new Analysis(file, text, parsed, headers, inOrder, findings, scope,
+            resolved.importedUses(), imports.files(), resolved.references(), reporter.calls(), settings,
+            new DefinitionGraph(file, resolved.uses(), findingsByDefinition(declared.own(), findings)));
+    }
+
+    /** Each own definition's findings: those within the span of the statement that defines it. */
+    private static Map<String, List<Diagnostic>> findingsByDefinition(Map<String, Statement> own, List<Diagnostic> findings) {
+        Map<String, List<Diagnostic>> out = new LinkedHashMap<>();
+        for (var e : own.entrySet()) {
+            dev.plumb.diagnostics.Span s = e.getValue().span();
+            List<Diagnostic> on = findings.stream()
+                .filter(d -> d.span().start() >= s.start() && d.span().end() <= s.end()).toList();
+            if (!on.isEmpty()) out.put(e.getKey(), on);
+        }
+        return out;
     }
 
     /** A repair a finding asked for, as edits of this document; none when it cannot be made here. */

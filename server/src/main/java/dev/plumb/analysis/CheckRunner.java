@@ -43,7 +43,7 @@ final class CheckRunner {
                 + (e.limit == Budget.Limit.TIME ? "the run's " + Budget.SECONDS + " s are up" : "over "
                 + String.format(java.util.Locale.ROOT, "%,d", Budget.STEPS_PER_STATEMENT) + " evaluation steps")
                 + "); look for a formula that does repeated work");
-            return new Row.CheckRow(c.span(), source, null, "not evaluated: stopped, see the finding", c.note());
+            return Row.CheckRow.unjudged(c.span(), source, Row.Verdict.STOPPED, c.note());
         }
     }
 
@@ -57,13 +57,13 @@ final class CheckRunner {
             // Never skipped in silence: a check that cannot be judged is a finding of its own.
             reporter.report(Code.CHECK_NOT_EVALUATED, c.span(), "this check is not evaluated, so it neither passes nor fails: "
                 + missing(c, evaluator) + "; fix that, and the check runs");
-            return new Row.CheckRow(c.span(), source, null, "not evaluated: a value it needs is unknown", c.note());
+            return Row.CheckRow.unjudged(c.span(), source, Row.Verdict.VALUE_UNKNOWN, c.note());
         }
         for (int i = 1; i < values.size(); i++) {
             if (!values.get(i).dimension().equals(values.get(0).dimension())) {
                 reporter.report(Code.UNIT_MISMATCH, c.span(), "this check compares " + values.get(0).dimension().describe()
                     + " with " + values.get(i).dimension().describe() + ": both sides need the same dimension");
-                return new Row.CheckRow(c.span(), source, null, "not evaluated: the sides differ in dimension", c.note());
+                return Row.CheckRow.unjudged(c.span(), source, Row.Verdict.DIMENSIONS_DIFFER, c.note());
             }
         }
         for (int i = 1; i < values.size(); i++) {
@@ -71,8 +71,7 @@ final class CheckRunner {
                 reporter.report(Code.UNIT_MISMATCH, c.span(), "this check compares a temperature point (a reading in °C or °F)"
                     + " with a temperature difference: write the limit as the same kind, e.g. a difference in K (`5 K`)"
                     + " or a point in °C (`40 degC`)");
-                return new Row.CheckRow(c.span(), source, null, "not evaluated: a point is compared with a difference",
-                    c.note());
+                return Row.CheckRow.unjudged(c.span(), source, Row.Verdict.POINT_AND_DIFFERENCE, c.note());
             }
         }
         Unit unit = commonUnit(c.operands(), values.get(0), evaluator);
@@ -87,15 +86,12 @@ final class CheckRunner {
                     + side(c.operands().get(i + 1), values.get(i + 1), unit, apart));
             }
         }
-        StringBuilder shownValues = new StringBuilder();
-        for (int i = 0; i < values.size(); i++) {
-            if (i > 0) shownValues.append(" ").append(c.comparators().get(i - 1).symbol()).append(" ");
-            shownValues.append(Shown.value(values.get(i), unit, digits));
+        if (!failures.isEmpty()) {
+            String why = c.note() == null ? "" : " (" + c.note() + ")";
+            reporter.report(Code.CHECK_FAILED, c.span(), "check failed: " + String.join("; ", failures) + why);
         }
-        if (failures.isEmpty()) return new Row.CheckRow(c.span(), source, true, shownValues.toString(), c.note());
-        String why = c.note() == null ? "" : " (" + c.note() + ")";
-        reporter.report(Code.CHECK_FAILED, c.span(), "check failed: " + String.join("; ", failures) + why);
-        return new Row.CheckRow(c.span(), source, false, shownValues.toString(), c.note());
+        return new Row.CheckRow(c.span(), source, failures.isEmpty() ? Row.Verdict.PASSED : Row.Verdict.FAILED, values,
+            c.comparators(), unit, digits, c.note());
     }
 
     /** Which values the check lacks, by name where a name has no value. */

@@ -47,15 +47,16 @@ final class CorrelationCall {
         Set<String> names = params.keySet();
         String outside = outsideDomain(c, name, def.domain(), inside, b.scope().text(), names);
         if (outside != null) {
-            reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args), outside, null));
+            reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args), Analysis.Standing.OUTSIDE_DOMAIN,
+                List.of(outside), StdlibCatalog.validText(b), null));
             return Value.UNKNOWN;
         }
-        List<String> verdicts = new ArrayList<>();
+        List<String> breaches = new ArrayList<>();
         for (Statement.Bound bound : def.valid()) {
             String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
             if (why != null) {
                 advice.outside(c, name + " is " + why, advice.alternatives(b, args));
-                verdicts.add("outside: " + why);
+                breaches.add(why);
             }
         }
         String range = StdlibCatalog.validText(b);
@@ -64,12 +65,13 @@ final class CorrelationCall {
         String flow = def.flow() == null ? null : def.flow().text();
         // Findings inside the formula go to the correlation's own reporter; none applying is the call's.
         Pieces.Chosen chosen = new Pieces(inside, inner, b.scope().text()).choose(def.pieces(), why -> reporter.report(
-            Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + arguments(def, args)
+            Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + argumentWords(def, args)
                 + ": every `when` condition is false; add a last line `= … otherwise` to " + name));
         Statement.Piece piece = chosen.piece();
-        reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args),
-            !verdicts.isEmpty() ? String.join("; ", verdicts) : range.isEmpty() ? "no stated range"
-                : "inside its range, " + range, piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
+        Analysis.Standing standing = !breaches.isEmpty() ? Analysis.Standing.OUTSIDE
+            : range.isEmpty() ? Analysis.Standing.NO_RANGE : Analysis.Standing.INSIDE;
+        reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args), standing, breaches, range,
+            piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
         return noted(chosen.value(), basis, flow, name);
     }
 
@@ -90,8 +92,9 @@ final class CorrelationCall {
             reporter.inCorrelation(t.name(), c.span(), t.file()), t.scope().text(), units, caller.budget());
         String outside = outsideDomain(c, t.name(), def.domain(), inside, t.scope().text(), params.keySet());
         if (outside != null) {
-            reporter.call(new Analysis.CallSite(c.callee().span(), t.name(), param + " = "
-                + Shown.value(x, data.argumentUnit, 4), outside, null));
+            reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
+                List.of(new Analysis.Argument(param, x, data.argumentUnit)), Analysis.Standing.OUTSIDE_DOMAIN,
+                List.of(outside), StdlibCatalog.validText(t), null));
             return Value.UNKNOWN;
         }
         if (!data.covers(x.si())) {
@@ -110,9 +113,9 @@ final class CorrelationCall {
             if (why != null) advice.outside(c, t.name() + " is " + why, advice.alternatives(t, args));
         }
         reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
-            param + " = " + Shown.value(x, data.argumentUnit, 4), data.covers(x.si())
-                ? "inside the table, " + StdlibCatalog.validText(t) : "beyond the table's rows (extrapolated), "
-                + StdlibCatalog.validText(t), null));
+            List.of(new Analysis.Argument(param, x, data.argumentUnit)),
+            data.covers(x.si()) ? Analysis.Standing.TABLE_INSIDE : Analysis.Standing.TABLE_BEYOND, List.of(),
+            StdlibCatalog.validText(t), null));
         double v = data.at(x.si());
         if (Double.isNaN(v)) {
             reporter.report(Code.MATH_DOMAIN, c.span(), t.name() + " interpolates log–log, so it needs a positive "
@@ -207,7 +210,14 @@ final class CorrelationCall {
     }
 
 
-    private static String arguments(Statement.Correlation def, List<Value> args) {
+    private static List<Analysis.Argument> arguments(Statement.Correlation def, List<Value> args) {
+        List<Analysis.Argument> out = new ArrayList<>();
+        for (int i = 0; i < args.size(); i++) out.add(new Analysis.Argument(def.params().get(i).name().text(), args.get(i), null));
+        return out;
+    }
+
+    /** "Re = 3e5, k = 0.1" for a message. */
+    private static String argumentWords(Statement.Correlation def, List<Value> args) {
         List<String> parts = new ArrayList<>();
         for (int i = 0; i < args.size(); i++) parts.add(def.params().get(i).name().text() + " = " + Shown.value(args.get(i)));
         return String.join(", ", parts);

@@ -26,20 +26,17 @@ final class EvaluationPass {
     private final Scope scope;
     private final String text;
     private final Reporter reporter;
-    private final Settings settings;
     private final UnitRegistry units;
     private final Budget budget;
     /** Set once the run's time is up: what is left is not evaluated (one finding said so). */
     private boolean outOfTime;
     private final Map<Statement, Row> rows = new IdentityHashMap<>();
 
-    EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, Settings settings, UnitRegistry units,
-                   Budget budget) {
+    EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, UnitRegistry units, Budget budget) {
         this.plan = plan;
         this.scope = scope;
         this.text = text;
         this.reporter = reporter;
-        this.settings = settings;
         this.units = units;
         this.budget = budget;
     }
@@ -88,7 +85,7 @@ final class EvaluationPass {
         Ident name = DeclarationPass.definedName(s);
         if (name == null) return null;
         rows.put(s, new Row.ValueRow(s.span(), name.text(), s instanceof Statement.Definition d && d.input(), Value.UNKNOWN,
-            "?", null, null, null, null, null, s));
+            null, null, null, null, null, s));
         return s instanceof Statement.Definition || s instanceof Statement.Seek || s instanceof Statement.Broken
             ? new Binding.ValueBinding(plan.definitions().bare(Value.UNKNOWN).file(), name.span(), Value.UNKNOWN, null, null,
                 false, null)
@@ -99,7 +96,7 @@ final class EvaluationPass {
     private Binding.ValueBinding evaluate(Statement s, Environment env, boolean inCycle) {
         Definitions definitions = plan.definitions();
         if (s instanceof Statement.Broken b) {
-            rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, "?", null,
+            rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, null,
                 null, null, null, null, s));
             return b.name() == null ? null : new Binding.ValueBinding(definitions.bare(Value.UNKNOWN).file(),
                 b.name().span(), Value.UNKNOWN, null, null, false, null);
@@ -124,8 +121,7 @@ final class EvaluationPass {
         if (s instanceof Statement.Seek f) return seek(f, env, inCycle);
         if (!(s instanceof Statement.Definition d)) return null;
         Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle, budget);
-        String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
-        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), shown, bound.basis(), d.note(),
+        rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), bound.basis(), d.note(),
             bound.origin(), null, bound.display(), s));
         return bound;
     }
@@ -133,13 +129,12 @@ final class EvaluationPass {
     private Binding.ValueBinding seek(Statement.Seek f, Environment env, boolean inCycle) {
         String name = f.name().text();
         if (inCycle || plan.own().get(name) != f) {
-            rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, "?", null, f.note(), null, null, null, f));
+            rows.put(f, new Row.ValueRow(f.span(), name, false, Value.UNKNOWN, null, f.note(), null, null, null, f));
             return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
         }
         SeekRunner.Outcome outcome = new SeekRunner(plan, scope, env, reporter, text, units, budget).run(f);
         Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter, budget);
-        String shown = Shown.value(bound.value(), bound.display(), settings.significantFigures());
-        rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), shown, bound.basis(), f.note(), null,
+        rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), bound.basis(), f.note(), null,
             outcome.solution(), bound.display(), f));
         return bound;
     }

@@ -13,12 +13,12 @@ public sealed interface Row {
     }
 
     /**
-     * A defined value. {@code shown} is the value in its display unit ("1.204 kg/m³"), "?" when
-     * it could not be computed; {@code display} is that unit (null when unknown), and
-     * {@code statement} the statement that defines it (a definition, a solve statement, or a
-     * broken line), whose spans say where its formula and its `in` unit are written.
+     * A defined value. {@code display} is the unit it is shown in (null when unknown: the layers
+     * that show values then use SI), and {@code statement} the statement that defines it (a
+     * definition, a solve statement, or a broken line), whose spans say where its formula and its
+     * `in` unit are written. The engine does not word it: the layers that show things do.
      */
-    record ValueRow(Span span, String name, boolean input, Value value, String shown, String basis, String note,
+    record ValueRow(Span span, String name, boolean input, Value value, String basis, String note,
                     Origin origin, Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement)
         implements Row {
 
@@ -49,7 +49,41 @@ public sealed interface Row {
     record FunctionRow(Span span, String signature, Callable kind, String note) implements Row {
     }
 
-    /** A check; {@code passed} is null when it could not be evaluated. */
-    record CheckRow(Span span, String source, Boolean passed, String detail, String note) implements Row {
+    /**
+     * A check. {@code source} is its comparison as written (shortened); {@code values} the value of
+     * each side, in order, with the {@code comparators} between them, to be shown in {@code unit}
+     * to {@code digits} significant figures (enough that a failing pair does not read the same).
+     * Values and unit are empty/null when the check was not judged.
+     */
+    record CheckRow(Span span, String source, Verdict verdict, java.util.List<Value> values,
+                    java.util.List<dev.plumb.syntax.Comparator> comparators, dev.plumb.units.Unit unit, int digits,
+                    String note) implements Row {
+        public CheckRow {
+            values = java.util.List.copyOf(values);
+            comparators = java.util.List.copyOf(comparators);
+        }
+
+        /** A check that was not judged, for the given reason. */
+        static CheckRow unjudged(Span span, String source, Verdict why, String note) {
+            return new CheckRow(span, source, why, java.util.List.of(), java.util.List.of(), null, 0, note);
+        }
+
+        /** True passed, false failed, null not evaluated. */
+        public Boolean passed() {
+            return verdict == Verdict.PASSED ? Boolean.TRUE : verdict == Verdict.FAILED ? Boolean.FALSE : null;
+        }
+    }
+
+    /** A check's outcome; every verdict but the first two means it was not evaluated, and why. */
+    enum Verdict {
+        PASSED, FAILED,
+        /** Stopped by the run's budget. */
+        STOPPED,
+        /** A value it needs is unknown. */
+        VALUE_UNKNOWN,
+        /** Its sides differ in dimension. */
+        DIMENSIONS_DIFFER,
+        /** A temperature point is compared with a temperature difference. */
+        POINT_AND_DIFFERENCE
     }
 }

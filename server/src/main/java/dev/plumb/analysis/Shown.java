@@ -4,7 +4,7 @@ import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.QuantityFormat;
 import dev.plumb.units.Unit;
 
-/** How values read in results and messages. */
+/** How values and source text read in the engine's messages (results are worded by the layers that show them). */
 final class Shown {
     private Shown() {
     }
@@ -15,11 +15,8 @@ final class Shown {
      */
     static String value(Value v, Unit unit, int sig) {
         if (!v.known()) return "?";
-        Unit u = unit == null ? DisplayUnits.defaultFor(v.dimension()) : unit;
-        if (u.isOffsetScale() && v.difference()) {
-            u = new Unit(u.symbol(), u.factor(), 0, u.dimension(), false);
-        }
-        return QuantityFormat.format(v.si(), u, sig);
+        return QuantityFormat.format(v.si(), unit == null ? DisplayUnits.defaultFor(v.dimension()) : unit, sig,
+            v.difference());
     }
 
     /** The Celsius scale, to show temperature points in messages. */

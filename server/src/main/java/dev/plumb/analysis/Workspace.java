@@ -193,6 +193,6 @@ public final class Workspace {
     private static Analysis failure(Path file, String text, Code code, String message, int offset) {
         Diagnostic d = Diagnostic.of(code, new Span(offset, offset), message);
         return new Analysis(file, text, ParsedSource.unread(text), Map.of(), List.of(), List.of(d), new Scope(text), Map.of(),
-            List.of(), List.of(), List.of());
+            List.of(), List.of(), List.of(), Settings.DEFAULT, DefinitionGraph.empty(file));
     }
 }

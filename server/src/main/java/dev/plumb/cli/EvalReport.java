@@ -1,5 +1,8 @@
 package dev.plumb.cli;
 
+import dev.plumb.present.ValueText;
+import dev.plumb.present.CheckText;
+import dev.plumb.present.CallText;
 import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
@@ -29,7 +32,7 @@ final class EvalReport {
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v) {
                 nameWidth = Math.max(nameWidth, v.name().codePointCount(0, v.name().length()));
-                valueWidth = Math.max(valueWidth, width(v.shown()));
+                valueWidth = Math.max(valueWidth, width(ValueText.of(a, v)));
             }
         }
         for (Row r : a.rows()) {
@@ -42,7 +45,7 @@ final class EvalReport {
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
-                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(v.shown(), valueWidth) + basis + solved(v)
+                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v), valueWidth) + basis + solved(v)
                     + note).stripTrailing());
                 if (steps && v.solution() != null) writeSteps(out, v.solution(), v);
             } else if (r instanceof Row.FunctionRow f) {
@@ -50,7 +53,7 @@ final class EvalReport {
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();
-                out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + c.detail() + "]" + why));
+                out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]" + why));
             }
         }
     }
@@ -88,7 +91,7 @@ final class EvalReport {
     private static String used(Analysis a, Row.ValueRow v) {
         List<String> parts = new ArrayList<>();
         for (Analysis.CallSite c : a.callsIn(v.span())) {
-            if (c.used() != null) parts.add(c.used() + " at " + c.arguments());
+            if (c.used() != null) parts.add(c.used() + " at " + CallText.arguments(c));
         }
         return parts.isEmpty() ? "" : "  [used: " + String.join("; ", parts) + "]";
     }

@@ -1,5 +1,7 @@
 package dev.plumb.cli;
 
+import dev.plumb.present.ValueText;
+import dev.plumb.present.CheckText;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
@@ -36,7 +38,7 @@ final class ValueExport {
                     o.addProperty("siUnit", DisplayUnits.defaultFor(v.value().dimension()).symbol());
                     o.addProperty("dimension", v.value().dimension().describe());
                 }
-                o.addProperty("shown", v.shown());
+                o.addProperty("shown", ValueText.of(a, v));
                 Unit display = v.display();
                 if (display != null) o.addProperty("unit", display.symbol());
                 if (v.note() != null) o.addProperty("note", v.note());
@@ -46,8 +48,8 @@ final class ValueExport {
                 JsonObject o = new JsonObject();
                 o.addProperty("check", c.source());
                 o.addProperty("line", a.lines().line(c.span().start()));
-                o.addProperty("verdict", c.passed() == null ? "not evaluated" : c.passed() ? "pass" : "fail");
-                o.addProperty("detail", c.detail());
+                o.addProperty("verdict", CheckText.word(c));
+                o.addProperty("detail", CheckText.detail(c));
                 if (c.note() != null) o.addProperty("note", c.note());
                 checks.add(o);
             }
@@ -69,7 +71,7 @@ final class ValueExport {
             String[] cells = {
                 v.name(), String.valueOf(a.lines().line(v.span().start())), String.valueOf(v.input()),
                 known ? String.valueOf(v.value().si()) : "", known ? DisplayUnits.defaultFor(v.value().dimension()).symbol() : "",
-                v.shown(), v.display() == null ? "" : v.display().symbol(), known ? v.value().dimension().describe() : "",
+                ValueText.of(a, v), v.display() == null ? "" : v.display().symbol(), known ? v.value().dimension().describe() : "",
                 v.note() == null ? "" : v.note()};
             StringBuilder line = new StringBuilder();
             for (int i = 0; i < cells.length; i++) {

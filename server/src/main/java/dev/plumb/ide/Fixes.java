@@ -71,7 +71,7 @@ public final class Fixes {
     private static Action showInSi(Analysis a, Row.ValueRow v) {
         if (!v.value().known() || v.value().dimension().isDimensionless()) return null;
         String si = DisplayUnits.defaultFor(v.value().dimension()).symbol();
-        if (v.shown().endsWith(" " + si)) return null;
+        if (v.display() == null || v.display().symbol().equals(si)) return null;
         return showIn(a, v, si, "Show " + v.name() + " in SI (" + si + ")");
     }
 

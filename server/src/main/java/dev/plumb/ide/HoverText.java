@@ -1,5 +1,7 @@
 package dev.plumb.ide;
 
+import dev.plumb.present.ValueText;
+import dev.plumb.present.CallText;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
 import dev.plumb.analysis.Row;
@@ -34,7 +36,7 @@ public final class HoverText {
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
         Analysis.CallSite call = a.callAt(offset);
-        String here = call == null ? "" : "\n\nat this call: " + call.arguments() + " — " + call.verdict()
+        String here = call == null ? "" : "\n\nat this call: " + CallText.arguments(call) + " — " + CallText.standing(call)
             + (call.used() == null ? "" : "\n\nused here: " + call.used());
         if (b instanceof Binding.CorrelationBinding c) return correlation(c) + here;
         if (b instanceof Binding.TableBinding t) return table(t) + here;
@@ -51,7 +53,7 @@ public final class HoverText {
         StringBuilder out = new StringBuilder("**" + name + "**");
         if (!v.known()) return out.append(" — not computed (see the problems reported)").toString();
         Row.ValueRow row = rowOf(a, name, b);
-        out.append(" = ").append(row != null ? row.shown() : QuantityFormat.format(v.si(),
+        out.append(" = ").append(row != null ? ValueText.of(a, row) : QuantityFormat.format(v.si(),
             b.display() != null ? b.display() : DisplayUnits.defaultFor(v.dimension()), 4));
         out.append("\n\n").append(v.dimension().isDimensionless() ? "a dimensionless number"
             : v.dimension().describe() + "; in SI " + QuantityFormat.format(v.si(), DisplayUnits.defaultFor(v.dimension()), 6));

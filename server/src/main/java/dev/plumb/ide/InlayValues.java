@@ -1,5 +1,7 @@
 package dev.plumb.ide;
 
+import dev.plumb.present.ValueText;
+import dev.plumb.present.CheckText;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import java.util.ArrayList;
@@ -15,9 +17,9 @@ public final class InlayValues {
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v && !v.input()) {
                 String solved = v.solution() == null ? "" : "  (solved, " + v.solution().iterations() + " iterations)";
-                out.add(new InlayValue(v.span().end(), "= " + v.shown() + solved, v.name()));
+                out.add(new InlayValue(v.span().end(), "= " + ValueText.of(a, v) + solved, v.name()));
             } else if (r instanceof Row.CheckRow c) {
-                String mark = c.passed() == null ? "? not evaluated" : c.passed() ? "✓ " + c.detail() : "✗ " + c.detail();
+                String mark = c.passed() == null ? "? not evaluated" : CheckText.mark(c) + " " + CheckText.detail(c);
                 out.add(new InlayValue(c.span().end(), mark, "check"));
             }
         }

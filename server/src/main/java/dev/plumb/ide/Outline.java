@@ -1,5 +1,7 @@
 package dev.plumb.ide;
 
+import dev.plumb.present.ValueText;
+import dev.plumb.present.CheckText;
 import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
@@ -47,7 +49,7 @@ public final class Outline {
 
     private static Symbol symbol(Analysis a, Row r) {
         if (r instanceof Row.ValueRow v) {
-            return new Symbol(v.name(), v.input() ? Symbol.Kind.INPUT : Symbol.Kind.VALUE, v.shown(), v.span(), nameSpan(a, v.name(), v.span()),
+            return new Symbol(v.name(), v.input() ? Symbol.Kind.INPUT : Symbol.Kind.VALUE, ValueText.of(a, v), v.span(), nameSpan(a, v.name(), v.span()),
                 List.of());
         }
         if (r instanceof Row.FunctionRow f) {
@@ -57,7 +59,7 @@ public final class Outline {
                 List.of());
         }
         if (r instanceof Row.CheckRow c) {
-            String mark = c.passed() == null ? "?" : c.passed() ? "✓" : "✗";
+            String mark = CheckText.mark(c);
             return new Symbol(Printable.line("check " + c.source()), Symbol.Kind.CHECK, mark, c.span(), c.span(), List.of());
         }
         return null;

@@ -31,6 +31,17 @@ public final class QuantityFormat {
         return sitsTight(symbol) ? number + symbol : number + " " + symbol;
     }
 
+    /**
+     * As {@link #format(double, Unit, int)}; a temperature difference ({@code difference}) on an
+     * offset scale (°C, °F) is written without the offset: a rise of 5 K reads "5 °C", not "-268 °C".
+     */
+    public static String format(double si, Unit unit, int sig, boolean difference) {
+        if (difference && unit.isOffsetScale()) {
+            unit = new Unit(unit.symbol(), unit.factor(), 0, unit.dimension(), false);
+        }
+        return format(si, unit, sig);
+    }
+
     /** Percent and the angle degree follow the number without a space; other symbols do not. */
     private static boolean sitsTight(String symbol) {
         return symbol.equals("%") || symbol.equals("°");

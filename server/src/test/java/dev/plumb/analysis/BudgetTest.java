@@ -27,7 +27,7 @@ class BudgetTest {
         Fixture.checkResource("limit.budget.plumb");
         Analysis a = Fixture.analyze(doubling(60) + "y = f60(1)\nz = 2 m\ncheck z < 3 m\n");
         assertEquals(List.of("limit.budget"), a.diagnostics().stream().map(d -> d.code().id()).toList());
-        assertEquals("?", Fixture.value(a, "y").shown());
+        assertEquals("?", Fixture.shown(a, "y"));
         // by hand: z = 2 m < 3 m, evaluated after the cut
         assertEquals(2.0, Fixture.value(a, "z").value().si(), 0);
     }

@@ -21,7 +21,7 @@ class CheckDiagnosticsTest {
         Row.CheckRow row = a.rows().stream().filter(r -> r instanceof Row.CheckRow).map(r -> (Row.CheckRow) r)
             .findFirst().orElseThrow();
         assertEquals(false, row.passed());
-        assertEquals("1.00002 m == 1 m", row.detail());
+        assertEquals("1.00002 m == 1 m", dev.plumb.present.CheckText.detail(row));
     }
 
     @Test
@@ -48,7 +48,7 @@ class CheckDiagnosticsTest {
         Row.CheckRow c = a.rows().stream().filter(r -> r instanceof Row.CheckRow).map(r -> (Row.CheckRow) r).findFirst()
             .orElseThrow();
         assertEquals(null, c.passed());
-        assertEquals("not evaluated: a value it needs is unknown", c.detail());
+        assertEquals("not evaluated: a value it needs is unknown", dev.plumb.present.CheckText.detail(c));
     }
 
     private static List<Boolean> passed(Analysis a) {

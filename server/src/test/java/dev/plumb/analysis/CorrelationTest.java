@@ -118,7 +118,7 @@ class CorrelationTest {
             """);
         assertEquals(999, si(a, "r"), 1e-9);
         assertEquals(1.15e-3, si(a, "m"), 1e-12);
-        assertEquals("999 kg/m³", Fixture.value(a, "r").shown());
+        assertEquals("999 kg/m³", Fixture.shown(a, "r"));
         assertEquals(List.of(Code.UNIT_MISMATCH), codes(a));
     }
 

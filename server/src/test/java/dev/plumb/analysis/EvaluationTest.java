@@ -82,7 +82,7 @@ class EvaluationTest {
         // ICAO standard atmosphere, sea level: 1.225 kg/m³ at 15 °C and 101.325 kPa
         // (ICAO Doc 7488/3, Manual of the ICAO Standard Atmosphere, 1993; from memory).
         assertEquals(1.225, si(a, "ρ"), 1.225 * 1e-4);
-        assertEquals("1.225 kg/m³", value(a, "ρ").shown());
+        assertEquals("1.225 kg/m³", Fixture.shown(a, "ρ"));
     }
 
     @Test
@@ -97,21 +97,21 @@ class EvaluationTest {
         // NIST SP 811 (2008), Appendix B: mile = 1609.344 m and hour = 3600 s exactly, so
         // 60 mph = 60 × 1609.344 / 3600 m/s = 26.8224 m/s exactly (from memory).
         assertEquals(26.8224, si(a, "v"), 1e-12);
-        assertEquals("26.82 m/s", value(a, "v").shown());
-        assertEquals("96.56 km/h", value(a, "v_k").shown());
+        assertEquals("26.82 m/s", Fixture.shown(a, "v"));
+        assertEquals("96.56 km/h", Fixture.shown(a, "v_k"));
         // NIST SP 811 (2008), Appendix B: inch = 0.0254 m and foot = 0.3048 m exactly (from memory).
         assertEquals(0.127, si(a, "d"), 1e-15);
-        assertEquals("5 in", value(a, "d").shown());
-        assertEquals("127 mm", value(a, "d_mm").shown());
+        assertEquals("5 in", Fixture.shown(a, "d"));
+        assertEquals("127 mm", Fixture.shown(a, "d_mm"));
         assertEquals(2 * 0.3048 + 6 * 0.0254, si(a, "L"), 1e-15);
-        assertEquals("762 mm", value(a, "L").shown());
+        assertEquals("762 mm", Fixture.shown(a, "L"));
     }
 
     @Test
     void moreSignificantFiguresOnRequest() {
         Analysis a = new Workspace(new FileSources(), new Settings(6, 1e-6))
             .analyzeText(Fixture.FILE, "v = 60 mph in m/s\n");
-        assertEquals("26.8224 m/s", value(a, "v").shown());
+        assertEquals("26.8224 m/s", Fixture.shown(a, "v"));
     }
 
     @Test
@@ -148,12 +148,12 @@ class EvaluationTest {
         // 30 °C − 10 °C is a difference of 20 K, not a point on a scale.
         assertEquals(20.0, si(a, "ΔT"), 1e-9);
         assertTrue(value(a, "ΔT").value().difference());
-        assertEquals("20 K", value(a, "ΔT").shown());
-        assertEquals("20 °C", value(a, "T_c").shown());
+        assertEquals("20 K", Fixture.shown(a, "ΔT"));
+        assertEquals("20 °C", Fixture.shown(a, "T_c"));
         // t/°C = (t/°F − 32) / 1.8, so 50 °F = 10 °C = 283.15 K (NIST SP 811 (2008), Appendix B; from memory).
         assertEquals(283.15, si(a, "T_f"), 1e-9);
-        assertEquals("50 °F", value(a, "T_f").shown());
-        assertEquals("283.2 K", value(a, "T_fk").shown());
+        assertEquals("50 °F", Fixture.shown(a, "T_f"));
+        assertEquals("283.2 K", Fixture.shown(a, "T_fk"));
     }
 
     @Test
@@ -163,8 +163,8 @@ class EvaluationTest {
             T_2 = 300 K in degC
             """);
         // T/K = t/°C + 273.15 (SI Brochure, 9th ed., 2019; from memory).
-        assertEquals("15 °C", value(a, "T").shown());
-        assertEquals("26.85 °C", value(a, "T_2").shown());
+        assertEquals("15 °C", Fixture.shown(a, "T"));
+        assertEquals("26.85 °C", Fixture.shown(a, "T_2"));
     }
 
     @Test
@@ -205,7 +205,7 @@ class EvaluationTest {
             #<^^^^^^^^^^^^^^ check.failed: check failed: 3 is not < x = 2; x = 2 is not < 1
             """);
         assertEquals(List.of(true, true, false, false), passed(a));
-        assertEquals("1 < 2 < 3", ((Row.CheckRow) a.rows().get(2)).detail());
+        assertEquals("1 < 2 < 3", dev.plumb.present.CheckText.detail(((Row.CheckRow) a.rows().get(2))));
     }
 
     @Test
@@ -221,7 +221,7 @@ class EvaluationTest {
         assertEquals(61.25, si(a, "q_10"), 1e-12);
         // F = c·A·q = 1.2 × 2 × 61.25 = 147 N, by hand.
         assertEquals(147.0, si(a, "F_10"), 1e-12);
-        assertEquals("0.147 kN", value(a, "F_10").shown());
+        assertEquals("0.147 kN", Fixture.shown(a, "F_10"));
     }
 
     @Test
@@ -248,10 +248,10 @@ class EvaluationTest {
             A = 3 m²
             q = p / 1000
             """);
-        assertEquals("101.3 kPa", value(a, "p").shown());
-        assertEquals("1.81e-5 Pa·s", value(a, "μ").shown());
-        assertEquals("3 m²", value(a, "A").shown());
-        assertEquals("101.3 Pa", value(a, "q").shown());
+        assertEquals("101.3 kPa", Fixture.shown(a, "p"));
+        assertEquals("1.81e-5 Pa·s", Fixture.shown(a, "μ"));
+        assertEquals("3 m²", Fixture.shown(a, "A"));
+        assertEquals("101.3 Pa", Fixture.shown(a, "q"));
     }
 
     private static List<Boolean> passed(Analysis a) {

@@ -139,6 +139,11 @@ final class Fixture {
             .orElseThrow(() -> new AssertionError("no value row " + name));
     }
 
+    /** The value as people read it (its display unit, the analysis's significant figures). */
+    static String shown(Analysis a, String name) {
+        return dev.plumb.present.ValueText.of(a, value(a, name));
+    }
+
     static String resource(String name) {
         String path = "/diagnostics/" + name;
         try (InputStream in = Fixture.class.getResourceAsStream(path)) {

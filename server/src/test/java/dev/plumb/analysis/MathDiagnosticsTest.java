@@ -12,7 +12,7 @@ class MathDiagnosticsTest {
     void divisionByZeroNamesTheDivisor() {
         Analysis a = Fixture.checkResource("math.division-by-zero.plumb");
         assertFalse(Fixture.value(a, "V").value().known());
-        assertEquals("?", Fixture.value(a, "V").shown());
+        assertEquals("?", Fixture.shown(a, "V"));
     }
 
     @Test
@@ -25,7 +25,7 @@ class MathDiagnosticsTest {
         Analysis a = Fixture.checkResource("math.domain.library.plumb");
         for (String name : new String[] {"a", "F", "c", "g", "Cd", "A", "Re", "F_sphere"}) {
             assertFalse(Fixture.value(a, name).value().known(), name);
-            assertEquals("?", Fixture.value(a, name).shown(), name);
+            assertEquals("?", Fixture.shown(a, name), name);
         }
         // Outside `valid` but inside `domain`: warned, and still computed. By hand: 1.32 - 0.11 *
         // log10(8e5 / 2e4) = 1.32 - 0.11 * 1.60206 = 1.14377.

@@ -42,7 +42,7 @@ class PiecewiseTest {
         assertEquals(List.of(), codes(a));
         // by hand: 3 m/s × 4 s = 12 m; before zero the first piece gives 0 m
         assertEquals(0, Fixture.value(a, "d_before").value().si(), 0);
-        assertEquals("12 m", Fixture.value(a, "d_after").shown());
+        assertEquals("12 m", Fixture.shown(a, "d_after"));
     }
 
     @Test
@@ -74,7 +74,7 @@ class PiecewiseTest {
             k = k_bad(3)
             """);
         assertEquals(List.of(Code.UNIT_MISMATCH), codes(a));
-        assertEquals("?", Fixture.value(a, "k").shown());
+        assertEquals("?", Fixture.shown(a, "k"));
     }
 
     @Test

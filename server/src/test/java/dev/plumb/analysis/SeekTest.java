@@ -117,7 +117,7 @@ class SeekTest {
             """);
         assertEquals(List.of(), codes(a));
         // by hand: x² = 4 m² and y³ = 8 m³ give x = y = 2 m, x shown in mm
-        assertEquals("2000 mm", Fixture.value(a, "x").shown());
+        assertEquals("2000 mm", Fixture.shown(a, "x"));
         assertEquals(2, Fixture.value(a, "y").value().si(), 1e-12);
     }
 
@@ -126,7 +126,7 @@ class SeekTest {
         Analysis a = Fixture.analyze("seek h from 1 m where h^3 = 8 m^3\n");
         assertEquals(List.of(), codes(a));
         assertEquals(2, Fixture.value(a, "h").value().si(), 1e-12);
-        assertEquals("2 m", Fixture.value(a, "h").shown());
+        assertEquals("2 m", Fixture.shown(a, "h"));
     }
 
     @Test

@@ -30,7 +30,7 @@ class TemperatureTest {
         Analysis a = analyze("input T = -5 degC\nx = T + 10 K in degC\n");
         assertEquals(List.of(), codes(a));
         assertEquals(268.15, Fixture.value(a, "T").value().si(), 1e-9);
-        assertEquals("5 °C", Fixture.value(a, "x").shown());
+        assertEquals("5 °C", Fixture.shown(a, "x"));
     }
 
     @Test
@@ -38,7 +38,7 @@ class TemperatureTest {
         Analysis a = analyze("input T1 = 20 degC\ninput T2 = 25 degC\nd = T2 - T1\ne = d in degC\n");
         assertEquals(List.of(), codes(a));
         assertEquals(5.0, Fixture.value(a, "d").value().si(), 1e-12);
-        assertEquals("5 °C", Fixture.value(a, "e").shown(), "a difference shown in °C has no offset");
+        assertEquals("5 °C", Fixture.shown(a, "e"), "a difference shown in °C has no offset");
     }
 
     @Test
@@ -56,8 +56,8 @@ class TemperatureTest {
         Analysis a = analyze("input T = 288.15 K\nshown = T in degC\ninput t = 15 degC\nu = t + 5 K in degC\n"
             + "check T == t\ncheck u > 300 K - 10 K\n");
         assertEquals(List.of(), codes(a));
-        assertEquals("15 °C", Fixture.value(a, "shown").shown());
-        assertEquals("20 °C", Fixture.value(a, "u").shown());
+        assertEquals("15 °C", Fixture.shown(a, "shown"));
+        assertEquals("20 °C", Fixture.shown(a, "u"));
     }
 
     @Test
@@ -71,7 +71,7 @@ class TemperatureTest {
         // 68 °F = 20 °C = 293.15 K, by the definition t/°F = 1.8 t/°C + 32.
         Analysis a = analyze("input T = 68 degF\nc = T in degC\n");
         assertEquals(293.15, Fixture.value(a, "T").value().si(), 1e-9);
-        assertEquals("20 °C", Fixture.value(a, "c").shown());
+        assertEquals("20 °C", Fixture.shown(a, "c"));
     }
 
     @Test
