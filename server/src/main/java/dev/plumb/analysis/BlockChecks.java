@@ -166,7 +166,7 @@ final class BlockChecks {
 
     private static Double accuracyOf(Expr accuracy, Scope scope, UnitRegistry units) {
         if (accuracy == null) return null;
-        Value v = new Evaluator(scope, Map.of(), new Reporter(), scope.text(), units).eval(accuracy);
+        Value v = new Evaluator(scope, Map.of(), Reporter.discarding(), scope.text(), units).eval(accuracy);
         return v.known() && v.dimensionless() ? v.si() : null;
     }
 }

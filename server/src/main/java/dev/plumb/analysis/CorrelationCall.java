@@ -51,16 +51,18 @@ final class CorrelationCall {
                 List.of(outside), StdlibCatalog.validText(b), null));
             return Value.UNKNOWN;
         }
+        // Range and regime are judged only where the findings are kept: a solve's trials skip the words and the search for alternatives.
         List<String> breaches = new ArrayList<>();
-        for (Statement.Bound bound : def.valid()) {
-            String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
-            if (why != null) {
-                advice.outside(c, name + " is " + why, advice.alternatives(b, args));
-                breaches.add(why);
+        if (reporter.keepsRanges()) {
+            for (Statement.Bound bound : def.valid()) {
+                String why = RangeCheck.violation(bound, inside, b.scope().text(), names);
+                if (why != null) {
+                    advice.outside(c, name + " is " + why, advice.alternatives(b, args));
+                    breaches.add(why);
+                }
             }
+            advice.regime(c, b, params, args);
         }
-        String range = StdlibCatalog.validText(b);
-        advice.regime(c, b, params, args);
         String basis = def.basis() == null ? null : def.basis().text();
         String flow = def.flow() == null ? null : def.flow().text();
         // Findings inside the formula go to the correlation's own reporter; none applying is the call's.
@@ -68,11 +70,17 @@ final class CorrelationCall {
             Code.RANGE_NO_FORMULA, c.span(), "no formula of " + name + " applies at " + argumentWords(def, args)
                 + ": every `when` condition is false; add a last line `= … otherwise` to " + name));
         Statement.Piece piece = chosen.piece();
+        if (reporter.keeps()) callSite(c, b, def, args, breaches, piece);
+        return noted(chosen.value(), basis, flow, name);
+    }
+
+    private void callSite(Expr.Call c, Binding.CorrelationBinding b, Statement.Correlation def, List<Value> args,
+                          List<String> breaches, Statement.Piece piece) {
+        String range = StdlibCatalog.validText(b);
         Analysis.Standing standing = !breaches.isEmpty() ? Analysis.Standing.OUTSIDE
             : range.isEmpty() ? Analysis.Standing.NO_RANGE : Analysis.Standing.INSIDE;
-        reporter.call(new Analysis.CallSite(c.callee().span(), name, arguments(def, args), standing, breaches, range,
-            piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
-        return noted(chosen.value(), basis, flow, name);
+        reporter.call(new Analysis.CallSite(c.callee().span(), def.name().text(), arguments(def, args), standing, breaches,
+            range, piece == null ? null : PieceUsed.describe(def, piece, b.scope())));
     }
 
     Value table(Expr.Call c, Binding.TableBinding t, List<Value> args) {
@@ -97,7 +105,7 @@ final class CorrelationCall {
                 List.of(outside), StdlibCatalog.validText(t), null));
             return Value.UNKNOWN;
         }
-        if (!data.covers(x.si())) {
+        if (!data.covers(x.si()) && reporter.keepsRanges()) {
             String lo = Shown.value(Value.of(data.first(), data.argument), data.argumentUnit, 4);
             String hi = Shown.value(Value.of(data.last(), data.argument), data.argumentUnit, 4);
             boolean above = x.si() > data.last();
@@ -108,11 +116,11 @@ final class CorrelationCall {
                 + "; the value is extrapolated with the slope of the " + (above ? "last" : "first") + " two rows",
                 advice.alternatives(t, args));
         }
-        for (Statement.Bound bound : def.valid()) {
+        for (Statement.Bound bound : reporter.keepsRanges() ? def.valid() : List.<Statement.Bound>of()) {
             String why = RangeCheck.violation(bound, inside, t.scope().text(), params.keySet());
             if (why != null) advice.outside(c, t.name() + " is " + why, advice.alternatives(t, args));
         }
-        reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
+        if (reporter.keeps()) reporter.call(new Analysis.CallSite(c.callee().span(), t.name(),
             List.of(new Analysis.Argument(param, x, data.argumentUnit)),
             data.covers(x.si()) ? Analysis.Standing.TABLE_INSIDE : Analysis.Standing.TABLE_BEYOND, List.of(),
             StdlibCatalog.validText(t), null));

@@ -72,7 +72,7 @@ final class Evaluator {
 
     /** The same evaluation, reporting nothing: to learn what a formula gives without judging it. */
     Evaluator quiet() {
-        return new Evaluator(scope, env, locals, new Reporter(), text, units, budget);
+        return new Evaluator(scope, env, locals, Reporter.discarding(), text, units, budget);
     }
 
     /** What a name stands for here: an own definition's value from the environment, else the scope's binding. */

@@ -137,7 +137,7 @@ final class RangeAdvice {
             Dimension wanted = p.dimension() == null ? null : ParameterDimensions.of(p.dimension().text());
             if (wanted != null && !wanted.equals(args.get(i).dimension())) return false;
         }
-        Evaluator silent = new Evaluator(other.scope(), Environment.NONE, RangeCheck.bind(params, args), new Reporter(),
+        Evaluator silent = new Evaluator(other.scope(), Environment.NONE, RangeCheck.bind(params, args), Reporter.discarding(),
             other.scope().text(), units, caller.budget());
         return RangeCheck.within(other.def().valid(), silent);
     }
@@ -146,7 +146,7 @@ final class RangeAdvice {
         if (args.size() != 1 || !args.get(0).dimension().equals(other.data().argument)) return false;
         if (!other.data().covers(args.get(0).si())) return false;
         Evaluator silent = new Evaluator(other.scope(), Environment.NONE, Map.of(other.def().param().name().text(),
-            args.get(0)), new Reporter(), other.scope().text(), units, caller.budget());
+            args.get(0)), Reporter.discarding(), other.scope().text(), units, caller.budget());
         return RangeCheck.within(other.def().valid(), silent);
     }
 }

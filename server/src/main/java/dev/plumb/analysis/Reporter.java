@@ -16,6 +16,11 @@ import java.util.Set;
  * Collects the diagnostics of one document. Inside a call of a user function, findings in the
  * function's body are reported at the outermost call (the place the reviewer is looking at),
  * with the body as related location.
+ *
+ * <p>A {@link #discarding()} reporter is the sink of evaluations whose findings nobody keeps (a
+ * solve's trials, a quiet look at another piece or fit): it drops every finding, and callers ask
+ * {@link #keeps()} before doing work that only a finding's words or repairs need, so repeated
+ * runs stay cheap.
  */
 final class Reporter {
     private final Set<Diagnostic> diagnostics;
@@ -30,6 +35,8 @@ final class Reporter {
      * handed on inside (cd_cone's half_angle to the table of its rows): the outer call warns it.
      */
     private final boolean quietRanges;
+    /** Drops everything: see {@link #discarding()}. */
+    private final boolean discards;
 
     /** Correlation calls written in the document itself (not inside functions), for hover. */
     private final List<Analysis.CallSite> calls;
@@ -37,12 +44,29 @@ final class Reporter {
     private final java.util.Map<Diagnostic, List<FixRequest>> requests;
 
     Reporter() {
-        this(new LinkedHashSet<>(), new ArrayList<>(), new java.util.IdentityHashMap<>(), null, null, null, null, false);
+        this(new LinkedHashSet<>(), new ArrayList<>(), new java.util.IdentityHashMap<>(), null, null, null, null, false,
+            false);
+    }
+
+    /** A sink that keeps nothing; see the class comment. */
+    static Reporter discarding() {
+        return new Reporter(Set.of(), List.of(), java.util.Map.of(), null, null, null, null, false, true);
+    }
+
+    /** False for a {@link #discarding()} reporter: whatever is reported here is dropped unread. */
+    boolean keeps() {
+        return !discards;
+    }
+
+    /** False where range and regime warnings are dropped (discarding, or inside a correlation's formula). */
+    boolean keepsRanges() {
+        return !discards && !quietRanges;
     }
 
     private Reporter(Set<Diagnostic> diagnostics, List<Analysis.CallSite> calls,
                      java.util.Map<Diagnostic, List<FixRequest>> requests, Reporter caller, String function,
-                     Span callSpan, Path file, boolean quietRanges) {
+                     Span callSpan, Path file, boolean quietRanges, boolean discards) {
+        this.discards = discards;
         this.diagnostics = diagnostics;
         this.calls = calls;
         this.requests = requests;
@@ -68,6 +92,7 @@ final class Reporter {
 
     private void report(Code code, Severity severity, Span span, String message, List<Fix> fixes,
                         List<FixRequest> later) {
+        if (discards) return;
         if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME || code == Code.UNIT_BARE_ANGLE)) {
             return;
         }
@@ -101,22 +126,22 @@ final class Reporter {
     }
 
     void add(Diagnostic d) {
-        diagnostics.add(d);
+        if (!discards) diagnostics.add(d);
     }
 
     /** A reporter for evaluating the body of {@code function} called at {@code at}. */
     Reporter inCall(String function, Span at, Path definingFile) {
-        return new Reporter(diagnostics, calls, requests, this, function, at, definingFile, quietRanges);
+        return new Reporter(diagnostics, calls, requests, this, function, at, definingFile, quietRanges, discards);
     }
 
     /** As {@link #inCall}, for a correlation's formula: nested range warnings stay quiet. */
     Reporter inCorrelation(String correlation, Span at, Path definingFile) {
-        return new Reporter(diagnostics, calls, requests, this, correlation, at, definingFile, true);
+        return new Reporter(diagnostics, calls, requests, this, correlation, at, definingFile, true, discards);
     }
 
     /** Records a correlation call made at document level. */
     void call(Analysis.CallSite site) {
-        if (caller == null && !quietRanges) calls.add(site);
+        if (caller == null && !quietRanges && !discards) calls.add(site);
     }
 
     List<Analysis.CallSite> calls() {

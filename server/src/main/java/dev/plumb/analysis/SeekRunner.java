@@ -87,7 +87,7 @@ final class SeekRunner {
         int before = reporter.size();
         // Unsolved, the definitions that depend on NAME are never evaluated at a value: what went
         // wrong in them is reported here, at their own lines, once.
-        Value[] sides = finalSides(name, dim, at, dependents, f, solved ? new Reporter() : reporter);
+        Value[] sides = finalSides(name, dim, at, dependents, f, solved ? Reporter.discarding() : reporter);
         if (sides == null || result.status() == RootFinder.Status.NO_VALUE) {
             // A mistake in the statement itself is reported there; one elsewhere that the
             // equation reaches is named here too, so the unsolved value is never a mystery.
@@ -135,7 +135,7 @@ final class SeekRunner {
     private DoubleUnaryOperator residual(String name, Dimension dim, List<Statement.Definition> dependents,
                                          Statement.Seek f) {
         return x -> {
-            Value[] sides = evaluateAt(name, Value.of(x, dim), dependents, new Reporter(), f);
+            Value[] sides = evaluateAt(name, Value.of(x, dim), dependents, Reporter.discarding(), f);
             if (sides == null || !sides[0].dimension().equals(sides[1].dimension())) return Double.NaN;
             return sides[0].si() - sides[1].si();
         };

@@ -111,7 +111,8 @@ class LanguageServerTest {
         String text = "input L = 2 m\nx = L + 2 s\n";
         String uri = uri("b.plumb", text);
         client.open(uri, text);
-        assertEquals(1, client.diagnostics(uri, 1).getDiagnostics().size());
+        assertEquals(List.of("unit.mismatch"), client.diagnostics(uri, 1).getDiagnostics().stream()
+            .map(d -> d.getCode().getLeft()).toList());
         TextDocumentContentChangeEvent fix = new TextDocumentContentChangeEvent(
             new Range(new Position(1, 10), new Position(1, 11)), "m");
         client.remote.getTextDocumentService().didChange(new DidChangeTextDocumentParams(
@@ -203,7 +204,7 @@ class LanguageServerTest {
         client.open(uri, text);
         var symbols = client.remote.getTextDocumentService().documentSymbol(new DocumentSymbolParams(
             new TextDocumentIdentifier(uri))).get(10, TimeUnit.SECONDS);
-        assertEquals(2, symbols.size());
+        assertEquals(List.of("Air", "Drag"), symbols.stream().map(x -> x.getRight().getName()).toList());
         var drag = symbols.get(1).getRight();
         assertEquals("Drag", drag.getName());
         assertEquals(List.of("q", "check q < 1 kPa"), drag.getChildren().stream().map(s -> s.getName()).toList());
@@ -245,7 +246,9 @@ class LanguageServerTest {
         client.open(uri, text);
         var report = client.remote.getTextDocumentService().diagnostic(new DocumentDiagnosticParams(
             new TextDocumentIdentifier(uri))).get(10, TimeUnit.SECONDS);
-        assertEquals(1, report.getLeft().getItems().size());
+        var pulled = report.getLeft().getItems();
+        assertEquals(List.of("unit.mismatch"), pulled.stream().map(d -> d.getCode().getLeft()).toList());
+        assertEquals(new Range(new Position(0, 4), new Position(0, 13)), pulled.get(0).getRange());
     }
 
     @Test
