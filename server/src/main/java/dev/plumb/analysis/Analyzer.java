@@ -67,6 +67,8 @@ final class Analyzer {
             if (s instanceof Statement.Check c) checkRows.put(c, checks.withinBudget(c));
         }
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
+        UnitNameClash.report(statements, name -> declared.own().containsKey(name)
+            ? evaluated.values().get(name) : null, scope, units, reporter);
 
         // The document's own values join its names: what hover, completion and importing files read.
         for (String name : plan.order()) {

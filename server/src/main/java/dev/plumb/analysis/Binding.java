@@ -13,9 +13,12 @@ public sealed interface Binding {
     /** Where it is defined (NONE for built-ins). */
     Span span();
 
-    /** A value: an input, a derived value or a built-in constant; origin is set for a correlation's result. */
-    record ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input, Origin origin)
-        implements Binding {
+    /**
+     * A value: an input, a derived value or a built-in constant; origin is set for a correlation's
+     * result, note to its source note (null for none), so files that use it can show where it comes from.
+     */
+    record ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input, Origin origin,
+                        String note) implements Binding {
     }
 
     /** A correlation, with the scope of the file that defines it. */

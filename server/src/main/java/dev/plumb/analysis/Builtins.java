@@ -41,7 +41,7 @@ final class Builtins {
     }
 
     private static void constant(Map<String, Binding> all, String name, double si, Dimension d) {
-        all.put(name, new Binding.ValueBinding(null, Span.NONE, Value.of(si, d), DisplayUnits.defaultFor(d), null, false, null));
+        all.put(name, new Binding.ValueBinding(null, Span.NONE, Value.of(si, d), DisplayUnits.defaultFor(d), null, false, null, null));
     }
 
     private static void function(Map<String, Binding> all, String name, int min, int max, String signature) {

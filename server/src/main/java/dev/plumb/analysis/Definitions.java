@@ -39,7 +39,7 @@ final class Definitions {
         Unit display = displayUnit(d, v, evaluator, reporter);
         Tagged tagged = tagged(d.name(), d.basis(), v, reporter);
         Origin origin = BlockChecks.origin(d.expr(), scope, units);
-        return new Binding.ValueBinding(file, d.name().span(), tagged.value(), display, tagged.tag(), d.input(), origin);
+        return new Binding.ValueBinding(file, d.name().span(), tagged.value(), display, tagged.tag(), d.input(), origin, d.note());
     }
 
     /** A solved value's binding: shown in its `in` unit, else in the unit of the bracket's (or start value's) number. */
@@ -47,12 +47,12 @@ final class Definitions {
         Evaluator evaluator = new Evaluator(scope, env, java.util.Map.of(), reporter, text, units, budget);
         Unit display = v.known() ? displayUnit(s, v, evaluator, reporter) : null;
         Tagged tagged = tagged(s.name(), s.basis(), v, reporter);
-        return new Binding.ValueBinding(file, s.name().span(), tagged.value(), display, tagged.tag(), false, null);
+        return new Binding.ValueBinding(file, s.name().span(), tagged.value(), display, tagged.tag(), false, null, s.note());
     }
 
     /** A binding for a value with nothing to show it by (a trial value, an unknown). */
     Binding.ValueBinding bare(Value v) {
-        return new Binding.ValueBinding(file, Span.NONE, v, null, null, false, null);
+        return new Binding.ValueBinding(file, Span.NONE, v, null, null, false, null, null);
     }
 
     /** A value with the tag its `as` gave it; the tag is null when there is none or it was refused. */
@@ -125,6 +125,7 @@ final class Definitions {
             return u;
         }
         Unit written = v.known() ? DisplayChoice.written(d.expr(), units) : null;
+        if (written == null && v.known()) written = DisplayChoice.pointScale(d.expr(), v, evaluator::lookup);
         return written != null ? written : fallback;
     }
 }

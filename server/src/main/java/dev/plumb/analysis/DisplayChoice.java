@@ -40,6 +40,23 @@ final class DisplayChoice {
         return writtenOrSi(s.low() != null ? s.low() : s.start(), dimension, units);
     }
 
+    /**
+     * For a temperature point computed from others (`T_in + 5 K`), the offset scale (°C, °F) of
+     * the first point it uses that is shown on one, so it reads like what it was made from; null
+     * for anything else.
+     */
+    static Unit pointScale(Expr e, Value v, java.util.function.Function<String, Binding> lookup) {
+        if (!v.dimension().equals(Dimension.TEMPERATURE) || v.difference()) return null;
+        Unit[] found = new Unit[1];
+        References.each(e, (name, span) -> {
+            if (found[0] == null && lookup.apply(name) instanceof Binding.ValueBinding b && b.display() != null
+                && b.display().isOffsetScale() && b.value().known() && !b.value().difference()) {
+                found[0] = b.display();
+            }
+        });
+        return found[0];
+    }
+
     /** The written unit of {@code e} when it has the dimension, else the SI unit of the dimension. */
     static Unit writtenOrSi(Expr e, Dimension dimension, UnitRegistry units) {
         Unit u = e == null ? null : written(e, units);

@@ -88,7 +88,7 @@ final class EvaluationPass {
             null, null, null, null, null, s));
         return s instanceof Statement.Definition || s instanceof Statement.Seek || s instanceof Statement.Broken
             ? new Binding.ValueBinding(plan.definitions().bare(Value.UNKNOWN).file(), name.span(), Value.UNKNOWN, null, null,
-                false, null)
+                false, null, null)
             : null;
     }
 
@@ -99,7 +99,7 @@ final class EvaluationPass {
             rows.put(s, new Row.ValueRow(b.span(), b.name() == null ? "?" : b.name().text(), false, Value.UNKNOWN, null,
                 null, null, null, null, s));
             return b.name() == null ? null : new Binding.ValueBinding(definitions.bare(Value.UNKNOWN).file(),
-                b.name().span(), Value.UNKNOWN, null, null, false, null);
+                b.name().span(), Value.UNKNOWN, null, null, false, null, null);
         }
         if (s instanceof Statement.Function f) {
             String signature = f.name().text() + "(" + String.join(", ", f.params().stream().map(Ident::text).toList()) + ")";

@@ -3,6 +3,7 @@ package dev.plumb.cli;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
 import dev.plumb.present.CallText;
+import dev.plumb.present.UsedValues;
 import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
@@ -27,15 +28,36 @@ final class EvalReport {
             String v = a.headers().get(key);
             if (v != null && !v.isEmpty()) out.println(key + ": " + Printable.line(v));
         }
+        List<Used> used = usedValues(a);
         int nameWidth = 0;
         int valueWidth = 0;
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v) {
-                nameWidth = Math.max(nameWidth, v.name().codePointCount(0, v.name().length()));
+                nameWidth = Math.max(nameWidth, width(v.name()));
                 valueWidth = Math.max(valueWidth, width(ValueText.of(a, v)));
             }
         }
+        for (Used u : used) {
+            nameWidth = Math.max(nameWidth, width(u.name()));
+            valueWidth = Math.max(valueWidth, width(u.shown()));
+        }
+        boolean usedShown = used.isEmpty();
         for (Row r : a.rows()) {
+            // The values that come from used files, after the calc's opening prose: they are its inputs too.
+            if (!usedShown && !(r instanceof Row.NarrativeRow)) {
+                usedShown = true;
+                out.println();
+                out.println(style.bold("From used files"));
+                for (Used u : used) {
+                    out.println(Printable.line("  " + pad(u.name(), nameWidth) + " = " + pad(u.shown(), valueWidth) + "  ("
+                        + u.file() + ")" + (u.note() == null ? "" : "  " + u.note())).stripTrailing());
+                }
+                // Without a section of its own next, the calc's values would read as the used files'.
+                if (!(r instanceof Row.SectionRow)) {
+                    out.println();
+                    out.println(style.bold("In this calc"));
+                }
+            }
             if (r instanceof Row.SectionRow s) {
                 out.println();
                 out.println(style.bold(Printable.line(s.title())));
@@ -94,6 +116,15 @@ final class EvalReport {
             if (c.used() != null) parts.add(c.used() + " at " + CallText.arguments(c));
         }
         return parts.isEmpty() ? "" : "  [used: " + String.join("; ", parts) + "]";
+    }
+
+    /** A value of a used file that this calc uses, as eval shows it. */
+    private record Used(String name, String shown, String file, String note) {
+    }
+
+    private static List<Used> usedValues(Analysis a) {
+        return UsedValues.of(a).stream().map(u -> new Used(u.name(), ValueText.of(u.binding().value(), u.binding().display(),
+            a.settings().significantFigures()), UsedValues.relative(a, u.file()), u.binding().note())).toList();
     }
 
     private static int width(String s) {

@@ -1,5 +1,6 @@
 package dev.plumb.cli;
 
+import dev.plumb.present.UsedValues;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
 import com.google.gson.GsonBuilder;
@@ -55,6 +56,23 @@ final class ValueExport {
             }
         }
         root.add("values", values);
+        JsonArray used = new JsonArray();
+        for (UsedValues.Used u : UsedValues.of(a)) {
+            JsonObject o = new JsonObject();
+            o.addProperty("name", u.name());
+            o.addProperty("file", UsedValues.relative(a, u.file()));
+            o.addProperty("input", u.binding().input());
+            if (u.binding().value().known()) {
+                o.addProperty("valueSi", u.binding().value().si());
+                o.addProperty("siUnit", DisplayUnits.defaultFor(u.binding().value().dimension()).symbol());
+                o.addProperty("dimension", u.binding().value().dimension().describe());
+            }
+            o.addProperty("shown", ValueText.of(u.binding().value(), u.binding().display(), a.settings().significantFigures()));
+            if (u.binding().display() != null) o.addProperty("unit", u.binding().display().symbol());
+            if (u.binding().note() != null) o.addProperty("note", u.binding().note());
+            used.add(o);
+        }
+        root.add("usedValues", used);
         root.add("checks", checks);
         JsonArray findings = new JsonArray();
         for (Diagnostic d : diagnostics) findings.add(JsonReport.diagnostic(a, d));

@@ -17,6 +17,7 @@ public enum Code {
     UNIT_TEMPERATURE_SUM("unit.temperature-sum", Severity.ERROR),
     UNIT_BARE_ANGLE("unit.bare-angle", Severity.WARNING),
     UNIT_HAND_CONVERSION("unit.hand-conversion", Severity.WARNING),
+    UNIT_ALSO_A_NAME("unit.also-a-name", Severity.HINT),
     NAME_UNKNOWN("name.unknown", Severity.ERROR),
     NAME_DUPLICATE("name.duplicate", Severity.ERROR),
     NAME_CYCLE("name.cycle", Severity.ERROR),

@@ -67,6 +67,18 @@ class TemperatureTest {
     }
 
     @Test
+    void aPointMadeFromAPointReadsOnItsScale() {
+        // 20 °C + 5 K = 25 °C (a point plus a difference is a point, common practice); a
+        // difference of two points stays a difference, in K.
+        Analysis a = analyze("input T1 = 20 degC\ninput rise = 5 K\nT2 = T1 + rise\nd = T2 - T1\n"
+            + "input T_f = 50 degF\nT_g = T_f + rise\n");
+        assertEquals("25 °C", Fixture.shown(a, "T2"));
+        assertEquals("5 K", Fixture.shown(a, "d"));
+        // 50 °F + 5 K = 50 °F + 9 °F = 59 °F.
+        assertEquals("59 °F", Fixture.shown(a, "T_g"));
+    }
+
+    @Test
     void fahrenheitPointsConvert() {
         // 68 °F = 20 °C = 293.15 K, by the definition t/°F = 1.8 t/°C + 32.
         Analysis a = analyze("input T = 68 degF\nc = T in degC\n");

@@ -45,6 +45,23 @@ class ValueExportTest {
     }
 
     @Test
+    void valuesFromUsedFilesAreListedWithTheirFilesAndNotes() throws IOException {
+        java.nio.file.Files.createDirectories(dir.resolve(".git"));
+        Cli.write(dir, "site.plumb", "input V_site = 31 m/s   \"site gust, wind brief\"\ninput unused_here = 2 m\n");
+        Path calc = Cli.write(dir, "calc.plumb", "use \"site.plumb\"\nq = 0.5 * 1.2 kg/m^3 * V_site^2\n");
+        Cli text = Cli.run("eval", "--no-color", calc.toString());
+        assertTrue(text.out().contains("From used files\n  V_site = 31 m/s    (site.plumb)  site gust, wind brief\n\n"
+            + "In this calc\n  q      = 576.6 Pa\n"), text.out());
+        assertTrue(!text.out().contains("unused_here"), "only the values the calc uses");
+        JsonObject root = JsonParser.parseString(Cli.run("eval", "--format", "json", calc.toString()).out()).getAsJsonObject();
+        JsonObject used = root.getAsJsonArray("usedValues").get(0).getAsJsonObject();
+        assertEquals("V_site", used.get("name").getAsString());
+        assertEquals("site.plumb", used.get("file").getAsString());
+        assertEquals(31, used.get("valueSi").getAsDouble(), 0);
+        assertEquals("site gust, wind brief", used.get("note").getAsString());
+    }
+
+    @Test
     void stepsShowEveryTrialInTheUnitTheRootIsShownIn() throws IOException {
         // by hand: v · 2 s = 3 m gives v = 1.5 m/s = 1500 mm/s
         Path calc = Cli.write(dir, "steps.plumb", "seek v in 1 mm/s .. 10 m/s where v * 2 s = 3 m\n");
