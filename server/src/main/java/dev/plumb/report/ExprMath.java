@@ -99,8 +99,8 @@ final class ExprMath {
                 String op = b.op() == Expr.Op.ADD ? "+" : "−";
                 yield new Fragment(MathElements.row(left.markup(), MathElements.mo(op), right.markup()), Fragment.SUM, left.signed());
             }
-            case MULTIPLY -> product(of(b.left(), script), "⋅", of(b.right(), script), Fragment.SCALED);
-            case DIVIDE -> script ? product(of(b.left(), true), "/", of(b.right(), true), Fragment.POWER) : fraction(b);
+            case MULTIPLY -> product(of(b.left(), script), of(b.right(), script));
+            case DIVIDE -> script ? inlineQuotient(of(b.left(), true), of(b.right(), true)) : fraction(b);
             case POWER -> {
                 Fragment base = of(b.left(), script).bracketedBelow(Fragment.ATOM, false);
                 yield new Fragment(MathElements.sup(base.markup(), laidOut(b.right(), true)), Fragment.POWER, false);
@@ -109,11 +109,19 @@ final class ExprMath {
         };
     }
 
-    /** {@code left op right} on the line; the right operand must bind at least as tightly as {@code rightLeast}. */
-    private static Fragment product(Fragment l, String op, Fragment r, int rightLeast) {
+    /** {@code left ⋅ right}; a value with a unit may stand on the right without brackets. */
+    private static Fragment product(Fragment l, Fragment r) {
         Fragment left = l.bracketedBelow(Fragment.PRODUCT, true);
-        Fragment right = r.bracketedBelow(rightLeast, false);
-        return new Fragment(MathElements.row(left.markup(), MathElements.mo(op), right.markup()), Fragment.PRODUCT, left.signed());
+        Fragment right = r.bracketedBelow(Fragment.SCALED, false);
+        return new Fragment(MathElements.row(left.markup(), MathElements.mo("⋅"), right.markup()), Fragment.PRODUCT, left.signed());
+    }
+
+    /** {@code a/b} on the line, for an exponent: the solidus sits close, as in a printed exponent. */
+    private static Fragment inlineQuotient(Fragment l, Fragment r) {
+        Fragment left = l.bracketedBelow(Fragment.PRODUCT, true);
+        Fragment right = r.bracketedBelow(Fragment.POWER, false);
+        String markup = MathElements.row(left.markup(), MathElements.mo("/", "0", "0"), right.markup());
+        return new Fragment(markup, Fragment.PRODUCT, left.signed());
     }
 
     /** A division, with a chain of divisions to its left gathered into one denominator. */
@@ -129,7 +137,7 @@ final class ExprMath {
             below = laidOut(denominators.get(0), false);
         } else {
             Fragment product = of(denominators.get(0), false);
-            for (int i = 1; i < denominators.size(); i++) product = product(product, "⋅", of(denominators.get(i), false), Fragment.SCALED);
+            for (int i = 1; i < denominators.size(); i++) product = product(product, of(denominators.get(i), false));
             below = product.markup();
         }
         return new Fragment(MathElements.frac(laidOut(numerator, false), below), Fragment.POWER, false);
@@ -144,11 +152,16 @@ final class ExprMath {
             String when = piece.condition() == null ? MathElements.mtext("otherwise")
                 : MathElements.row(MathElements.mtext("when"), MathElements.space("0.5"),
                     comparison(piece.condition().operands(), piece.condition().comparators()));
-            rows.append("<mtr><mtd>").append(of(piece.expr(), script).markup()).append("</mtd><mtd>").append(when)
-                .append("</mtd></mtr>");
+            rows.append("<mtr>").append(cell(of(piece.expr(), script).markup())).append(cell(when)).append("</mtr>");
         }
-        String table = "<mtable columnalign=\"left left\">" + rows + "</mtable>";
+        // Display style: a fraction in a piece is as large as one outside the brace.
+        String table = "<mtable displaystyle=\"true\" columnalign=\"left left\">" + rows + "</mtable>";
         return Fragment.atom(MathElements.row(MathElements.mo("{"), table));
+    }
+
+    /** A table cell set flush left; the style does it where the column attribute is not read. */
+    private static String cell(String content) {
+        return "<mtd style=\"text-align: left\">" + content + "</mtd>";
     }
 
     private static String symbol(Comparator c) {

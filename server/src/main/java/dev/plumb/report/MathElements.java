@@ -76,8 +76,18 @@ final class MathElements {
         return "<msqrt>" + radicand + "</msqrt>";
     }
 
-    /** Content between a pair of brackets that grow with what they hold. */
+    /**
+     * Content between a pair of brackets. They grow only round tall content (a fraction, a root,
+     * a table): round a line of text, brackets stretched to it stand apart from it and push an
+     * exponent away, so there they keep the font's size.
+     */
     static String fenced(String open, String content, String close) {
-        return row(mo(open), content, mo(close));
+        if (isTall(content)) return row(mo(open), content, mo(close));
+        return row(fixedFence(open), content, fixedFence(close));
+    }
+
+    /** Whether markup holds something taller than a line. Text is always escaped, so only our own elements match. */
+    static boolean isTall(String markup) {
+        return markup.contains("<mfrac") || markup.contains("<msqrt") || markup.contains("<mtable");
     }
 }

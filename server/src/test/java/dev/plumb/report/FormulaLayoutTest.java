@@ -62,6 +62,18 @@ class FormulaLayoutTest {
     }
 
     @Test
+    void bracketsGrowOnlyRoundTallContent() {
+        List<Element> flat = all(Written.formula("x = 2 * (a + b_c)^2"), "mo").stream()
+            .filter(mo -> mo.getTextContent().matches("[()]")).toList();
+        assertEquals(2, flat.size());
+        for (Element mo : flat) assertEquals("false", mo.getAttribute("stretchy"), "round a line of text they keep their size");
+        List<Element> tall = all(Written.formula("x = 2 * (a / b)"), "mo").stream()
+            .filter(mo -> mo.getTextContent().matches("[()]")).toList();
+        assertEquals(2, tall.size());
+        for (Element mo : tall) assertEquals("", mo.getAttribute("stretchy"), "round a fraction they grow with it");
+    }
+
+    @Test
     void sqrtIsARootSignAndAHalfPowerStaysAPower() {
         Element math = Written.formula("Fn = V_tow / sqrt(g_n * L_wl)");
         Element root = only(math, "msqrt");
@@ -125,6 +137,7 @@ class FormulaLayoutTest {
         Element math = MathDom.parse(Written.MATH.formula(d.expr(), ValueSource.none()));
         Element brace = children(children(math).get(0)).get(0);
         assertEquals("{", brace.getTextContent());
+        assertEquals("true", only(math, "mtable").getAttribute("displaystyle"), "fractions in a piece at full size");
         List<Element> rows = all(math, "mtr");
         assertEquals(2, rows.size());
         assertEquals("when Re ≤ 5 × 10 5", reading(children(rows.get(0)).get(1)));
