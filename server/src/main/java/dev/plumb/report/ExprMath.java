@@ -53,7 +53,8 @@ final class ExprMath {
         if (e instanceof Expr.Call c) return call(c, script);
         if (e instanceof Expr.Unary u) return unary(u, script);
         if (e instanceof Expr.Binary b) return binary(b, script);
-        return piecewise((Expr.Piecewise) e, script);
+        if (e instanceof Expr.Piecewise p) return piecewise(p, script);
+        throw new IllegalArgumentException("an expression kind the typesetter does not know: " + e.getClass().getSimpleName());
     }
 
     /** Where the layout itself groups (a numerator, an exponent), without the user's brackets. */

@@ -129,6 +129,7 @@ class FormulaLayoutTest {
         assertEquals("a − ( − b )", reading(Written.formula("y = a - -b")));
         assertEquals("a ⋅ ( − b )", reading(Written.formula("y = a * -b")));
         assertEquals("− a ⋅ b", reading(Written.formula("y = -a * b")));
+        assertEquals("+ x", reading(Written.formula("y = +x")), "a plus sign written before a value is kept");
     }
 
     @Test
