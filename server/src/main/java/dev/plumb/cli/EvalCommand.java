@@ -1,5 +1,6 @@
 package dev.plumb.cli;
 
+import dev.plumb.present.Caution;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Batch;
 import dev.plumb.analysis.Workspace;

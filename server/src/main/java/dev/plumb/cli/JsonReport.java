@@ -1,5 +1,6 @@
 package dev.plumb.cli;
 
+import dev.plumb.present.Caution;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;

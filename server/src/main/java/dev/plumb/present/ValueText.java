@@ -17,6 +17,18 @@ public final class ValueText {
         return of(row.value(), row.display(), a.settings().significantFigures());
     }
 
+    /** A value split for typesetting: the number and the unit symbol ("" for a plain number). */
+    public record Parts(String number, String unit) {
+    }
+
+    /** As {@link #of(Value, Unit, int)}, in parts; the number is "?" when the value is unknown. */
+    public static Parts parts(Value v, Unit unit, int sig) {
+        if (!v.known()) return new Parts("?", unit == null ? "" : unit.symbol());
+        Unit u = unit == null ? DisplayUnits.defaultFor(v.dimension()) : unit;
+        double number = v.difference() && u.isOffsetScale() ? v.si() / u.factor() : u.fromSi(v.si());
+        return new Parts(QuantityFormat.number(number, sig), u.symbol());
+    }
+
     /**
      * The value in {@code unit} (SI when null). On an offset scale (°C, °F) a temperature
      * difference reads as a difference, without the offset.

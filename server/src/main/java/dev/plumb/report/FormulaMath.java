@@ -81,6 +81,21 @@ public final class FormulaMath {
         return MathElements.math(quantityMarkup(value));
     }
 
+    /** A value alone, inline (a table cell, a line of text). */
+    public String inlineQuantity(ShownValue value) {
+        return MathElements.inline(quantityMarkup(value));
+    }
+
+    /** A formula in symbols, inline (a bracket's ends). */
+    public String inlineFormula(Expr expr) {
+        return MathElements.inline(new ExprMath(units, ValueSource.none()).of(expr).markup());
+    }
+
+    /** A name as a symbol, inline: `F_D` as F with subscript D, `rho` as ρ. */
+    public String symbol(String name) {
+        return MathElements.inline(SymbolMath.of(name));
+    }
+
     private String quantityMarkup(ShownValue value) {
         return units.quantity(NumberMath.of(value.number()), value.unit()).markup();
     }

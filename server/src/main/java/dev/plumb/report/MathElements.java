@@ -20,6 +20,11 @@ final class MathElements {
         return "<math xmlns=\"" + NAMESPACE + "\" display=\"block\">" + content + "</math>";
     }
 
+    /** An inline formula, set within a line of text or a table cell. */
+    static String inline(String content) {
+        return "<math xmlns=\"" + NAMESPACE + "\">" + content + "</math>";
+    }
+
     static String row(String... content) {
         return "<mrow>" + String.join("", content) + "</mrow>";
     }

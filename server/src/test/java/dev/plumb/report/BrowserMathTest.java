@@ -29,17 +29,17 @@ import org.junit.jupiter.api.Test;
  * test. Without the variable (a developer's machine) the test is skipped instead.
  */
 class BrowserMathTest {
-    private static final Path OUT = Path.of("target/report-math");
+    private static final Path OUT = HeadlessChromium.OUT;
     private static final Pattern MEASURE = Pattern.compile("(\\w+)=(-?[\\d.]+)");
 
     @Test
     void aBrowserLaysOutTheFormulas() throws Exception {
-        String chromium = chromium();
+        String chromium = HeadlessChromium.chromium();
         Files.createDirectories(OUT);
         Path page = OUT.resolve("formulas.html").toAbsolutePath();
         Files.writeString(page, FormulaPage.html(), StandardCharsets.UTF_8);
 
-        Map<String, Double> m = measurements(run(chromium, "--dump-dom", page.toUri().toString()));
+        Map<String, Double> m = measurements(HeadlessChromium.run(chromium, "--dump-dom", page.toUri().toString()));
         assertTrue(m.get("fraction") > m.get("numerator") + m.get("denominator"),
             "a fraction stands taller than its numerator and denominator together: " + m);
         assertTrue(m.get("root") > m.get("radicand") && m.get("rootWidth") > m.get("radicandWidth"),
@@ -48,7 +48,7 @@ class BrowserMathTest {
 
         Path png = OUT.resolve("formulas.png").toAbsolutePath();
         Files.deleteIfExists(png);
-        run(chromium, "--screenshot=" + png, "--window-size=1000,1100", page.toUri().toString());
+        HeadlessChromium.run(chromium, "--screenshot=" + png, "--window-size=1000,1100", page.toUri().toString());
         byte[] head = Arrays.copyOf(Files.readAllBytes(png), 8);
         assertArrayEquals(new byte[] {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1A, '\n'}, head, "a PNG at " + png);
     }
@@ -67,54 +67,4 @@ class BrowserMathTest {
         return out;
     }
 
-    /** Runs headless Chromium on our own page; returns what it printed. */
-    private static String run(String chromium, String... args) throws IOException, InterruptedException {
-        Path profile = Files.createTempDirectory("plumb-chromium");
-        Path log = OUT.resolve("chromium.log");
-        List<String> command = new ArrayList<>(List.of(chromium, "--headless", "--disable-gpu",
-            // CI runs as root, where Chromium starts only without its sandbox; the page is our own file.
-            "--no-sandbox", "--user-data-dir=" + profile, "--no-first-run"));
-        command.addAll(Arrays.asList(args));
-        Process p = new ProcessBuilder(command).redirectError(log.toFile()).start();
-        try {
-            p.getOutputStream().close();
-            String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-            if (!p.waitFor(120, TimeUnit.SECONDS) || p.exitValue() != 0) {
-                fail("chromium failed (" + String.join(" ", command) + "); its messages are in " + log.toAbsolutePath());
-            }
-            return out;
-        } finally {
-            p.descendants().forEach(ProcessHandle::destroyForcibly);
-            p.destroyForcibly();
-            deleteTree(profile);
-        }
-    }
-
-    /**
-     * $PLUMB_CHROMIUM, else chromium or chromium-browser on the PATH. None: fail when
-     * PLUMB_REQUIRE_CHROMIUM is set, else skip.
-     */
-    private static String chromium() {
-        String chosen = System.getenv("PLUMB_CHROMIUM");
-        if (chosen != null && !chosen.isBlank() && Files.isExecutable(Path.of(chosen))) return chosen;
-        String path = System.getenv("PATH") == null ? "" : System.getenv("PATH");
-        for (String dir : path.split(File.pathSeparator)) {
-            for (String name : List.of("chromium", "chromium-browser")) {
-                Path candidate = Path.of(dir.isEmpty() ? "." : dir, name);
-                if (Files.isExecutable(candidate)) return candidate.toString();
-            }
-        }
-        String message = "no chromium on the PATH: install Debian's chromium (apt-get install chromium), or point"
-            + " PLUMB_CHROMIUM at a Chromium";
-        String required = System.getenv("PLUMB_REQUIRE_CHROMIUM");
-        if (required != null && !required.isBlank()) fail(message + ". PLUMB_REQUIRE_CHROMIUM is set, so this check may not be skipped");
-        Assumptions.abort(message + "; skipped here since PLUMB_REQUIRE_CHROMIUM is not set");
-        return null;
-    }
-
-    private static void deleteTree(Path root) throws IOException {
-        try (var walk = Files.walk(root)) {
-            for (Path p : walk.sorted((a, b) -> b.getNameCount() - a.getNameCount()).toList()) Files.deleteIfExists(p);
-        }
-    }
 }

@@ -1,0 +1,107 @@
+package dev.plumb.report;
+
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.Row;
+import dev.plumb.diagnostics.Span;
+import dev.plumb.present.CheckText;
+import dev.plumb.syntax.Statement;
+import java.util.ArrayList;
+import java.util.List;
+
+/** The calc's body in its own order: sections, prose, definitions, solved values, functions and checks. */
+final class CalcBody {
+    private CalcBody() {
+    }
+
+    static final class Writer {
+        private final Analysis a;
+        private final ReportValues values;
+        private final FormulaMath math;
+        private final References references;
+        private final StringBuilder out;
+        private final List<String> prose = new ArrayList<>();
+        /** Inputs written here, listed in place (their sources are in the inputs table). */
+        private final List<Row.ValueRow> inputs = new ArrayList<>();
+        private boolean inSection;
+
+        Writer(Analysis a, ReportValues values, FormulaMath math, References references, StringBuilder out) {
+            this.a = a;
+            this.values = values;
+            this.math = math;
+            this.references = references;
+            this.out = out;
+        }
+
+        void row(Row r) {
+            if (r instanceof Row.NarrativeRow n) {
+                prose.add(n.text());
+                return;
+            }
+            if (r instanceof Row.ValueRow v && v.input()) {
+                inputs.add(v);
+                return;
+            }
+            flush();
+            if (r instanceof Row.SectionRow s) {
+                if (inSection) out.append("</section>");
+                out.append("<section class=\"part\">").append(Html.element("h2", null, Html.text(s.title())));
+                inSection = true;
+            } else if (r instanceof Row.ValueRow v) {
+                out.append(Definitions.html(a, v, values, math, references));
+            } else if (r instanceof Row.FunctionRow f) {
+                out.append(function(f));
+            } else if (r instanceof Row.CheckRow c) {
+                out.append(check(c));
+            }
+        }
+
+        void finish() {
+            flush();
+            if (inSection) out.append("</section>");
+        }
+
+        /** What was held back to be shown together: prose, then a run of inputs. */
+        private void flush() {
+            out.append(Narrative.html(prose));
+            prose.clear();
+            if (inputs.isEmpty()) return;
+            List<String> each = new ArrayList<>();
+            for (Row.ValueRow v : inputs) {
+                each.add(math.symbol(v.name()) + " = " + math.inlineQuantity(values.shown(v.value(), v.display())));
+            }
+            out.append(Html.element("p", "inputs-here", "Inputs: " + String.join(" · ", each)));
+            inputs.clear();
+        }
+
+        private String function(Row.FunctionRow f) {
+            Statement s = statementAt(a, f.span());
+            String head = s instanceof Statement.Function fn ? Html.formula(math.function(fn))
+                : Html.element("p", "signature", Html.element("code", null, Html.text(f.signature())) + " — "
+                    + Html.text(f.kind().word()));
+            String note = f.note() == null ? "" : Html.element("p", "note", Html.text(f.note()));
+            return Html.element("div", "function", head + note);
+        }
+
+        private String check(Row.CheckRow c) {
+            String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.verdict() == Row.Verdict.FAILED ? "fail" : "unjudged";
+            String words = c.verdict() == Row.Verdict.PASSED ? "passes" : c.verdict() == Row.Verdict.FAILED ? "FAILS"
+                : "NOT EVALUATED";
+            Statement s = statementAt(a, c.span());
+            String comparison = s instanceof Statement.Check check
+                ? Html.formula(math.comparison(check.operands(), check.comparators(), ValueSource.none()))
+                : Html.element("code", null, Html.text(c.source()));
+            String mark = Html.element("span", "mark", Html.text(CheckText.mark(c)) + " Check " + words);
+            String detail = Html.element("p", "detail", Html.text(CheckText.detail(c)) + (c.note() == null ? ""
+                : " — " + Html.text(c.note())));
+            return Html.element("div", "check " + kind, mark + comparison + detail);
+        }
+    }
+
+    /** The statement a row was made from, found by its place in the text. */
+    static Statement statementAt(Analysis a, Span span) {
+        for (Statement s : a.syntax().statements()) {
+            if (s.span().equals(span)) return s;
+        }
+        return null;
+    }
+}

@@ -1,0 +1,94 @@
+package dev.plumb.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import dev.plumb.RepoRoot;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** `plumb report`: where pages go, the contents page, and every value as `plumb eval --format json` gives it. */
+class ReportCliTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void everyValueInEverySampleReportIsTheValueEvalGives() throws IOException {
+        Path samples = RepoRoot.get().resolve("samples");
+        Path out = dir.resolve("reports");
+        Cli run = Cli.run("report", samples.toString(), "-o", out.toString());
+        assertEquals(1, run.exitCode(), "the mistakes sample fails, as with check: " + run.err());
+        List<Path> calcs;
+        try (Stream<Path> walk = Files.walk(samples)) {
+            calcs = walk.filter(p -> p.toString().endsWith(".plumb")).sorted().toList();
+        }
+        Document contents = Jsoup.parse(Files.readString(out.resolve("index.html"), StandardCharsets.UTF_8));
+        assertEquals(calcs.size(), contents.select("tbody tr a").size(), "one contents entry per calc");
+        int compared = 0;
+        for (Path calc : calcs) {
+            JsonObject eval = JsonParser.parseString(Cli.run("eval", "--format", "json", calc.toString()).out())
+                .getAsJsonObject();
+            Map<String, JsonObject> byName = new HashMap<>();
+            for (String list : List.of("values", "usedValues")) {
+                for (JsonElement e : eval.getAsJsonArray(list)) byName.putIfAbsent(e.getAsJsonObject().get("name")
+                    .getAsString(), e.getAsJsonObject());
+            }
+            Element link = contents.select("tbody tr a").stream()
+                .filter(a -> a.attr("href").endsWith(calc.getFileName().toString().replace(".plumb", ".html"))
+                    && a.parent().text().contains(calc.getParent().getFileName().toString()))
+                .findFirst().orElseThrow(() -> new AssertionError("no contents entry for " + calc));
+            Document page = Jsoup.parse(Files.readString(out.resolve(link.attr("href")), StandardCharsets.UTF_8));
+            for (Element shown : page.select("[data-name]")) {
+                JsonObject expected = byName.get(shown.attr("data-name"));
+                assertTrue(expected != null, "eval knows " + shown.attr("data-name") + " of " + calc);
+                assertEquals(expected.get("shown").getAsString().replace("\u00a0", " "), shown.attr("data-shown"),
+                    shown.attr("data-name") + " in " + calc);
+                if (expected.has("valueSi")) {
+                    assertEquals(expected.get("valueSi").getAsDouble(), Double.parseDouble(shown.attr("data-si")), 0.0,
+                        shown.attr("data-name") + " in " + calc);
+                } else {
+                    assertTrue(!shown.hasAttr("data-si"), "an unknown value has no number in the page");
+                }
+                compared++;
+            }
+        }
+        assertTrue(compared > 100, "the samples hold well over a hundred values: " + compared);
+    }
+
+    @Test
+    void oneCalcGoesBesideItOrWhereTheOutputSays() throws IOException {
+        Path calc = Cli.write(dir, "mast.plumb", "title \"Mast\"\ninput V = 20 m/s\nq = 0.5 * 1.2 kg/m^3 * V^2\n");
+        Cli beside = Cli.run("report", calc.toString());
+        assertEquals(0, beside.exitCode(), beside.err());
+        assertTrue(Files.isRegularFile(dir.resolve("mast.html")), beside.out());
+        Path named = dir.resolve("out/calc-sheet.html");
+        assertEquals(0, Cli.run("report", calc.toString(), "-o", named.toString()).exitCode());
+        assertTrue(Files.readString(named).contains("<title>Mast</title>"));
+    }
+
+    @Test
+    void aPageNameForManyCalcsOrAMissingPathIsAUsageError() throws IOException {
+        Cli.write(dir, "a.plumb", "x = 1 m\n");
+        Cli.write(dir, "b.plumb", "y = 2 m\n");
+        Cli many = Cli.run("report", dir.toString(), "-o", dir.resolve("one.html").toString());
+        assertEquals(2, many.exitCode());
+        assertTrue(many.err().contains("name a folder instead"), many.err());
+        Cli missing = Cli.run("report", dir.resolve("nope.plumb").toString());
+        assertEquals(2, missing.exitCode());
+        assertTrue(!missing.err().contains("Exception"), missing.err());
+    }
+}

@@ -1,0 +1,133 @@
+package dev.plumb.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.plumb.RepoRoot;
+import dev.plumb.analysis.Analysis;
+import dev.plumb.analysis.FileSources;
+import dev.plumb.analysis.Row;
+import dev.plumb.analysis.Settings;
+import dev.plumb.analysis.Workspace;
+import dev.plumb.present.UsedValues;
+import java.io.IOException;
+import java.io.StringReader;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.xml.sax.InputSource;
+
+/** The report's structure on every sample, read back with a real HTML parser. */
+class CalcReportTest {
+
+    static Stream<Path> samples() throws IOException {
+        try (Stream<Path> walk = Files.walk(RepoRoot.get().resolve("samples"))) {
+            return walk.filter(p -> p.toString().endsWith(".plumb")).sorted().toList().stream();
+        }
+    }
+
+    private static Analysis analyze(Path file) {
+        return new Workspace(new FileSources(), Settings.DEFAULT).analyze(file);
+    }
+
+    private static Document report(Analysis a) {
+        return Jsoup.parse(CalcReport.html(a, a.diagnostics(), new CalcReport.Context("calc.plumb", "2026-12-02", null)));
+    }
+
+    @ParameterizedTest
+    @MethodSource("samples")
+    void everySampleHasItsInputsProseChecksAndCaution(Path sample) throws Exception {
+        Analysis a = analyze(sample);
+        Document page = report(a);
+        assertTrue(page.select("script").isEmpty(), "no scripts");
+        assertTrue(page.select("link, img[src^=http], [src^=http]").isEmpty(), "nothing fetched");
+
+        // The inputs table: the calc's own inputs in order, then those of the files it uses.
+        List<String> inputs = new ArrayList<>();
+        a.rows().forEach(r -> {
+            if (r instanceof Row.ValueRow v && v.input()) inputs.add(v.name());
+        });
+        UsedValues.of(a).forEach(u -> inputs.add(u.name()));
+        assertEquals(inputs, page.select("section.inputs tbody tr").eachAttr("data-name"));
+
+        // Every line of prose, in order.
+        String text = page.text();
+        int from = 0;
+        for (Row r : a.rows()) {
+            if (!(r instanceof Row.NarrativeRow n) || n.text().isBlank()) continue;
+            int at = text.indexOf(n.text().strip(), from);
+            assertTrue(at >= 0, "the prose line \"" + n.text().strip() + "\" in order, in " + sample);
+            from = at;
+        }
+
+        long checks = a.rows().stream().filter(r -> r instanceof Row.CheckRow).count();
+        assertEquals(checks, page.select("div.check").size());
+        for (Element c : page.select("div.check")) assertTrue(c.selectFirst(".mark").text().matches("[✓✗?] Check .*"), c.text());
+        assertTrue(text.contains("never replace, the judgement of a licensed engineer"), "the caution");
+
+        // Every formula is well-formed MathML.
+        for (Element math : page.select("math")) {
+            DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+            f.setNamespaceAware(true);
+            f.newDocumentBuilder().parse(new InputSource(new StringReader(math.outerHtml())));
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("samples")
+    void referencesAreNumberedOnceInTheOrderTheyAreCited(Path sample) {
+        Document page = report(analyze(sample));
+        List<String> listed = page.select("section.references li").eachAttr("id");
+        List<String> sources = page.select("section.references li").eachText();
+        assertEquals(sources.stream().distinct().toList(), sources, "each source once");
+        for (int i = 0; i < listed.size(); i++) assertEquals("ref-" + (i + 1), listed.get(i));
+        List<String> firstCited = new ArrayList<>();
+        for (Element cite : page.select("a.cite")) {
+            String target = cite.attr("href").substring(1);
+            assertTrue(listed.contains(target), "a citation points at a listed reference: " + target);
+            if (!firstCited.contains(target)) firstCited.add(target);
+        }
+        assertEquals(listed, firstCited, "numbered in the order first cited");
+    }
+
+    @Test
+    void aDefinitionShowsItsFormulaTheValuesPutInAndTheResult() {
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("q.plumb"),
+            "input ρ = 1.2 kg/m^3\ninput V_w = 30 m/s\nq = 0.5 * ρ * V_w^2 / sqrt(4)\n");
+        Element q = report(a).selectFirst("div.definition[data-name=q]");
+        // 0.5 × 1.2 × 30² / 2 = 270 Pa, by hand.
+        assertEquals("270 Pa", q.attr("data-shown"));
+        assertEquals(270.0, Double.parseDouble(q.attr("data-si")), 1e-9);
+        List<Element> formulas = q.select("div.formula math");
+        assertEquals(2, formulas.size(), "symbols, then values and result");
+        assertFalse(formulas.get(0).select("mfrac").isEmpty());
+        assertFalse(formulas.get(0).select("msqrt").isEmpty());
+        assertFalse(formulas.get(0).select("msup").isEmpty());
+        assertFalse(formulas.get(0).select("msub").isEmpty(), "V_w has a subscript");
+        assertEquals("ρ", formulas.get(0).select("mi").get(1).text());
+        assertTrue(formulas.get(1).text().contains("270"), formulas.get(1).text());
+    }
+
+    @Test
+    void aCalcsOwnTextNeverBecomesMarkup() {
+        String hostile = "title \"<script>alert(1)</script> \u202Eevil\"\n"
+            + "# <img src=x onerror=alert(2)> prose\n"
+            + "input x = 1 m   \"<b>note</b>\"\n";
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("h.plumb"), hostile);
+        String html = CalcReport.html(a, a.diagnostics(), new CalcReport.Context("h.plumb", "2026-12-02", null));
+        Document page = Jsoup.parse(html);
+        assertTrue(page.select("script, img, b").isEmpty(), html);
+        assertTrue(page.text().contains("<script>alert(1)</script>"), "shown as text");
+        assertFalse(html.contains("\u202E"), "a direction override is shown as an escape, not obeyed");
+    }
+}
