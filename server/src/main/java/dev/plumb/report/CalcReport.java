@@ -47,7 +47,7 @@ public final class CalcReport {
         CalcBody.Writer writer = new CalcBody.Writer(a, values, math, references, body);
         for (; i < rows.size(); i++) writer.row(rows.get(i));
         writer.finish();
-        body.append(LibraryBlock.html(a, references));
+        body.append(LibraryBlock.html(a, references, dev.plumb.units.UnitRegistry.standard()));
         body.append(FindingsBlock.html(a, findings));
         body.append(references.html());
         body.append(Html.element("footer", "caution", Html.element("p", null, Html.text(Caution.TEXT))));

@@ -2,6 +2,7 @@ package dev.plumb.report;
 
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
+import dev.plumb.analysis.EntryCurve;
 import dev.plumb.analysis.StdlibCatalog;
 import dev.plumb.present.CallText;
 import java.util.LinkedHashMap;
@@ -13,7 +14,10 @@ final class LibraryBlock {
     private LibraryBlock() {
     }
 
-    static String html(Analysis a, References references) {
+    /** Samples per curve: smooth at the size printed. */
+    private static final int POINTS = 90;
+
+    static String html(Analysis a, References references, dev.plumb.units.UnitRegistry units) {
         Map<String, List<Analysis.CallSite>> byEntry = new LinkedHashMap<>();
         List<Analysis.CallSite> calls = new java.util.ArrayList<>(a.calls());
         calls.sort(java.util.Comparator.comparingInt(c -> c.callee().start()));
@@ -33,7 +37,11 @@ final class LibraryBlock {
                     || c.standing() == Analysis.Standing.TABLE_BEYOND;
                 String line = "line " + a.lines().line(c.callee().start()) + ": " + CallText.arguments(c) + " — "
                     + CallText.standing(c) + (c.used() == null ? "" : "; fit used: " + c.used());
-                out.append(Html.element("li", outside ? "outside" : "inside", (outside ? "⚠ " : "") + Html.text(line)));
+                // Drawn where the entry states a range: the plot is there to show where the call sits in it.
+                String plot = EntryCurve.of(a, c, units, POINTS)
+                    .filter(curve -> !Double.isNaN(curve.low()) || !Double.isNaN(curve.high())).map(curve -> "<figure class=\"plot\">" + CurvePlot.svg(curve)
+                    + Html.element("figcaption", null, Html.text(CurvePlot.caption(curve))) + "</figure>").orElse("");
+                out.append(Html.element("li", outside ? "outside" : "inside", (outside ? "⚠ " : "") + Html.text(line) + plot));
             }
             out.append("</ul></div>");
         }

@@ -72,8 +72,11 @@ final class ReportPage {
         .check.pass { border-left-color: var(--good); }
         .check.fail, .check.unjudged { border-left: 4px double var(--bad); }
         .check.fail .mark, .check.unjudged .mark { color: var(--bad); }
-        .library .inside::marker { content: "✓ "; }
         .library .outside { color: var(--bad); font-weight: 600; }
+        .library ul.calls { list-style: none; padding-left: 0; }
+        .plot { margin: 0.3em 0 0.8em; break-inside: avoid; color: var(--ink); font-weight: normal; }
+        .plot svg { font: 9px "DejaVu Sans", Arial, sans-serif; max-width: 100%; height: auto; }
+        .plot figcaption { font-size: 9pt; color: var(--quiet); }
         .findings li { margin: 0.25em 0; }
         .findings .where, .findings .severity { font-weight: 600; }
         .findings .reason { margin: 0.1em 0 0; color: var(--quiet); }

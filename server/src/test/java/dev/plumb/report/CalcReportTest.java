@@ -100,6 +100,37 @@ class CalcReportTest {
         assertEquals(listed, firstCited, "numbered in the order first cited");
     }
 
+    @ParameterizedTest
+    @MethodSource("samples")
+    void everyLibraryCallWithAStatedRangeHasAPlotWithItsPointInsideOrOutsideAsTheValueSays(Path sample) {
+        Analysis a = analyze(sample);
+        Document page = report(a);
+        List<Element> calls = page.select("section.library ul.calls > li");
+        List<Analysis.CallSite> sites = a.calls().stream()
+            .sorted(java.util.Comparator.comparingInt((Analysis.CallSite c) -> c.callee().start())).toList();
+        int plotted = 0;
+        for (Element li : calls) {
+            Element svg = li.selectFirst("svg");
+            boolean outside = li.hasClass("outside");
+            if (svg == null) continue;
+            plotted++;
+            assertEquals(1, svg.select(".point").size(), "one operating point");
+            assertEquals(outside, svg.selectFirst(".point").hasClass("outside"), li.text());
+            assertFalse(svg.select("rect.band").isEmpty(), "the stated range is shaded");
+        }
+        long ranged = sites.stream().filter(c -> c.standing() != Analysis.Standing.NO_RANGE).count();
+        assertEquals(ranged, plotted, "one plot per call of an entry with a stated range in " + sample);
+    }
+
+    @Test
+    void aCallOutsideTheRangeIsMarkedOutsideInItsPlot() {
+        // The library states cd_sphere_stokes for 0 < Re <= 0.1 (creeping flow): 0.05 lies inside, 50 outside.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("s.plumb"),
+            "C_in = cd_sphere_stokes(0.05)\nC_out = cd_sphere_stokes(50)\n");
+        List<Element> points = report(a).select("section.library svg .point");
+        assertEquals(List.of(false, true), points.stream().map(p -> p.hasClass("outside")).toList());
+    }
+
     @Test
     void aDefinitionShowsItsFormulaTheValuesPutInAndTheResult() {
         Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("q.plumb"),
