@@ -64,7 +64,14 @@ class StdlibDomainTest {
         "cylinder_length_factor(-3, 5e4)             | L_over_d > 0",
         "drag_force(1.2, -1 m^2, 500 Pa)             | A >= 0 m^2",
         "lift_force(0.8, 2 m^2, -500 Pa)             | q >= 0 Pa",
-        "water.rho(-300 degC)                        | T > 0 K"})
+        "water.rho(-300 degC)                        | T > 0 K",
+        "cl_alpha_lifting_line(0, 2 * pi)            | AR > 0",
+        "cl_alpha_helmbold(2, -6)                    | a0 > 0",
+        "cl_wing_lifting_line(5 deg, -8, 2 * pi)     | AR > 0",
+        "cl_wing_helmbold(5 deg, 2, 0)               | a0 > 0",
+        "cd_induced(0.5, 8, 0)                       | e > 0",
+        "cd_polar(-0.01, 0.5, 8, 0.9)                | CD0 >= 0",
+        "cd_polar(0.01, 0.5, 0, 0.9)                 | AR > 0"})
     void outsideTheDomainIsAnErrorAndUnknown(String call, String domain) {
         assertOutsideDomain(call.strip(), domain.strip());
     }
