@@ -71,7 +71,13 @@ class StdlibDomainTest {
         "cl_wing_helmbold(5 deg, 2, 0)               | a0 > 0",
         "cd_induced(0.5, 8, 0)                       | e > 0",
         "cd_polar(-0.01, 0.5, 8, 0.9)                | CD0 >= 0",
-        "cd_polar(0.01, 0.5, 0, 0.9)                 | AR > 0"})
+        "cd_polar(0.01, 0.5, 0, 0.9)                 | AR > 0",
+        "ks_admissible(0 m/s, 1e-6 m^2/s)            | V > 0 m/s",
+        "ks_admissible(2 m/s, -1e-6 m^2/s)           | nu > 0 m^2/s",
+        "cf_plate_rough_local(-1e3, 1e7)             | x_over_ks > 0",
+        "cf_plate_rough_local(1e3, 0)                | Re_x > 0",
+        "cf_plate_rough_avg(-5, 1e7)                 | L_over_ks > 0",
+        "cf_plate_rough_avg(1e4, -1e8)               | Re > 0"})
     void outsideTheDomainIsAnErrorAndUnknown(String call, String domain) {
         assertOutsideDomain(call.strip(), domain.strip());
     }
