@@ -77,7 +77,16 @@ class StdlibDomainTest {
         "cf_plate_rough_local(-1e3, 1e7)             | x_over_ks > 0",
         "cf_plate_rough_local(1e3, 0)                | Re_x > 0",
         "cf_plate_rough_avg(-5, 1e7)                 | L_over_ks > 0",
-        "cf_plate_rough_avg(1e4, -1e8)               | Re > 0"})
+        "cf_plate_rough_avg(1e4, -1e8)               | Re > 0",
+        "seawater_density(20 degC, -1 g/kg)          | S >= 0",
+        "seawater_viscosity(-300 degC, 35 g/kg)      | T > 0 K",
+        "seawater_nu(20 degC, -0.5 %)                | S >= 0",
+        "water_vapour_pressure(-10 K)                | 0 K < T <= 647.096 K",
+        "water_vapour_pressure(650 K)                | 0 K < T <= 647.096 K",
+        "moist_air_density(20 degC, 101 kPa, 1.2)    | 0 <= RH <= 1",
+        "moist_air_density(20 degC, 101 kPa, -0.1)   | 0 <= RH <= 1",
+        "moist_air_density(20 degC, 0 kPa, 0.5)      | p > 0 Pa",
+        "moist_air_density_cipm(20 degC, 101 kPa, 80) | 0 <= RH <= 1"})
     void outsideTheDomainIsAnErrorAndUnknown(String call, String domain) {
         assertOutsideDomain(call.strip(), domain.strip());
     }
