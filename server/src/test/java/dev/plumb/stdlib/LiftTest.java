@@ -113,6 +113,24 @@ class LiftTest {
         assertEquals(1 - 0.01 / (2 * 1.1), atTwenty, 1e-4);
     }
 
+    @Test
+    void aFinRootedOnAWallWorksAtTwiceItsAspectRatio() {
+        // A fin whose root is closed by a wall (a keel fin under a hull) works as a wing of twice
+        // its span, with its image in the wall (common practice): AR = (2b)^2/(2S) = 2*b^2/S. By hand,
+        // b = 0.8 m, chord 1.2 m: 2*0.64/0.96 = 4/3. Written the way a calc writes it (2 * b^2 is
+        // also the shape of both faces of a square plate, which once broke the basis check), it
+        // computes, and the lift follows: Helmbold with k = 2*pi/(pi*4/3) = 1.5.
+        var a = StdlibCheck.analyze("input b = 0.8 m\ninput c = 1.2 m\nS = wing_planform_area(b, c)\n"
+            + "AR = 2 * b^2 / S\nCL = cl_wing_helmbold(5 deg, AR, 2 * pi)\n");
+        assertTrue(RangeAssertions.errors(a.diagnostics()).isEmpty(), a.diagnostics()::toString);
+        double ar = a.rows().stream().filter(r -> r instanceof dev.plumb.analysis.Row.ValueRow v && v.name().equals("AR"))
+            .mapToDouble(r -> ((dev.plumb.analysis.Row.ValueRow) r).value().si()).findFirst().orElseThrow();
+        assertEquals(4.0 / 3, ar, 1e-15);
+        double cl = a.rows().stream().filter(r -> r instanceof dev.plumb.analysis.Row.ValueRow v && v.name().equals("CL"))
+            .mapToDouble(r -> ((dev.plumb.analysis.Row.ValueRow) r).value().si()).findFirst().orElseThrow();
+        assertEquals(TWO_PI / (Math.sqrt(1 + 1.5 * 1.5) + 1.5) * 5 * DEG, cl, 1e-14);
+    }
+
     // ---------------------------------------------------------------- finite wings: lift
 
     @Test
