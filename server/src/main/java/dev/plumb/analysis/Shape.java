@@ -79,7 +79,9 @@ record Shape(double factor, Map<String, Integer> lengths) {
         java.util.List<String> names = new java.util.ArrayList<>(lengths.keySet());
         names.sort(String.CASE_INSENSITIVE_ORDER);
         return switch (k) {
-            case LATERAL_SURFACE, BOTH_FACES -> names.get(0) + " * " + names.get(1);
+            // Both faces of a square plate, 2·b², have one name: one face is b².
+            case LATERAL_SURFACE, BOTH_FACES -> names.size() == 1 ? names.get(0) + "^2"
+                : names.get(0) + " * " + names.get(1);
             case SPHERE_SURFACE -> "pi * " + names.get(0) + "^2 / 4";
             default -> null;
         };

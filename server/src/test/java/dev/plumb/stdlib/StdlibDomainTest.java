@@ -64,7 +64,29 @@ class StdlibDomainTest {
         "cylinder_length_factor(-3, 5e4)             | L_over_d > 0",
         "drag_force(1.2, -1 m^2, 500 Pa)             | A >= 0 m^2",
         "lift_force(0.8, 2 m^2, -500 Pa)             | q >= 0 Pa",
-        "water.rho(-300 degC)                        | T > 0 K"})
+        "water.rho(-300 degC)                        | T > 0 K",
+        "cl_alpha_lifting_line(0, 2 * pi)            | AR > 0",
+        "cl_alpha_helmbold(2, -6)                    | a0 > 0",
+        "cl_wing_lifting_line(5 deg, -8, 2 * pi)     | AR > 0",
+        "cl_wing_helmbold(5 deg, 2, 0)               | a0 > 0",
+        "cd_induced(0.5, 8, 0)                       | e > 0",
+        "cd_polar(-0.01, 0.5, 8, 0.9)                | CD0 >= 0",
+        "cd_polar(0.01, 0.5, 0, 0.9)                 | AR > 0",
+        "ks_admissible(0 m/s, 1e-6 m^2/s)            | V > 0 m/s",
+        "ks_admissible(2 m/s, -1e-6 m^2/s)           | nu > 0 m^2/s",
+        "cf_plate_rough_local(-1e3, 1e7)             | x_over_ks > 0",
+        "cf_plate_rough_local(1e3, 0)                | Re_x > 0",
+        "cf_plate_rough_avg(-5, 1e7)                 | L_over_ks > 0",
+        "cf_plate_rough_avg(1e4, -1e8)               | Re > 0",
+        "seawater_density(20 degC, -1 g/kg)          | S >= 0",
+        "seawater_viscosity(-300 degC, 35 g/kg)      | T > 0 K",
+        "seawater_nu(20 degC, -0.5 %)                | S >= 0",
+        "water_vapour_pressure(-10 K)                | 0 K < T <= 647.096 K",
+        "water_vapour_pressure(650 K)                | 0 K < T <= 647.096 K",
+        "moist_air_density(20 degC, 101 kPa, 1.2)    | 0 <= RH <= 1",
+        "moist_air_density(20 degC, 101 kPa, -0.1)   | 0 <= RH <= 1",
+        "moist_air_density(20 degC, 0 kPa, 0.5)      | p > 0 Pa",
+        "moist_air_density_cipm(20 degC, 101 kPa, 80) | 0 <= RH <= 1"})
     void outsideTheDomainIsAnErrorAndUnknown(String call, String domain) {
         assertOutsideDomain(call.strip(), domain.strip());
     }
