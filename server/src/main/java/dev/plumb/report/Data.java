@@ -12,7 +12,7 @@ final class Data {
 
     static String of(String name, Value v, ShownValue shown) {
         String si = v.known() ? " data-si=\"" + v.si() + "\"" : "";
-        String text = shown.unit().isEmpty() ? shown.number() : shown.number() + " " + shown.unit();
+        String text = dev.plumb.units.QuantityFormat.join(shown.number(), shown.unit());
         return " data-name=\"" + Html.text(name) + "\"" + si + " data-shown=\""
             + Html.text(text) + "\"";
     }

@@ -23,8 +23,11 @@ public final class QuantityFormat {
 
     /** The SI value written in {@code unit}, e.g. "1.204 kg/m³", "15 °C", "12%", "0.45". */
     public static String format(double si, Unit unit, int sig) {
-        String number = number(unit.fromSi(si), sig);
-        String symbol = unit.symbol();
+        return join(number(unit.fromSi(si), sig), unit.symbol());
+    }
+
+    /** A number and a unit symbol as they are written together: "12 m", "12%", "12°", "12" for no unit. */
+    public static String join(String number, String symbol) {
         if (symbol.isEmpty()) {
             return number;
         }
