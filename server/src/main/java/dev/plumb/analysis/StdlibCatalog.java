@@ -1,5 +1,7 @@
 package dev.plumb.analysis;
 
+import dev.plumb.syntax.Expr;
+
 import dev.plumb.syntax.Statement;
 import java.util.ArrayList;
 import java.util.List;
@@ -32,6 +34,15 @@ public final class StdlibCatalog {
     }
 
     /** The range a correlation or table column holds in, as written ("1e3 <= Re <= 2e5"); "" for none. */
+    /** An entry's `accuracy` as written ("5 %"), or null when it states none. */
+    public static String accuracyText(Binding binding) {
+        Expr e = binding instanceof Binding.CorrelationBinding c ? c.def().accuracy()
+            : binding instanceof Binding.TableBinding t ? t.def().accuracy() : null;
+        if (e == null) return null;
+        String text = binding instanceof Binding.CorrelationBinding c ? c.scope().text() : ((Binding.TableBinding) binding).scope().text();
+        return text.substring(e.span().start(), Math.min(text.length(), e.span().end())).strip();
+    }
+
     public static String validText(Binding binding) {
         if (binding instanceof Binding.CorrelationBinding c) return ranges(c.def().valid(), c.scope().text());
         if (!(binding instanceof Binding.TableBinding t)) return "";

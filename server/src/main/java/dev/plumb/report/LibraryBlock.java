@@ -30,7 +30,9 @@ final class LibraryBlock {
             out.append(Html.element("h3", null, Html.element("code", null, Html.text(e.getKey())) + " — "
                 + Html.text(title(b)) + references.cite(e.getKey())));
             String valid = b == null ? "" : StdlibCatalog.validText(b);
-            out.append(Html.element("p", "range", valid.isEmpty() ? "No stated range." : "Valid: " + Html.text(valid)));
+            String accuracy = b == null ? null : StdlibCatalog.accuracyText(b);
+            out.append(Html.element("p", "range", (valid.isEmpty() ? "No stated range." : "Valid: " + Html.text(valid))
+                + (accuracy == null ? "" : " Accuracy: ±" + Html.text(accuracy) + ".")));
             out.append("<ul class=\"calls\">");
             for (Analysis.CallSite c : e.getValue()) {
                 boolean outside = c.standing() == Analysis.Standing.OUTSIDE || c.standing() == Analysis.Standing.OUTSIDE_DOMAIN
