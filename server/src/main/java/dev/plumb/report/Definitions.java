@@ -19,6 +19,8 @@ import java.util.List;
 final class Definitions {
     /** More trials than this are summarised: the table is for checking, not for reading in full. */
     private static final int STEPS_SHOWN = 24;
+    /** Characters of a formula that fit one printed line at the report's size (A4, 10.5 pt). */
+    private static final int LINE = 95;
 
     private Definitions() {
     }
@@ -31,8 +33,13 @@ final class Definitions {
             String symbols = Html.formula(math.definition(d, ValueSource.none()));
             boolean namesInside = !math.formula(d.expr(), values).equals(math.formula(d.expr(), ValueSource.none()));
             boolean loneQuantity = Expr.inner(d.expr()) instanceof Expr.Quantity;
-            if (namesInside) {
-                out.append(symbols).append(Html.formula(math.definition(d, values, result)));
+            String substituted = math.definition(d, values, result);
+            if (namesInside && readLength(substituted) <= LINE) {
+                out.append(symbols).append(Html.formula(substituted));
+            } else if (namesInside) {
+                // Too long for one printed line (formulas do not wrap): the values are listed instead.
+                out.append(symbols).append(where(d, values, math));
+                out.append(Html.element("p", "root", math.symbol(d.name().text()) + " = " + math.inlineQuantity(result)));
             } else {
                 out.append(Html.formula(math.definition(d, ValueSource.none(), loneQuantity ? null : result)));
             }
@@ -46,6 +53,46 @@ final class Definitions {
         }
         out.append(meta(a, v, references));
         return out.append("</div>").toString();
+    }
+
+    /** Characters a formula reads as, markup aside, with room for its spacing: a measure of its printed width. */
+    private static int readLength(String mathml) {
+        int characters = mathml.replaceAll("<[^>]*>", "").replaceAll("&[a-z#0-9]+;", "x").length();
+        // An operator is set with space either side, a unit after a thin space.
+        return characters + count(mathml, "<mo") + count(mathml, "<mspace") / 2;
+    }
+
+    private static int count(String s, String part) {
+        int n = 0;
+        for (int at = s.indexOf(part); at >= 0; at = s.indexOf(part, at + 1)) n++;
+        return n;
+    }
+
+    /** "where ρ = 1.2 kg/m³, V = 31 m/s": the values a long formula uses, in the order it uses them. */
+    private static String where(Statement.Definition d, ReportValues values, FormulaMath math) {
+        java.util.LinkedHashSet<String> names = new java.util.LinkedHashSet<>();
+        collect(d.expr(), names);
+        List<String> each = new ArrayList<>();
+        for (String n : names) {
+            values.find(n).ifPresent(v -> each.add(math.symbol(n) + " = " + math.inlineQuantity(v)));
+        }
+        return Html.element("p", "values-used", "where " + String.join(", ", each));
+    }
+
+    private static void collect(Expr e, java.util.Set<String> names) {
+        if (e instanceof Expr.Reference r) names.add(r.name());
+        else if (e instanceof Expr.Call c) c.args().forEach(a -> collect(a, names));
+        else if (e instanceof Expr.Group g) collect(g.inner(), names);
+        else if (e instanceof Expr.Unary u) collect(u.operand(), names);
+        else if (e instanceof Expr.Binary b) {
+            collect(b.left(), names);
+            collect(b.right(), names);
+        } else if (e instanceof Expr.Piecewise p) {
+            for (var piece : p.pieces()) {
+                collect(piece.expr(), names);
+                if (piece.condition() != null) piece.condition().operands().forEach(o -> collect(o, names));
+            }
+        }
     }
 
     private static String meta(Analysis a, Row.ValueRow v, References references) {

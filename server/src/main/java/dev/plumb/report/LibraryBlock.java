@@ -32,7 +32,7 @@ final class LibraryBlock {
             String valid = b == null ? "" : StdlibCatalog.validText(b);
             String accuracy = b == null ? null : StdlibCatalog.accuracyText(b);
             out.append(Html.element("p", "range", (valid.isEmpty() ? "No stated range." : "Valid: " + Html.text(valid))
-                + (accuracy == null ? "" : " Accuracy: ±" + Html.text(accuracy) + ".")));
+                + (accuracy == null ? "" : (valid.isEmpty() ? " " : ". ") + "Accuracy: ±" + Html.text(accuracy) + ".")));
             out.append("<ul class=\"calls\">");
             for (Analysis.CallSite c : e.getValue()) {
                 boolean outside = c.standing() == Analysis.Standing.OUTSIDE || c.standing() == Analysis.Standing.OUTSIDE_DOMAIN

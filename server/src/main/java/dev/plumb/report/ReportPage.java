@@ -57,6 +57,7 @@ final class ReportPage {
         .status.clean::before { content: "✓ "; }
         .narrative { margin: 0.5em 0; }
         .inputs-here { margin: 0.4em 0; }
+        .values-used, .root { margin: 0.2em 0 0.2em 1.2em; }
         table { border-collapse: collapse; width: 100%; font-size: 9.5pt; }
         th { text-align: left; font-weight: 600; border-bottom: 1px solid var(--ink); padding: 0.2em 0.5em 0.2em 0; }
         td { border-bottom: 1px solid var(--rule); padding: 0.25em 0.5em 0.25em 0; vertical-align: baseline; }

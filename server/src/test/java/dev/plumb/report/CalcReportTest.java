@@ -150,6 +150,20 @@ class CalcReportTest {
     }
 
     @Test
+    void aFormulaTooLongForALineListsItsValuesInstead() {
+        // Formulas do not wrap when printed: a long one with its values put in would run off the page.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("long.plumb"),
+            "input a_first = 1.25 m\ninput b_second = 2.5 m\ninput c_third = 3.75 m\ninput d_fourth = 4.5 m\n"
+                + "L = a_first + b_second + c_third + d_fourth + a_first * b_second / c_third + d_fourth * c_third / b_second"
+                + " + a_first + b_second + c_third + d_fourth\n");
+        Element l = report(a).selectFirst("div.definition[data-name=L]");
+        Element values = l.selectFirst("p.values-used");
+        assertTrue(values != null, l.html());
+        assertEquals(8, values.select("math").size(), "each of the four names once, with its value");
+        assertTrue(l.selectFirst("p.root").text().contains("="), "then the result on its own line");
+    }
+
+    @Test
     void aCalcsOwnTextNeverBecomesMarkup() {
         String hostile = "title \"<script>alert(1)</script> \u202Eevil\"\n"
             + "# <img src=x onerror=alert(2)> prose\n"
