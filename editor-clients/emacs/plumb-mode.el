@@ -12,6 +12,9 @@
 ;; Eglot before 1.12 shows neither inlay hints nor code lenses, so the server sends each
 ;; line's value as a hint-level diagnostic (code `value'): Flymake lists them with the
 ;; problems, and `M-x flymake-show-buffer-diagnostics' shows every value of the calc.
+;;
+;; `M-x plumb-write-report' writes the printable report of the calc (beside it as NAME.html)
+;; and opens it in a browser.
 
 ;;; Code:
 
@@ -56,6 +59,51 @@ PLUMB_JAR lsp' works as well."
 
 ;;;###autoload
 (add-to-list 'auto-mode-alist '("\\.plumb\\'" . plumb-mode))
+
+(defcustom plumb-report-open t
+  "Whether `plumb-write-report' opens the report it wrote.
+It opens it with `browse-url-of-file'; when nil it only says where it is."
+  :type 'boolean)
+
+(defcustom plumb-report-timeout 60
+  "Seconds `plumb-write-report' waits for the server to write the report."
+  :type 'number)
+
+(declare-function eglot-current-server "eglot")
+(declare-function eglot--TextDocumentIdentifier "eglot")
+(declare-function eglot--signal-textDocument/didChange "eglot")
+(declare-function jsonrpc-request "jsonrpc")
+
+(defun plumb-write-report ()
+  "Write the printable report of this calc, open it, and return its file name.
+Plumb's language server makes the report from the buffer's text as it is now,
+saved or not, and writes it beside the calc as NAME.html, or to a temporary
+file when the calc is not saved, lies outside its workspace or its folder
+cannot be written; the echo area says where.  See `plumb-report-open'."
+  (interactive)
+  (require 'eglot)
+  (let ((server (eglot-current-server)))
+    (unless server
+      (user-error "This buffer is not a calc that Plumb serves (open a .plumb file, then M-x eglot)"))
+    ;; Eglot sends edits when Emacs is idle: send the latest now, so the report is of the text as it is.
+    (when (fboundp 'eglot--signal-textDocument/didChange)
+      (eglot--signal-textDocument/didChange))
+    (let* ((result
+            (condition-case err
+                ;; The server's command plumb.writeReport, with the document as Eglot opened it;
+                ;; `jsonrpc-request' itself rather than `eglot-execute-command', for a timeout
+                ;; longer than jsonrpc's default 10 s (a large calc takes a while).
+                (jsonrpc-request server :workspace/executeCommand
+                                 (list :command "plumb.writeReport"
+                                       :arguments (vector (plist-get (eglot--TextDocumentIdentifier) :uri)))
+                                 :timeout plumb-report-timeout)
+              (jsonrpc-error
+               (user-error "Plumb: %s" (or (alist-get 'jsonrpc-error-message (cdr err)) (cadr err))))))
+           (path (plist-get result :path)))
+      (message "%s" (plist-get result :message))
+      (when plumb-report-open
+        (browse-url-of-file path))
+      path)))
 
 (with-eval-after-load 'eglot
   (add-to-list 'eglot-server-programs

@@ -8,7 +8,8 @@
 -- Usage (init.lua):
 --   package.path = package.path .. ';/path/to/plumb/editor-clients/neovim/?.lua'
 --   require('plumb').setup({ cmd = { 'plumb', 'lsp' } })
--- See README.md beside this file for the options.
+-- See README.md beside this file for the options. :PlumbReport writes the printable report of
+-- the calc in the current buffer (the server's command plumb.writeReport) and opens it.
 
 local M = {}
 
@@ -145,6 +146,53 @@ function M.attach(bufnr)
   return id
 end
 
+--- The server's command that writes the printable report of a calc.
+local WRITE_REPORT = 'plumb.writeReport'
+
+--- The plumb client attached to a buffer, or nil.
+local function client_of(bufnr)
+  for _, c in pairs(vim.lsp.buf_get_clients(bufnr)) do
+    if c.name == 'plumb' then
+      return c
+    end
+  end
+  return nil
+end
+
+--- Asks the server to write the report of a buffer's calc, made from the text as it is now
+--- (saved or not). Calls on_done(err, result) with the server's answer: result.path,
+--- result.uri, result.beside (false when it went to a temporary file) and result.message.
+function M.write_report(bufnr, on_done)
+  bufnr = (bufnr == nil or bufnr == 0) and vim.api.nvim_get_current_buf() or bufnr
+  local client = client_of(bufnr)
+  if not client then
+    on_done({ message = 'this buffer is not a calc that Plumb serves (open a .plumb file)' }, nil)
+    return
+  end
+  local params = { command = WRITE_REPORT, arguments = { vim.uri_from_bufnr(bufnr) } }
+  client.request('workspace/executeCommand', params, function(err, result)
+    on_done(err, result)
+  end, bufnr)
+end
+
+--- :PlumbReport — writes the report and says where it is; opens it too where Neovim can
+--- (vim.ui.open, from Neovim 0.10).
+function M.report(bufnr)
+  M.write_report(bufnr, function(err, result)
+    if err then
+      vim.notify('plumb: ' .. tostring(err.message), vim.log.levels.ERROR)
+      return
+    end
+    vim.notify('plumb: ' .. result.message, vim.log.levels.INFO)
+    if type(vim.ui.open) == 'function' then
+      local _, open_err = vim.ui.open(result.path)
+      if open_err then
+        vim.notify('plumb: could not open the report: ' .. tostring(open_err), vim.log.levels.WARN)
+      end
+    end
+  end)
+end
+
 --- Sets the options (merged over the defaults) and registers the autocommands.
 function M.setup(opts)
   M.config = vim.tbl_deep_extend('force', vim.deepcopy(defaults), opts or {})
@@ -164,6 +212,9 @@ function M.setup(opts)
       M.attach(args.buf)
     end,
   })
+  vim.api.nvim_create_user_command('PlumbReport', function()
+    M.report(0)
+  end, { desc = "Write the printable report of this calc (beside it) and open it" })
   if M.config.code_lens then
     vim.api.nvim_create_autocmd({ 'BufEnter', 'InsertLeave' }, {
       group = group,

@@ -2,8 +2,8 @@
 # Headless Emacs test of the language server through Eglot: makes a small calc workspace in a
 # temp folder, opens mast.plumb in `emacs -Q --batch` with editor-clients/emacs/plumb-mode.el,
 # and checks diagnostics (exact regions after non-ASCII names), values as Flymake notes, hover,
-# go-to-definition into a used file, edits, completion, formatting, rename and a code action
-# (see test.el).
+# go-to-definition into a used file, edits, completion, formatting, rename, a code action and
+# the printable report of the calc with an unsaved edit (see test.el).
 #
 # Needs: emacs (28 or later) with Eglot (Debian 12: apt-get install -y emacs-nox elpa-eglot),
 # java 17, and the server jar (server/target/plumb.jar, built here via ./plumb when it is

@@ -164,7 +164,50 @@
                                                 :context (list :diagnostics [])))))
         (plumb-test-check "a code action offers a correlation valid at this Re"
                           (cl-some (lambda (a) (string-match-p "^Use .*, valid here" (plist-get a :title))) actions)
-                          (mapcar (lambda (a) (plist-get a :title)) actions))))
+                          (mapcar (lambda (a) (plist-get a :title)) actions)))
+
+      ;; (10) The printable report of the calc as typed: an unsaved edit of its title is in it.
+      (plumb-test-goto "Buoy mast lamp" (length "Buoy mast lamp"))
+      ;; Not sent on purpose: the command itself sends the pending edit before it asks.
+      (insert " (unsaved)")
+      (let* ((report (file-truename (expand-file-name "mast.html" ws)))
+             (opened nil)
+             (said nil)
+             (browse-url-browser-function (lambda (url &rest _) (setq opened url)))
+             (path (cl-letf* ((message-function (symbol-function 'message))
+                              ((symbol-function 'message)
+                               (lambda (format &rest args)
+                                 (push (apply #'format-message format args) said)
+                                 (apply message-function format args))))
+                     (plumb-write-report)))
+             (html (and path (file-exists-p path)
+                        (with-temp-buffer (insert-file-contents path) (buffer-string)))))
+        (plumb-test-check "plumb-write-report writes mast.html beside the calc" (equal path report) path)
+        (plumb-test-check "it says where the report went"
+                          (member (concat "Wrote the report of mast.plumb beside it: " report) said) said)
+        (plumb-test-check "the report holds the title as typed in the buffer"
+                          (and html (string-search
+                                     "<title>Buoy mast lamp (unsaved): wind drag (editor test, invented data)</title>" html))
+                          (and html (substring html 0 (min 400 (length html)))))
+        (plumb-test-check "mast.plumb on disk still has the saved title"
+                          (with-temp-buffer
+                            (insert-file-contents (expand-file-name "mast.plumb" ws))
+                            (search-forward "\"Buoy mast lamp: wind" nil t)))
+        (plumb-test-check "the report is opened in the browser" (equal opened (browse-url-file-url report)) opened))
+      (let ((refusal (condition-case err
+                         (progn (plumb-test-request :workspace/executeCommand
+                                                    '(:command "plumb.writeReport" :arguments []))
+                                nil)
+                       (jsonrpc-error (cons (alist-get 'jsonrpc-error-code (cdr err))
+                                            (alist-get 'jsonrpc-error-message (cdr err)))))))
+        (plumb-test-check "plumb.writeReport without the URI is refused with a sentence"
+                          (equal refusal (cons -32602 "plumb.writeReport needs the calc's document URI as its argument, e.g. [\"file:///work/pod.plumb\"]"))
+                          refusal))
+      (with-temp-buffer
+        (let ((refusal (condition-case err (progn (plumb-write-report) nil) (error err))))
+          (plumb-test-check "plumb-write-report outside a calc says why it cannot"
+                            (equal refusal '(user-error "This buffer is not a calc that Plumb serves (open a .plumb file, then M-x eglot)"))
+                            refusal))))
   (error (plumb-test-check "the test ran to its end" nil err)))
 
 (plumb-test-finish)

@@ -3,7 +3,8 @@
 # opens it in `nvim --headless --clean` with editor-clients/neovim/plumb.lua, and checks
 # diagnostics, hover, go-to-definition, code lenses, edits and rename on pod.plumb, then
 # completion, signature help, symbols, references, highlights, code actions, formatting, folding,
-# semantic tokens and workspace symbols on probe.plumb (see test.lua).
+# semantic tokens and workspace symbols on probe.plumb, then :PlumbReport on pod.plumb with an
+# unsaved edit (see test.lua).
 #
 # Needs: nvim (0.7.2 or later; Debian: apt-get install -y neovim), java 17, and the server jar
 # (server/target/plumb.jar, built here via ./plumb when it is missing). PLUMB_JAR overrides it.

@@ -500,6 +500,65 @@ local function probe_checks(client, published, ws)
   check('formatting the formatted calc changes nothing', edits ~= nil and #edits == 0, show(edits) .. ' ' .. fe)
 end
 
+local function read_file(path)
+  local f = io.open(path, 'rb')
+  if not f then
+    return nil
+  end
+  local text = f:read('*a')
+  f:close()
+  return text
+end
+
+-- (17) :PlumbReport on pod.plumb: the report of the buffer as it is, an unsaved edit of the
+-- title included, beside the calc; said where it is, and opened where Neovim can open files.
+local function report_checks(buf, ws)
+  vim.api.nvim_set_current_buf(buf)
+  local title_row = row_of(buf, 'title ')
+  local title_line = vim.api.nvim_buf_get_lines(buf, title_row, title_row + 1, false)[1]
+  local at = col_of(title_line, 'Camera pod', #'Camera pod')
+  vim.api.nvim_buf_set_text(buf, title_row, at, title_row, at, { ' (unsaved)' })
+  local report = ws .. '/pod.html'
+  local notes = {}
+  local notify, open = vim.notify, vim.ui.open
+  vim.notify = function(msg, level)
+    table.insert(notes, { tostring(msg), level })
+  end
+  -- As on Neovim before 0.10, which has no vim.ui.open: the path is said, not opened.
+  vim.ui.open = nil
+  vim.cmd('PlumbReport')
+  vim.wait(WAIT_MS, function()
+    return #notes > 0
+  end, 20)
+  check(':PlumbReport says it wrote the report beside pod.plumb',
+    vim.deep_equal(notes, { { 'plumb: Wrote the report of pod.plumb beside it: ' .. report, vim.log.levels.INFO } }),
+    show(notes))
+  local html = read_file(report) or ''
+  local want_title = '<title>Camera pod (unsaved) in a rig air stream: drag (editor test, invented data)</title>'
+  check('pod.html holds the title as typed in the buffer', html:find(want_title, 1, true) ~= nil, html:sub(1, 400))
+  check('pod.plumb on disk still has the saved title (the report came from the buffer)',
+    (read_file(ws .. '/pod.plumb') or ''):find('"Camera pod in a rig', 1, true) ~= nil)
+
+  local opened
+  vim.ui.open = function(path)
+    opened = path
+    return nil, nil
+  end
+  vim.cmd('PlumbReport')
+  vim.wait(WAIT_MS, function()
+    return opened ~= nil
+  end, 20)
+  check(':PlumbReport opens the report with vim.ui.open where Neovim has it', opened == report, show(opened))
+
+  notes = {}
+  vim.cmd('enew')
+  vim.cmd('PlumbReport')
+  check(':PlumbReport in a buffer that is not a calc says so',
+    vim.deep_equal(notes, { { 'plumb: this buffer is not a calc that Plumb serves (open a .plumb file)',
+      vim.log.levels.ERROR } }), show(notes))
+  vim.notify, vim.ui.open = notify, open
+end
+
 local function run()
   local jar = env('PLUMB_JAR')
   local ws = env('PLUMB_WORKSPACE')
@@ -734,6 +793,7 @@ local function run()
     show(got))
 
   probe_checks(client, published, ws)
+  report_checks(buf, ws)
 
   -- Shut the server down cleanly.
   vim.lsp.stop_client(client.id)

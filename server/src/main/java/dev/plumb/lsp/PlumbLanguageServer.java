@@ -40,7 +40,9 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     private volatile LanguageClient client;
     private final Analyses analyses = new Analyses(documents, () -> settings, this::publish, this::warn);
     private final PlumbTextDocumentService text = new PlumbTextDocumentService(this, requests);
-    private final PlumbWorkspaceService workspace = new PlumbWorkspaceService(this);
+    private final WriteReport reports = new WriteReport(documents, analyses,
+        new ReportFiles(new dev.plumb.analysis.FileSources()));
+    private final PlumbWorkspaceService workspace = new PlumbWorkspaceService(this, requests);
     private boolean shutdown;
     private volatile boolean pullsConfiguration;
     private volatile boolean refreshLenses;
@@ -85,7 +87,8 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         c.setWorkspaceSymbolProvider(true);
         c.setCodeActionProvider(true);
         c.setDocumentFormattingProvider(true);
-        c.setExecuteCommandProvider(new org.eclipse.lsp4j.ExecuteCommandOptions(List.of(ProtocolMapping.SHOW_VALUE)));
+        c.setExecuteCommandProvider(new org.eclipse.lsp4j.ExecuteCommandOptions(
+            List.of(ProtocolMapping.SHOW_VALUE, WriteReport.COMMAND)));
         c.setSemanticTokensProvider(new org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions(Features.LEGEND, true));
         return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", "0.1.0")));
     }
@@ -167,6 +170,10 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
 
     Analyses analyses() {
         return analyses;
+    }
+
+    WriteReport reports() {
+        return reports;
     }
 
     ServerSettings settings() {

@@ -21,6 +21,7 @@ import org.eclipse.lsp4j.DocumentDiagnosticParams;
 import org.eclipse.lsp4j.DocumentFormattingParams;
 import org.eclipse.lsp4j.DocumentHighlightParams;
 import org.eclipse.lsp4j.DocumentSymbolParams;
+import org.eclipse.lsp4j.ExecuteCommandParams;
 import org.eclipse.lsp4j.FoldingRangeRequestParams;
 import org.eclipse.lsp4j.FormattingOptions;
 import org.eclipse.lsp4j.HoverParams;
@@ -45,7 +46,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Every request the server serves, at random places of random documents — past the last line,
  * past the end of a line, reversed ranges, names that cannot be names — is answered, never with
- * an error: an editor sends such positions while its buffer and the server briefly disagree.
+ * an error: an editor sends such positions while its buffer and the server briefly disagree. Writing
+ * a document's report (plumb.writeReport) is one of the requests.
  */
 class RandomRequestsTest {
     private static final List<String> NEW_NAMES = List.of("x_new", "", "1x", "a b", "ρ_2", "rho", "in", "q");
@@ -77,7 +79,7 @@ class RandomRequestsTest {
                 for (int i = 0; i < 40; i++) {
                     Position at = new Position(random.nextInt(lines + 3), random.nextInt(random.nextBoolean() ? 8 : 160));
                     Position other = new Position(random.nextInt(lines + 3), random.nextInt(160));
-                    CompletableFuture<?> f = switch (random.nextInt(16)) {
+                    CompletableFuture<?> f = switch (random.nextInt(17)) {
                         case 0 -> s.hover(new HoverParams(id, at));
                         case 1 -> s.definition(new DefinitionParams(id, at));
                         case 2 -> s.completion(new CompletionParams(id, at));
@@ -93,6 +95,8 @@ class RandomRequestsTest {
                         case 12 -> s.semanticTokensFull(new SemanticTokensParams(id));
                         case 13 -> s.documentSymbol(new DocumentSymbolParams(id));
                         case 14 -> s.formatting(new DocumentFormattingParams(id, new FormattingOptions(4, true)));
+                        case 15 -> client.remote.getWorkspaceService().executeCommand(
+                            new ExecuteCommandParams(WriteReport.COMMAND, List.of(uri)));
                         default -> s.diagnostic(new DocumentDiagnosticParams(id));
                     };
                     try {
