@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "plumb", mixinStandardHelpOptions = true, version = "plumb 0.1.0",
     description = "Checks plain-text drag, lift and skin-friction calcs: units, limits and checks.",
-    subcommands = {CheckCommand.class, EvalCommand.class})
+    subcommands = {CheckCommand.class, EvalCommand.class, DiffCommand.class})
 public final class Main implements Runnable {
     /** Exit codes: 0 clean, 1 errors or failed checks, 2 usage or input/output problems. */
     static final int CLEAN = 0;
