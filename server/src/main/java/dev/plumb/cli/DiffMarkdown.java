@@ -28,12 +28,12 @@ final class DiffMarkdown {
             .sorted(Comparator.comparing((FileDiff f) -> f.flipped().isEmpty())).toList();
         if (changed.isEmpty()) {
             out.println("No calc changed: every value is within " + DiffWords.tolerance(diff.tolerance()) + " relative, every check as it was.");
+            out.println();
         } else {
             flipped(changed, out);
             summary(changed, out);
             for (FileDiff f : changed) details(f, out, digits);
         }
-        out.println();
         out.println(md(DiffHeader.tally(diff)) + " Values within " + DiffWords.tolerance(diff.tolerance()) + " relative count as unchanged.");
         out.println();
         out.println("> " + md(Caution.TEXT));
@@ -107,7 +107,6 @@ final class DiffMarkdown {
                     : e.status().name().toLowerCase(java.util.Locale.ROOT)));
         }
         for (Path u : f.changedUses()) out.println("- used file changed: " + md(Location.path(u)));
-        out.println();
         out.println("</details>");
         out.println();
     }

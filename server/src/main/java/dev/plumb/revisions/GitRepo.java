@@ -109,6 +109,7 @@ public final class GitRepo implements AutoCloseable {
      */
     public List<String> inRepository(List<Path> paths) throws RevisionProblem {
         List<String> out = new ArrayList<>();
+        boolean everything = false;
         for (Path p : paths) {
             Path real = realish(p);
             if (!real.startsWith(workTree)) {
@@ -116,10 +117,10 @@ public final class GitRepo implements AutoCloseable {
                     + ": name files and folders inside it");
             }
             String rel = workTree.relativize(real).toString().replace(java.io.File.separatorChar, '/');
-            if (rel.isEmpty()) return List.of();
-            out.add(rel);
+            if (rel.isEmpty()) everything = true;
+            else out.add(rel);
         }
-        return out;
+        return everything ? List.of() : out;
     }
 
     /** The path with links resolved as far as it exists (a calc deleted in the working tree still has a place). */
