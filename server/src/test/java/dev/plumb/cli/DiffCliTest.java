@@ -217,6 +217,26 @@ class DiffCliTest {
     }
 
     @Test
+    void aCalcsOwnTextCannotActOnTheTerminalOrTheMarkdown() throws Exception {
+        try (GitFixture git = GitFixture.init(dir)) {
+            String hostile = PANEL.replace("\"footing working capacity\"", "\"footing \u001b[2J\u202e| <b>capacity</b>\"");
+            git.write("site/air.plumb", AIR);
+            git.write("site/hoarding.plumb", hostile);
+            git.commit("first issue");
+            git.write("site/hoarding.plumb", hostile.replace("20 m/s", "30 m/s"));
+            for (String format : List.of("text", "markdown")) {
+                Cli run = Cli.run("diff", "--no-color", "--format", format, "--", dir.toString());
+                assertEquals(1, run.exitCode(), run.err());
+                assertFalse(run.out().contains("\u001b") || run.out().contains("\u202e"), format + ": " + run.out());
+                // Shown as visible escapes; in Markdown also with its markup escaped, so the table keeps its columns.
+                String shown = format.equals("text") ? "footing \\u001B[2J\\u202E| <b>capacity</b>"
+                    : "footing \\\\u001B\\[2J\\\\u202E\\| &lt;b&gt;capacity&lt;/b&gt;";
+                assertTrue(run.out().contains(shown), format + ": " + run.out());
+            }
+        }
+    }
+
+    @Test
     void badInputIsASentenceAndExitTwoNeverAStackTrace() throws Exception {
         Path plain = Files.createDirectories(dir.resolve("plain"));
         Cli notRepo = Cli.run("diff", "--", plain.toString());
