@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
  * (dev.plumb.compare) and prints; nothing else.
  */
 @Command(name = "diff", mixinStandardHelpOptions = true,
-    customSynopsis = {"plumb diff [OPTIONS] [REV1 [REV2]] [-- PATH...]", "plumb diff [OPTIONS] OLD.plumb NEW.plumb"},
+    customSynopsis = {"plumb diff [OPTIONS] [REV1 [REV2]] [-- PATH...]", "       plumb diff [OPTIONS] OLD.plumb NEW.plumb"},
     description = {"Show what a change did to the results: values moved (by how much), checks flipped, findings new "
         + "and gone, library entries changed.",
         "REV1 defaults to HEAD, REV2 to the working tree, PATH to every calc of the repository; "
