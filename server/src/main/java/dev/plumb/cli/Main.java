@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "plumb", mixinStandardHelpOptions = true, version = "plumb 0.1.0",
     description = "Checks plain-text drag, lift and skin-friction calcs: units, limits and checks.",
-    subcommands = {CheckCommand.class, EvalCommand.class, ReportCommand.class})
+    subcommands = {CheckCommand.class, EvalCommand.class, ReportCommand.class, DiffCommand.class})
 public final class Main implements Runnable {
     /** Exit codes: 0 clean, 1 errors or failed checks, 2 usage or input/output problems. */
     static final int CLEAN = 0;
@@ -23,7 +23,7 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "name a command: check, eval or report");
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command: check, eval, report or diff");
     }
 
     /** Runs the command line with the given streams; returns the exit code. */

@@ -69,7 +69,8 @@ final class ReportCommand implements Callable<Integer> {
             for (Batch.Checked c : results) {
                 Path target = target(c.analysis().file(), oneFile);
                 String shownPath = Location.path(c.analysis().file());
-                write(target, CalcReport.html(c.analysis(), c.diagnostics(), new CalcReport.Context(shownPath, made, null)));
+                write(target, CalcReport.html(c.analysis(), c.diagnostics(), new CalcReport.Context(shownPath, made,
+                    dev.plumb.revisions.HeadState.of(c.analysis().file()).map(dev.plumb.revisions.HeadState::words).orElse(null))));
                 out.println("wrote " + Printable.line(target.toString()));
                 if (contents != null) {
                     String link = contents.toAbsolutePath().getParent().relativize(target.toAbsolutePath()).toString();

@@ -37,6 +37,17 @@ final class WriteReport {
         this.files = files;
     }
 
+    /** The commit the calc's file is at, and whether the editor's text is that file's (an unsaved edit is not). */
+    private static String revision(Path calc, Analysis analysis) {
+        // Read as every calc is read (inside the workspace, regular files, within the size limit).
+        dev.plumb.analysis.FileSources disk = new dev.plumb.analysis.FileSources();
+        boolean unsaved = !(disk.load(calc, disk.workspaceRoot(calc)) instanceof dev.plumb.analysis.Sources.Text t
+            && t.text().equals(analysis.text()));
+        String head = dev.plumb.revisions.HeadState.of(calc).map(dev.plumb.revisions.HeadState::words).orElse(null);
+        if (!unsaved) return head;
+        return (head == null ? "" : head + "; ") + "made from the editor's unsaved text";
+    }
+
     JsonObject run(List<Object> arguments, CancelChecker cancel) {
         String uri = uriArgument(arguments);
         Path calc = fileOf(uri);
@@ -45,7 +56,7 @@ final class WriteReport {
         String html;
         try {
             html = CalcReport.html(analysis, analysis.diagnostics(),
-                new CalcReport.Context(files.shownPath(calc), LocalDate.now().toString(), null));
+                new CalcReport.Context(files.shownPath(calc), LocalDate.now().toString(), revision(calc, analysis)));
         } catch (RuntimeException | StackOverflowError e) {
             System.err.println("plumb lsp: the report of " + uri + " failed: " + e);
             throw failed("Plumb could not make the report of " + name + " (" + e.getClass().getSimpleName()

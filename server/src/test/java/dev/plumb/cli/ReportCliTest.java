@@ -81,6 +81,26 @@ class ReportCliTest {
     }
 
     @Test
+    void theTitleBlockNamesTheCommitAndSaysPlainlyWhenTheCalcDiffersFromIt() throws Exception {
+        dev.plumb.revisions.GitFixture repo = dev.plumb.revisions.GitFixture.init(dir.resolve("repo"));
+        try {
+            Path calc = repo.write("mast.plumb", "title \"Mast\"\ninput V = 20 m/s\n");
+            String id = repo.commit("the mast");
+            Path page = dir.resolve("mast.html");
+            Cli.run("report", calc.toString(), "-o", page.toString());
+            String committed = Jsoup.parse(Files.readString(page)).select("dd").eachText().toString();
+            assertTrue(committed.contains("commit " + id.substring(0, 7)) && committed.contains("no uncommitted changes"),
+                committed);
+            Files.writeString(calc, "title \"Mast\"\ninput V = 25 m/s\n");
+            Cli.run("report", calc.toString(), "-o", page.toString());
+            String changed = Jsoup.parse(Files.readString(page)).select("dd").eachText().toString();
+            assertTrue(changed.contains("with uncommitted changes to this calc"), changed);
+        } finally {
+            repo.close();
+        }
+    }
+
+    @Test
     void aPageNameForManyCalcsOrAMissingPathIsAUsageError() throws IOException {
         Cli.write(dir, "a.plumb", "x = 1 m\n");
         Cli.write(dir, "b.plumb", "y = 2 m\n");

@@ -1,0 +1,87 @@
+package dev.plumb.compare;
+
+import dev.plumb.diagnostics.Span;
+import dev.plumb.syntax.Expr;
+import dev.plumb.syntax.Statement;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A definition's formula as written, without spacing and with the names it uses put through a
+ * renaming: two definitions with the same key compute the same thing from the same values, which
+ * is how a renamed value is recognised across revisions.
+ */
+final class FormulaKey {
+    private FormulaKey() {
+    }
+
+    /** The key of what a statement computes, names renamed by {@code rename}; null when it has no formula. */
+    static String of(String text, Statement s, Map<String, String> rename) {
+        if (s instanceof Statement.Definition d) {
+            return (d.input() ? "input " : "") + written(text, d.expr(), rename);
+        }
+        if (s instanceof Statement.Seek k) {
+            // A solve is its search and its equation: the text from after the name to the equation's end.
+            List<Expr> parts = new ArrayList<>();
+            for (Expr e : new Expr[] {k.low(), k.high(), k.start(), k.lhs(), k.rhs()}) if (e != null) parts.add(e);
+            return "seek" + spaceless(substituted(text, new Span(k.name().span().end(), k.equation().end()), parts, rename));
+        }
+        return null;
+    }
+
+    /** The key of a check: its sides and comparisons, names renamed by {@code rename}. */
+    static String ofCheck(String text, Statement.Check c, Map<String, String> rename) {
+        StringBuilder out = new StringBuilder("check");
+        for (int i = 0; i < c.operands().size(); i++) {
+            if (i > 0) out.append(c.comparators().get(i - 1).symbol());
+            out.append(written(text, c.operands().get(i), rename));
+        }
+        return out.toString();
+    }
+
+    private static String written(String text, Expr e, Map<String, String> rename) {
+        Span whole = e instanceof Expr.Group g ? g.written() : e.span();
+        return spaceless(substituted(text, whole, List.of(e), rename));
+    }
+
+    /** The text of {@code whole} with every name referenced in {@code roots} replaced by its new name. */
+    private static String substituted(String text, Span whole, List<Expr> roots, Map<String, String> rename) {
+        List<Expr.Reference> refs = new ArrayList<>();
+        for (Expr r : roots) collect(r, refs);
+        refs.sort(Comparator.comparingInt(r -> r.span().start()));
+        StringBuilder out = new StringBuilder();
+        int at = whole.start();
+        for (Expr.Reference r : refs) {
+            if (r.span().start() < at || r.span().end() > whole.end()) continue;
+            out.append(text, at, r.span().start()).append(rename.getOrDefault(r.name(), r.name()));
+            at = r.span().end();
+        }
+        return out.append(text, at, Math.max(at, whole.end())).toString();
+    }
+
+    private static void collect(Expr e, List<Expr.Reference> out) {
+        if (e instanceof Expr.Reference r) {
+            out.add(r);
+        } else if (e instanceof Expr.Group g) {
+            collect(g.inner(), out);
+        } else if (e instanceof Expr.Call c) {
+            c.args().forEach(a -> collect(a, out));
+        } else if (e instanceof Expr.Unary u) {
+            collect(u.operand(), out);
+        } else if (e instanceof Expr.Binary b) {
+            collect(b.left(), out);
+            collect(b.right(), out);
+        } else if (e instanceof Expr.Piecewise p) {
+            for (Statement.Piece piece : p.pieces()) {
+                collect(piece.expr(), out);
+                if (piece.condition() != null) piece.condition().operands().forEach(o -> collect(o, out));
+            }
+        }
+    }
+
+    private static String spaceless(String s) {
+        return s.replaceAll("\\s+", "");
+    }
+}
