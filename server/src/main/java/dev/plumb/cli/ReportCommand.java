@@ -32,6 +32,11 @@ final class ReportCommand implements Callable<Integer> {
         description = "where to write: a .html file for one calc, else a folder (made if missing); default: beside each calc")
     Path output;
 
+    @Option(names = "--against", paramLabel = "REV",
+        description = "mark what changed since this git revision: each value that moved shows Δ and its former value, "
+            + "and the checks whose verdict flipped are listed first")
+    String against;
+
     @Mixin
     CommonOptions common;
 
@@ -60,6 +65,13 @@ final class ReportCommand implements Callable<Integer> {
                 + files.size() + " calcs: name a folder instead");
             return Main.USAGE;
         }
+        java.util.Map<Path, CalcReport.Changes> changes;
+        try {
+            changes = against == null ? java.util.Map.of() : ReportChanges.since(against, paths, common);
+        } catch (dev.plumb.revisions.RevisionProblem e) {
+            err.println("plumb: " + e.getMessage());
+            return Main.USAGE;
+        }
         Workspace workspace = new Workspace(common.sources(), common.settings());
         List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
         String made = LocalDate.now().toString();
@@ -70,7 +82,8 @@ final class ReportCommand implements Callable<Integer> {
                 Path target = target(c.analysis().file(), oneFile);
                 String shownPath = Location.path(c.analysis().file());
                 write(target, CalcReport.html(c.analysis(), c.diagnostics(), new CalcReport.Context(shownPath, made,
-                    dev.plumb.revisions.HeadState.of(c.analysis().file()).map(dev.plumb.revisions.HeadState::words).orElse(null))));
+                    dev.plumb.revisions.HeadState.of(c.analysis().file()).map(dev.plumb.revisions.HeadState::words).orElse(null),
+                    ReportChanges.of(changes, c.analysis().file(), against))));
                 out.println("wrote " + Printable.line(target.toString()));
                 if (contents != null) {
                     String link = contents.toAbsolutePath().getParent().relativize(target.toAbsolutePath()).toString();

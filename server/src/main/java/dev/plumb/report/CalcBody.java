@@ -24,7 +24,11 @@ final class CalcBody {
         private final List<Row.ValueRow> inputs = new ArrayList<>();
         private boolean inSection;
 
-        Writer(Analysis a, ReportValues values, FormulaMath math, References references, StringBuilder out) {
+        private final CalcReport.Changes changes;
+
+        Writer(Analysis a, ReportValues values, FormulaMath math, References references, StringBuilder out,
+               CalcReport.Changes changes) {
+            this.changes = changes;
             this.a = a;
             this.values = values;
             this.math = math;
@@ -47,7 +51,7 @@ final class CalcBody {
                 out.append("<section class=\"part\">").append(Html.element("h2", null, Html.text(s.title())));
                 inSection = true;
             } else if (r instanceof Row.ValueRow v) {
-                out.append(Definitions.html(a, v, values, math, references));
+                out.append(Definitions.html(a, v, values, math, references, ChangesBlock.of(changes, v.name())));
             } else if (r instanceof Row.FunctionRow f) {
                 out.append(function(f));
             } else if (r instanceof Row.CheckRow c) {
@@ -67,7 +71,8 @@ final class CalcBody {
             if (inputs.isEmpty()) return;
             List<String> each = new ArrayList<>();
             for (Row.ValueRow v : inputs) {
-                each.add(math.symbol(v.name()) + " = " + math.inlineQuantity(values.shown(v.value(), v.display())));
+                each.add(math.symbol(v.name()) + " = " + math.inlineQuantity(values.shown(v.value(), v.display()))
+                    + ChangesBlock.mark(ChangesBlock.of(changes, v.name())));
             }
             out.append(Html.element("p", "inputs-here", "Inputs: " + String.join(" · ", each)));
             inputs.clear();

@@ -22,7 +22,22 @@ public final class CalcReport {
      * @param made the date the report was made (ISO 8601)
      * @param revision the version-control line ("commit 1a2b3c4, uncommitted changes"), or null
      */
-    public record Context(String path, String made, String revision) {
+    public record Context(String path, String made, String revision, Changes changes) {
+        public Context(String path, String made, String revision) {
+            this(path, made, revision, null);
+        }
+    }
+
+    /**
+     * What changed since an earlier revision, worded by the caller: the revision compared with, each
+     * changed value's former reading ("was 34 m/s, +11.76 %") by name, and the checks whose
+     * verdict flipped ("✓ → ✗ line 57: …").
+     */
+    public record Changes(String against, java.util.Map<String, String> values, List<String> flipped) {
+        public Changes {
+            values = java.util.Map.copyOf(values);
+            flipped = List.copyOf(flipped);
+        }
     }
 
     private CalcReport() {
@@ -43,8 +58,9 @@ public final class CalcReport {
             i++;
         }
         body.append(Narrative.html(prose));
-        body.append(InputsTable.html(a, values, math));
-        CalcBody.Writer writer = new CalcBody.Writer(a, values, math, references, body);
+        body.append(ChangesBlock.html(context.changes()));
+        body.append(InputsTable.html(a, values, math, context.changes()));
+        CalcBody.Writer writer = new CalcBody.Writer(a, values, math, references, body, context.changes());
         for (; i < rows.size(); i++) writer.row(rows.get(i));
         writer.finish();
         body.append(LibraryBlock.html(a, references, dev.plumb.units.UnitRegistry.standard()));

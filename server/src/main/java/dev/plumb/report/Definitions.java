@@ -25,8 +25,9 @@ final class Definitions {
     private Definitions() {
     }
 
-    static String html(Analysis a, Row.ValueRow v, ReportValues values, FormulaMath math, References references) {
-        StringBuilder out = new StringBuilder("<div class=\"definition\" id=\"").append(Anchors.of(v.name())).append("\"")
+    static String html(Analysis a, Row.ValueRow v, ReportValues values, FormulaMath math, References references,
+                       String change) {
+        StringBuilder out = new StringBuilder("<div class=\"definition" + (change == null ? "" : " changed") + "\" id=\"").append(Anchors.of(v.name())).append("\"")
             .append(Data.of(v.name(), v.value(), values.shown(v.value(), v.display()))).append(">");
         ShownValue result = values.shown(v.value(), v.display());
         if (v.statement() instanceof Statement.Definition d) {
@@ -51,6 +52,7 @@ final class Definitions {
         if (!v.value().known()) {
             out.append(Html.element("p", "unknown", "Not computed: the findings below say why."));
         }
+        if (change != null) out.append(Html.element("p", "changed-from", ChangesBlock.mark(change)));
         out.append(meta(a, v, references));
         return out.append("</div>").toString();
     }

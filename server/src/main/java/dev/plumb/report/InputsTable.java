@@ -9,17 +9,17 @@ final class InputsTable {
     private InputsTable() {
     }
 
-    static String html(Analysis a, ReportValues values, FormulaMath math) {
+    static String html(Analysis a, ReportValues values, FormulaMath math, CalcReport.Changes changes) {
         StringBuilder rows = new StringBuilder();
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v && v.input()) {
-                rows.append(row(math, v.name(), v.value(), values.shown(v.value(), v.display()), v.note(), v.basis(), null));
+                rows.append(row(math, v.name(), v.value(), values.shown(v.value(), v.display()), v.note(), v.basis(), null,
+                    ChangesBlock.of(changes, v.name())));
             }
         }
         for (UsedValues.Used u : UsedValues.of(a)) {
             rows.append(row(math, u.name(), u.binding().value(), values.shown(u.binding().value(), u.binding().display()),
-                u.binding().note(),
-                u.binding().basis(), UsedValues.relative(a, u.file())));
+                u.binding().note(), u.binding().basis(), UsedValues.relative(a, u.file()), ChangesBlock.of(changes, u.name())));
         }
         if (rows.length() == 0) return "";
         return "<section class=\"inputs\"><h2>Input values and their sources</h2><table><thead><tr><th>Symbol</th><th>Value</th>"
@@ -27,11 +27,11 @@ final class InputsTable {
     }
 
     private static String row(FormulaMath math, String name, dev.plumb.analysis.Value v, ShownValue value, String note,
-                              String tag, String file) {
+                              String tag, String file, String change) {
         String source = Html.text(note == null ? "" : note)
             + (file == null ? "" : (note == null ? "" : " ") + Html.element("span", "from-file", "from " + Html.text(file)));
-        return "<tr" + Data.of(name, v, value) + "><td class=\"symbol\">" + math.symbol(name) + "</td><td class=\"value\">" + math.inlineQuantity(value)
-            + "</td><td class=\"source\">" + source + "</td><td class=\"tag\">" + Html.text(tag == null ? "" : tag)
-            + "</td></tr>";
+        return "<tr" + (change == null ? "" : " class=\"changed\"") + Data.of(name, v, value) + "><td class=\"symbol\">"
+            + math.symbol(name) + "</td><td class=\"value\">" + math.inlineQuantity(value) + ChangesBlock.mark(change)
+            + "</td><td class=\"source\">" + source + "</td><td class=\"tag\">" + Html.text(tag == null ? "" : tag) + "</td></tr>";
     }
 }

@@ -57,6 +57,10 @@ final class ReportPage {
         .status.clean::before { content: "✓ "; }
         .narrative { margin: 0.5em 0; }
         .inputs-here { margin: 0.4em 0; }
+        .changes { border: 1.5px solid var(--ink); padding: 0 0.8em 0.4em; margin: 1em 0; break-inside: avoid; }
+        .change { font-weight: 600; white-space: nowrap; }
+        .changed-from { margin: 0.1em 0 0 1.2em; }
+        .definition.changed { border-left: 4px double var(--ink); }
         .values-used, .root { margin: 0.2em 0 0.2em 1.2em; }
         table { border-collapse: collapse; width: 100%; font-size: 9.5pt; }
         th { text-align: left; font-weight: 600; border-bottom: 1px solid var(--ink); padding: 0.2em 0.5em 0.2em 0; }

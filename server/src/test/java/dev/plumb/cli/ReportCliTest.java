@@ -101,6 +101,31 @@ class ReportCliTest {
     }
 
     @Test
+    void againstARevisionEachChangedValueShowsItsFormerValueAndFlippedChecksAreListed() throws Exception {
+        dev.plumb.revisions.GitFixture repo = dev.plumb.revisions.GitFixture.init(dir.resolve("repo"));
+        try {
+            Path calc = repo.write("mast.plumb", "input V = 20 m/s\ninput L = 3 m\nq = 0.5 * 1.2 kg/m^3 * V^2\n"
+                + "check q < 300 Pa\n");
+            repo.commit("the mast");
+            Files.writeString(calc, "input V = 25 m/s\ninput L = 3 m\nq = 0.5 * 1.2 kg/m^3 * V^2\ncheck q < 300 Pa\n");
+            Path page = dir.resolve("mast.html");
+            Cli run = Cli.run("report", calc.toString(), "-o", page.toString(), "--against", "HEAD");
+            assertEquals(1, run.exitCode(), "the check now fails: " + run.err());
+            Document d = Jsoup.parse(Files.readString(page));
+            // q = ½·1.2·20² = 240 Pa before, ½·1.2·25² = 375 Pa now: (375 − 240)/240 = +56.25 %.
+            assertEquals("Δ was 240 Pa, +56.25 %", d.selectFirst("div.definition.changed[data-name=q] .change").text());
+            assertEquals("Δ was 20 m/s, +25.00 %", d.selectFirst("tr.changed[data-name=V] .change").text());
+            assertTrue(d.select("tr[data-name=L]").hasClass("changed") == false, "an unchanged input is not marked");
+            assertTrue(d.selectFirst("section.changes").text().contains("✓ → ✗"), d.selectFirst("section.changes").text());
+            Cli bad = Cli.run("report", calc.toString(), "-o", page.toString(), "--against", "no-such-revision");
+            assertEquals(2, bad.exitCode());
+            assertTrue(bad.err().startsWith("plumb: ") && !bad.err().contains("Exception"), bad.err());
+        } finally {
+            repo.close();
+        }
+    }
+
+    @Test
     void aPageNameForManyCalcsOrAMissingPathIsAUsageError() throws IOException {
         Cli.write(dir, "a.plumb", "x = 1 m\n");
         Cli.write(dir, "b.plumb", "y = 2 m\n");
