@@ -34,7 +34,7 @@ final class ReportPage {
 
     private static final String STYLE = """
         :root { --ink: #1b1b1b; --quiet: #5b5b5b; --rule: #c9c9c9; --bad: #8a1c1c; --good: #1d5c2e; }
-        @page { size: A4; margin: 22mm 18mm 20mm 18mm;
+        @page { margin: 22mm 18mm 20mm 18mm;
           @bottom-right { content: "page " counter(page) " of " counter(pages); font: 8pt sans-serif; color: #5b5b5b; }
           @bottom-left { content: "Plumb calc report"; font: 8pt sans-serif; color: #5b5b5b; } }
         @page :left { margin-left: 18mm; }
