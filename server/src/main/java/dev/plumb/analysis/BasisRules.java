@@ -243,10 +243,11 @@ final class BasisRules {
             String here = a.frontal() == null ? "" : " (here `" + a.frontal() + "`)";
             // When the area is a definition of the document, its formula can be replaced by the frontal one.
             java.util.List<FixRequest> fix = a.frontal() == null || a.label() == null ? java.util.List.of()
-                : java.util.List.of(new FixRequest.Formula("Use the frontal area " + a.frontal() + " for " + a.label(), a.label(),
+                : java.util.List.of(new FixRequest.Formula("Use the " + (c.basis().equals("planform") ? "planform" : "frontal")
+                    + " area " + a.frontal() + " for " + a.label(), a.label(),
                     a.frontal()));
             reporter.report(Code.BASIS_AREA, b.span(), c.label() + " is referenced to " + c.basis() + " area, but " + area
-                + " has the shape of " + k.words + ", a wetted area: " + frontalFix(k) + here, java.util.List.of(), fix);
+                + " has the shape of " + k.words + ", a wetted area: " + frontalFix(k, c.basis()) + here, java.util.List.of(), fix);
         } else if ("crossflow".equals(c.flow()) && k == Shape.Kind.CIRCLE) {
             warn(b, c.label() + " is referenced to " + c.basis() + " area in cross-flow, but " + area + " has the shape of "
                 + k.words + ", the end of a cylinder, which faces axial flow: " + flowFix(c.flow()), Severity.WARNING);
@@ -267,11 +268,13 @@ final class BasisRules {
             + "around the body (the body's own density belongs in its weight)");
     }
 
-    private static String frontalFix(Shape.Kind k) {
+    private static String frontalFix(Shape.Kind k, String basis) {
         return switch (k) {
             case LATERAL_SURFACE -> "for a cylinder in cross-flow use the projected area d·L";
             case SPHERE_SURFACE -> "for a sphere use the frontal area π·d²/4";
-            default -> "the frontal area of a plate is one face, b·h";
+            // A lift coefficient's planform area, like a drag coefficient's frontal one, is one face of the plate.
+            default -> basis.equals("planform") ? "the planform area of a wing or plate is one face, span times chord"
+                : "the frontal area of a plate is one face, b·h";
         };
     }
 

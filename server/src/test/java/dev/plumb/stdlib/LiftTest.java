@@ -196,7 +196,9 @@ class LiftTest {
         RangeAssertions.assertOneWarning(WING + "CL = cl_wing_helmbold(4 deg, 2, 2 * pi)\nA = plate_wetted_area(b, c)\n"
             + "L = CL * A * q\n", "basis.area", "planform");
         RangeAssertions.assertOneWarning(WING + "CD = cd_induced(0.5, 4, 0.9)\nA = b * c   as frontal\nD = CD * A * q\n",
-            "basis.area", "planform");
+            "basis.area", "planform");        // The repair names the planform area, not the frontal one: one face of the wing, span times chord.
+        RangeAssertions.assertOneWarning(WING + "CL = cl_thin_airfoil(4 deg)\nA = 2 * b * c\nL = CL * A * q\n",
+            "basis.area", "the planform area of a wing or plate is one face");
     }
 
     // ---------------------------------------------------------------- ranges
