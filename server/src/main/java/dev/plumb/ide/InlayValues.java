@@ -13,8 +13,17 @@ public final class InlayValues {
     }
 
     public static List<InlayValue> of(Analysis a) {
+        return of(a, 0, Integer.MAX_VALUE);
+    }
+
+    /**
+     * The values of the rows that end within {@code from..to} (offsets): an editor asks for the
+     * lines it shows, and only those are worded.
+     */
+    public static List<InlayValue> of(Analysis a, int from, int to) {
         List<InlayValue> out = new ArrayList<>();
         for (Row r : a.rows()) {
+            if (r.span().end() < from || r.span().end() > to) continue;
             if (r instanceof Row.ValueRow v && !v.input()) {
                 String solved = v.solution() == null ? "" : "  (solved, " + v.solution().iterations() + " iterations)";
                 out.add(new InlayValue(v.span().end(), "= " + ValueText.of(a, v) + solved, v.name()));

@@ -131,7 +131,7 @@ final class PlumbTextDocumentService implements TextDocumentService {
     @Override
     public CompletableFuture<List<InlayHint>> inlayHint(InlayHintParams params) {
         return with(params.getTextDocument().getUri(), a -> server.settings().inlayHints()
-            ? ProtocolMapping.inlayHints(a, enc()) : List.of());
+            ? ProtocolMapping.inlayHints(a, enc(), params.getRange()) : List.of());
     }
 
     @Override

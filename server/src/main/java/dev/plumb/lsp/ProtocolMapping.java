@@ -63,9 +63,12 @@ final class ProtocolMapping {
         };
     }
 
-    static List<InlayHint> inlayHints(Analysis a, Positions.Encoding enc) {
+    /** The hints of the rows within {@code range} (the lines the editor shows); all rows for a null range. */
+    static List<InlayHint> inlayHints(Analysis a, Positions.Encoding enc, org.eclipse.lsp4j.Range range) {
+        int from = range == null ? 0 : Positions.offset(a.text(), range.getStart(), enc);
+        int to = range == null ? Integer.MAX_VALUE : Positions.offset(a.text(), range.getEnd(), enc);
         List<InlayHint> out = new ArrayList<>();
-        for (InlayValue v : dev.plumb.ide.InlayValues.of(a)) {
+        for (InlayValue v : dev.plumb.ide.InlayValues.of(a, from, to)) {
             InlayHint h = new InlayHint(Positions.position(a.text(), lineEnd(a.text(), v.offset()), enc),
                 Either.forLeft("  " + v.label()));
             h.setKind(InlayHintKind.Type);

@@ -264,6 +264,14 @@ class FeaturesTest {
     }
 
     @Test
+    void inlayHintsAreMadeForTheLinesAskedFor() throws Exception {
+        TextDocumentService s = open("lines.plumb", "a = 1 m\nb = 2 m\nc = 3 m\nd = 4 m\n", null);
+        var hints = s.inlayHint(new InlayHintParams(doc(uri("lines.plumb")), new Range(new Position(1, 0), new Position(2, 7))))
+            .get(10, TimeUnit.SECONDS);
+        assertEquals(List.of("  = 2 m", "  = 3 m"), hints.stream().map(h -> h.getLabel().getLeft()).toList());
+    }
+
+    @Test
     void settingsChangeWhatIsShown() throws Exception {
         JsonObject options = new JsonObject();
         options.addProperty("significantFigures", 2);
