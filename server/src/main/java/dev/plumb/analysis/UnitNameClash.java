@@ -7,11 +7,9 @@ import dev.plumb.syntax.Statement;
 import dev.plumb.units.Unit;
 import dev.plumb.units.UnitRegistry;
 import dev.plumb.units.UnitResult;
-import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import java.util.function.Consumer;
 import java.util.regex.Pattern;
 
 /**
@@ -32,8 +30,9 @@ final class UnitNameClash {
                        UnitRegistry units, Reporter reporter) {
         Set<String> said = new HashSet<>();
         for (Statement s : statements) {
-            for (Expr e : expressions(s)) {
-                quantities(e, q -> {
+            for (Expr e : dev.plumb.syntax.ExprWalk.of(s)) {
+                dev.plumb.syntax.ExprWalk.each(e, node -> {
+                    if (!(node instanceof Expr.Quantity q)) return;
                     String word = q.unit() == null ? null : q.unit().text();
                     if (word == null || !WORD.matcher(word).matches() || said.contains(word)) return;
                     Binding.ValueBinding value = own.apply(word) != null ? own.apply(word)
@@ -57,35 +56,4 @@ final class UnitNameClash {
             List.of(new Fix("Multiply by the value " + word + " (changes the value)", q.span(), product)), List.of());
     }
 
-    private static List<Expr> expressions(Statement s) {
-        List<Expr> out = new ArrayList<>();
-        if (s instanceof Statement.Definition d) out.add(d.expr());
-        if (s instanceof Statement.Check c) out.addAll(c.operands());
-        if (s instanceof Statement.Function f) out.add(f.body());
-        if (s instanceof Statement.Seek k) {
-            for (Expr e : new Expr[] {k.low(), k.high(), k.start(), k.lhs(), k.rhs()}) if (e != null) out.add(e);
-        }
-        return out;
-    }
-
-    /** Every quantity written in an expression, in source order. */
-    private static void quantities(Expr e, Consumer<Expr.Quantity> visit) {
-        if (e instanceof Expr.Quantity q) {
-            visit.accept(q);
-        } else if (e instanceof Expr.Call c) {
-            c.args().forEach(a -> quantities(a, visit));
-        } else if (e instanceof Expr.Group g) {
-            quantities(g.inner(), visit);
-        } else if (e instanceof Expr.Unary u) {
-            quantities(u.operand(), visit);
-        } else if (e instanceof Expr.Binary b) {
-            quantities(b.left(), visit);
-            quantities(b.right(), visit);
-        } else if (e instanceof Expr.Piecewise p) {
-            for (var piece : p.pieces()) {
-                quantities(piece.expr(), visit);
-                if (piece.condition() != null) piece.condition().operands().forEach(o -> quantities(o, visit));
-            }
-        }
-    }
 }

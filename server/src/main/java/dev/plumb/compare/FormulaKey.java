@@ -62,23 +62,9 @@ final class FormulaKey {
     }
 
     private static void collect(Expr e, List<Expr.Reference> out) {
-        if (e instanceof Expr.Reference r) {
-            out.add(r);
-        } else if (e instanceof Expr.Group g) {
-            collect(g.inner(), out);
-        } else if (e instanceof Expr.Call c) {
-            c.args().forEach(a -> collect(a, out));
-        } else if (e instanceof Expr.Unary u) {
-            collect(u.operand(), out);
-        } else if (e instanceof Expr.Binary b) {
-            collect(b.left(), out);
-            collect(b.right(), out);
-        } else if (e instanceof Expr.Piecewise p) {
-            for (Statement.Piece piece : p.pieces()) {
-                collect(piece.expr(), out);
-                if (piece.condition() != null) piece.condition().operands().forEach(o -> collect(o, out));
-            }
-        }
+        dev.plumb.syntax.ExprWalk.each(e, node -> {
+            if (node instanceof Expr.Reference r) out.add(r);
+        });
     }
 
     private static String spaceless(String s) {

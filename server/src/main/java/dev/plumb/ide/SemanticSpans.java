@@ -51,18 +51,8 @@ public final class SemanticSpans {
     }
 
     private static void expr(Expr e, List<Token> out) {
-        if (e instanceof Expr.Quantity q && q.unit() != null) out.add(new Token(q.unit().span(), Type.UNIT));
-        else if (e instanceof Expr.Call c) c.args().forEach(x -> expr(x, out));
-        else if (e instanceof Expr.Unary u) expr(u.operand(), out);
-        else if (e instanceof Expr.Group g) expr(g.inner(), out);
-        else if (e instanceof Expr.Binary b) {
-            expr(b.left(), out);
-            expr(b.right(), out);
-        } else if (e instanceof Expr.Piecewise p) {
-            for (var piece : p.pieces()) {
-                expr(piece.expr(), out);
-                if (piece.condition() != null) piece.condition().operands().forEach(o -> expr(o, out));
-            }
-        }
+        dev.plumb.syntax.ExprWalk.each(e, node -> {
+            if (node instanceof Expr.Quantity q && q.unit() != null) out.add(new Token(q.unit().span(), Type.UNIT));
+        });
     }
 }

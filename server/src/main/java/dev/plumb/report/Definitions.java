@@ -73,28 +73,14 @@ final class Definitions {
     /** "where ρ = 1.2 kg/m³, V = 31 m/s": the values a long formula uses, in the order it uses them. */
     private static String where(Statement.Definition d, ReportValues values, FormulaMath math) {
         java.util.LinkedHashSet<String> names = new java.util.LinkedHashSet<>();
-        collect(d.expr(), names);
+        dev.plumb.syntax.ExprWalk.each(d.expr(), node -> {
+            if (node instanceof Expr.Reference r) names.add(r.name());
+        });
         List<String> each = new ArrayList<>();
         for (String n : names) {
             values.find(n).ifPresent(v -> each.add(math.symbol(n) + " = " + math.inlineQuantity(v)));
         }
         return Html.element("p", "values-used", "where " + String.join(", ", each));
-    }
-
-    private static void collect(Expr e, java.util.Set<String> names) {
-        if (e instanceof Expr.Reference r) names.add(r.name());
-        else if (e instanceof Expr.Call c) c.args().forEach(a -> collect(a, names));
-        else if (e instanceof Expr.Group g) collect(g.inner(), names);
-        else if (e instanceof Expr.Unary u) collect(u.operand(), names);
-        else if (e instanceof Expr.Binary b) {
-            collect(b.left(), names);
-            collect(b.right(), names);
-        } else if (e instanceof Expr.Piecewise p) {
-            for (var piece : p.pieces()) {
-                collect(piece.expr(), names);
-                if (piece.condition() != null) piece.condition().operands().forEach(o -> collect(o, names));
-            }
-        }
     }
 
     private static String meta(Analysis a, Row.ValueRow v, References references) {

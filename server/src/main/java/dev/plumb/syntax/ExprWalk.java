@@ -1,0 +1,44 @@
+package dev.plumb.syntax;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+
+/** The one walk over the expression tree that every reader of formulas shares. */
+public final class ExprWalk {
+    private ExprWalk() {
+    }
+
+    /** Every node of {@code e}, a node before its parts, parts in source order (a piece's formula before its condition). */
+    public static void each(Expr e, Consumer<Expr> visit) {
+        if (e == null) return;
+        visit.accept(e);
+        if (e instanceof Expr.Group g) {
+            each(g.inner(), visit);
+        } else if (e instanceof Expr.Call c) {
+            c.args().forEach(a -> each(a, visit));
+        } else if (e instanceof Expr.Unary u) {
+            each(u.operand(), visit);
+        } else if (e instanceof Expr.Binary b) {
+            each(b.left(), visit);
+            each(b.right(), visit);
+        } else if (e instanceof Expr.Piecewise p) {
+            for (Statement.Piece piece : p.pieces()) {
+                each(piece.expr(), visit);
+                if (piece.condition() != null) piece.condition().operands().forEach(o -> each(o, visit));
+            }
+        }
+    }
+
+    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation. */
+    public static List<Expr> of(Statement s) {
+        List<Expr> out = new ArrayList<>();
+        if (s instanceof Statement.Definition d) out.add(d.expr());
+        if (s instanceof Statement.Check c) out.addAll(c.operands());
+        if (s instanceof Statement.Function f) out.add(f.body());
+        if (s instanceof Statement.Seek k) {
+            for (Expr e : new Expr[] {k.low(), k.high(), k.start(), k.lhs(), k.rhs()}) if (e != null) out.add(e);
+        }
+        return out;
+    }
+}
