@@ -145,6 +145,6 @@ EOF
 chmod 0755 "$root/DEBIAN/postinst" "$root/DEBIAN/prerm"
 deb=$out/plumb_${deb_version}_${deb_arch}.deb
 rm -f "$out"/plumb_*.deb
-fakeroot dpkg-deb --build -Zxz "$root" "$deb" >/dev/null
+fakeroot dpkg-deb --build -Zgzip -z6 "$root" "$deb" >/dev/null
 echo "build-image: $deb"
 rm -rf "$work"
