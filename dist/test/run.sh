@@ -19,6 +19,7 @@ set -euo pipefail
 repo=$(cd "$(dirname "$0")/../.." && pwd)
 cd "$repo"
 
+began=$(date +%s)
 passed=0
 failed=0
 ok() { passed=$((passed + 1)); echo "bundles: ok $1"; }
@@ -186,5 +187,6 @@ else
   echo "bundles: no .deb was built (fakeroot, dpkg-deb or dpkg-shlibdeps missing)"
 fi
 
+echo "bundles: took $(($(date +%s) - began)) s in all"
 echo "bundles: $passed passed, $failed failed"
 [ "$failed" -eq 0 ]
