@@ -9,9 +9,9 @@
 #   - the .deb (when it was built), unpacked with dpkg-deb, likewise, with the class-data-sharing
 #     archive its postinst makes.
 # Each runs `bin/plumb check` on the samples, `plumb eval` on each sample against the golden
-# output the Java tests keep, `plumb lsp` through initialize/shutdown, and the launcher's rules
-# (UTF-8 file names under LANG=C, NO_COLOR, exit codes). Prints one line per check and
-# "N passed, M failed"; exits 1 when any check fails.
+# output the Java tests keep, `plumb report`, `plumb lsp` through initialize/shutdown, and the
+# launcher's rules (UTF-8 file names under LANG=C, NO_COLOR, exit codes). Prints one line per
+# check and "N passed, M failed"; exits 1 when any check fails.
 #
 #   bash dist/test/run.sh            build, then test
 #   bash dist/test/run.sh --no-build test what dist/target holds
@@ -112,6 +112,15 @@ check_installation() {
       fi
     done < <(find "$calcs" -name '*.plumb' | sort)
     if [ "$differ" = 0 ]; then ok "$label: eval of all $count samples equals the golden output"; else bad "$label: eval of $differ of $count samples differs from the golden output"; fi
+
+    # The printable reports: a page per calc and a contents page.
+    code=$(run_in "$plumb" "$place" report samples/ -o reports)
+    pages=$(find "$place/reports" -name '*.html' 2>/dev/null | wc -l)
+    if [ "$code" = 1 ] && [ -s "$place/reports/index.html" ] && [ "$pages" -eq $((count + 1)) ]; then
+      ok "$label: report samples/ writes $pages pages (exit 1 for the mistakes sample)"
+    else
+      bad "$label: report samples/ exit $code, $pages pages: $(head -c 400 "$work/err.txt")"
+    fi
 
     # Exit codes passed through: clean, findings, usage.
     printf 'input L = 2 m\nA = L * L\ncheck A <= 5 m^2\n' > "$calcs/clean.plumb"
