@@ -9,7 +9,7 @@
 #   - the .deb (when it was built), unpacked with dpkg-deb, likewise, with the class-data-sharing
 #     archive its postinst makes.
 # Each runs `bin/plumb check` on the samples, `plumb eval` on each sample against the golden
-# output the Java tests keep, `plumb report`, `plumb lsp` through initialize/shutdown, and the
+# output the Java tests keep, `plumb report`, `plumb diff`, `plumb lsp` through initialize/shutdown, and the
 # launcher's rules (UTF-8 file names under LANG=C, NO_COLOR, exit codes). Prints one line per
 # check and "N passed, M failed"; exits 1 when any check fails.
 #
@@ -120,6 +120,19 @@ check_installation() {
       ok "$label: report samples/ writes $pages pages (exit 1 for the mistakes sample)"
     else
       bad "$label: report samples/ exit $code, $pages pages: $(head -c 400 "$work/err.txt")"
+    fi
+
+    # The value diff reads git revisions with JGit inside the runtime: a changed input is found.
+    mkdir -p "$place/diffed"
+    printf 'input L = 2 m\nA = L * L\n' > "$place/diffed/plate.plumb"
+    (cd "$place" && git init -q && git add diffed &&
+      git -c user.name=bundle-test -c user.email=bundle-test@localhost commit -qm plate) > /dev/null
+    printf 'input L = 3 m\nA = L * L\n' > "$place/diffed/plate.plumb"
+    code=$(run_in "$plumb" "$place" diff HEAD -- diffed/)
+    if [ "$code" = 1 ] && grep -q '9' "$work/out.txt"; then
+      ok "$label: diff HEAD finds the changed value (exit 1)"
+    else
+      bad "$label: diff HEAD exit $code: $(head -c 400 "$work/out.txt") $(head -c 400 "$work/err.txt")"
     fi
 
     # Exit codes passed through: clean, findings, usage.
