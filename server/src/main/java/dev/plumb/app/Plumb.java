@@ -15,6 +15,7 @@ public final class Plumb {
 
     public static void main(String[] args) {
         System.exit(Main.run(args, new PrintStream(System.out, true, StandardCharsets.UTF_8),
-            new PrintStream(System.err, true, StandardCharsets.UTF_8), Map.of("lsp", new LspCommand())));
+            new PrintStream(System.err, true, StandardCharsets.UTF_8), Map.of("lsp", new LspCommand()),
+            BuildInfo.load()));
     }
 }

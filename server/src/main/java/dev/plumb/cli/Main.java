@@ -33,7 +33,16 @@ public final class Main implements Runnable {
 
     /** As {@link #run(String[], PrintStream, PrintStream)}, with more commands by name (the launcher's). */
     public static int run(String[] args, PrintStream out, PrintStream err, java.util.Map<String, Object> more) {
+        return run(args, out, err, more, null);
+    }
+
+    /** As above, with the launcher's `--version` text (the build's version and commit); null keeps this class's. */
+    public static int run(String[] args, PrintStream out, PrintStream err, java.util.Map<String, Object> more,
+            CommandLine.IVersionProvider version) {
         CommandLine cli = new CommandLine(new Main());
+        if (version != null) {
+            cli.getCommandSpec().versionProvider(version);
+        }
         more.forEach(cli::addSubcommand);
         cli.setOut(new java.io.PrintWriter(new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8), true));
         // Errors echo what was typed (paths, option values): neutralised like every report.
