@@ -60,8 +60,8 @@ class DiffCliTest {
             String[] ids = twoCommits(git);
             Cli run = Cli.run("diff", "--no-color", "HEAD~1", "HEAD", "--", dir.toString());
             assertEquals(1, run.exitCode(), run.err());
-            String air = top().resolve("site/air.plumb").toString();
-            String panel = top().resolve("site/hoarding.plumb").toString();
+            String air = Location.path(top().resolve("site/air.plumb"));
+            String panel = Location.path(top().resolve("site/hoarding.plumb"));
             // by hand: ρ 1.25 → 1.20 is −4 %; V 20 → 30 m/s is +50 %; q = ρV²/2 goes 250 → 0.5 · 1.2 · 900 = 540 Pa,
             // +116 % (540/250 = 2.16); F = Cd·A·q goes with q: 2600 → 1.3 · 8 · 540 = 5616 N, over 5.5 kN.
             assertEquals(List.of(
@@ -102,8 +102,8 @@ class DiffCliTest {
             Cli run = Cli.run("diff", "--format", "markdown", "HEAD~1", "--", dir.toString());
             assertEquals(1, run.exitCode(), run.err());
             List<String> lines = run.out().lines().toList();
-            String panel = top().resolve("site/hoarding.plumb").toString().replace("_", "\\_");
-            String mast = top().resolve("site/a-mast.plumb").toString().replace("_", "\\_");
+            String panel = Location.path(top().resolve("site/hoarding.plumb")).replace("_", "\\_");
+            String mast = Location.path(top().resolve("site/a-mast.plumb")).replace("_", "\\_");
             int at = lines.indexOf("**1 check flipped**");
             assertTrue(at > 0, run.out());
             assertEquals(List.of(
@@ -158,7 +158,7 @@ class DiffCliTest {
             assertEquals(1.16, f.get("relative").getAsDouble(), 1e-12);
             assertEquals("used", values.get(1).getAsJsonObject().get("kind").getAsString());
             assertEquals("new", panel.getAsJsonArray("findings").get(0).getAsJsonObject().get("change").getAsString());
-            assertEquals(top().resolve("site/air.plumb").toString(), panel.getAsJsonArray("usedFilesChanged").get(0).getAsString());
+            assertEquals(Location.path(top().resolve("site/air.plumb")), panel.getAsJsonArray("usedFilesChanged").get(0).getAsString());
         }
     }
 
@@ -210,7 +210,9 @@ class DiffCliTest {
         Cli run = Cli.run("diff", "--no-color", before.resolve("hoarding.plumb").toString(), after.resolve("hoarding.plumb").toString());
         assertEquals(1, run.exitCode(), run.out() + run.err());
         List<String> lines = run.out().lines().toList();
-        assertEquals("Value diff: " + before.resolve("hoarding.plumb") + " → " + after.resolve("hoarding.plumb")
+        // Paths read as everywhere in the output: relative to the working folder when near it (Location).
+        assertEquals("Value diff: " + Location.path(before.resolve("hoarding.plumb")) + " → "
+            + Location.path(after.resolve("hoarding.plumb"))
             + "; values within 1e-9 relative count as unchanged.", lines.get(0));
         // by hand: only ρ moves, −4 %; q and F are proportional to it: −4 % each.
         assertTrue(lines.contains("    q  line 8  250 Pa → 240 Pa  -4.000 %"), run.out());
