@@ -5,6 +5,7 @@
 import * as vscode from 'vscode';
 import { LanguageClient, type LanguageClientOptions, type ServerOptions } from 'vscode-languageclient/node';
 import type { ClientFactory, PlumbClient } from './controller';
+import { configurationAnswer } from './settings';
 
 export const CLIENT_ID = 'plumb';
 export const CLIENT_NAME = 'Plumb Language Server';
@@ -26,7 +27,7 @@ export const createClient: ClientFactory = (options) => {
         // The server asks for the section "plumb": answer with the settings mapped to its keys.
         configuration: (params, token, next) => {
           if (params.items.every((item) => item.section !== 'plumb')) return next(params, token);
-          return params.items.map((item) => (item.section === 'plumb' ? options.configuration() : null));
+          return configurationAnswer(params.items, options.configuration);
         },
       },
     },

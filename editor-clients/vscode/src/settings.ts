@@ -75,6 +75,15 @@ export function serverSettings(settings: SettingsReader): ServerSettings {
   return out;
 }
 
+/**
+ * The answer to the server's workspace/configuration request: the server settings for each item
+ * of the section "plumb", null for any other section (this extension has no other settings to
+ * give).
+ */
+export function configurationAnswer(items: ReadonlyArray<{ section?: string }>, settings: () => ServerSettings): Array<ServerSettings | null> {
+  return items.map((item) => (item.section === 'plumb' ? settings() : null));
+}
+
 function wholeNumber(value: unknown): number | undefined {
   return typeof value === 'number' && Number.isFinite(value) ? Math.round(value) : undefined;
 }

@@ -2,7 +2,7 @@
 
 import * as assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
-import { launchSettings, reportOpening, serverSettings, type SettingsReader } from '../src/settings';
+import { configurationAnswer, launchSettings, reportOpening, serverSettings, type SettingsReader } from '../src/settings';
 
 function reader(values: Record<string, unknown>): SettingsReader {
   return { get: <T>(key: string) => values[key] as T | undefined };
@@ -47,6 +47,19 @@ describe('server settings', () => {
 
   it('sends "evaluate on save only" as the server\'s diagnosticsOnSaveOnly', () => {
     assert.deepEqual(serverSettings(reader({ evaluateOnSaveOnly: true })), { diagnosticsOnSaveOnly: true });
+  });
+});
+
+describe('the answer to workspace/configuration', () => {
+  it('gives the server settings for the section plumb and nothing for another', () => {
+    let asked = 0;
+    const settings = () => {
+      asked++;
+      return { significantFigures: 5 };
+    };
+    assert.deepEqual(configurationAnswer([{ section: 'plumb' }, { section: 'editor' }, {}], settings),
+      [{ significantFigures: 5 }, null, null]);
+    assert.equal(asked, 1);
   });
 });
 

@@ -15,7 +15,7 @@ import {
 import type { InlayHint, InitializeResult } from 'vscode-languageserver-protocol';
 import { resolveLaunch, type Host, type ServerLaunch } from '../../src/launch';
 import { offersOf, readReportAnswer, unitChoices } from '../../src/protocol';
-import { launchSettings, serverSettings, type SettingsReader } from '../../src/settings';
+import { configurationAnswer, launchSettings, serverSettings, type SettingsReader } from '../../src/settings';
 
 /** The package.json defaults, as the editor hands them over, with some keys changed. */
 export function settingsWith(changes: Record<string, unknown>): SettingsReader {
@@ -100,7 +100,7 @@ export async function exerciseServer(launch: ServerLaunch): Promise<void> {
   });
   connection.onRequest('workspace/configuration', (params: { items: Array<{ section?: string }> }) => {
     setImmediate(configured);
-    return params.items.map((item) => (item.section === 'plumb' ? serverSettings(editorSettings) : null));
+    return configurationAnswer(params.items, () => serverSettings(editorSettings));
   });
   connection.onRequest('client/registerCapability', () => null);
   connection.onRequest('workspace/inlayHint/refresh', () => null);
