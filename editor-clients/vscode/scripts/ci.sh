@@ -2,9 +2,12 @@
 # CI of the editor extension, from a fresh machine: Node.js 20 or later with npm, `npm ci` from the
 # committed lock file, `tsc --noEmit`, the .vsix (scripts/package.sh: compile, copy the server jar
 # in, package), then every node test, the real-server and .vsix ones included. Needs Java 17 and
-# server/target/plumb.jar (`mvn -B verify` makes it). Prints the time each step took.
+# server/target/plumb.jar (`mvn -B verify` makes it). Prints the time each step took. The .vsix
+# goes to target/vscode/ of the repository; under CI (CI set) the installed and compiled files are
+# removed at the end, because the release bundle copies editor-clients/ as it lies on disk.
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+repo="$(cd "$here/../.." && pwd)"
 began=$SECONDS
 step=$SECONDS
 took() {
@@ -31,9 +34,12 @@ npm ci --no-audit --no-fund
 took "npm ci"
 npx tsc -p . --noEmit
 took "tsc --noEmit"
-vsix="$(bash scripts/package.sh)"
+vsix="$(PLUMB_VSIX_DIR="$repo/target/vscode" bash scripts/package.sh)"
 unzip -l "$vsix" | tail -n 1
 took "package ($vsix)"
 PLUMB_VSIX="$vsix" PLUMB_REQUIRE_SERVER=1 npm test
 took "node tests"
-echo "vscode extension: all steps in $((SECONDS - began)) s"
+if [ -n "${CI:-}" ]; then
+  rm -rf node_modules out dist
+fi
+echo "vscode extension: all steps in $((SECONDS - began)) s; the package is $vsix"
