@@ -90,6 +90,14 @@ describe('package.json', () => {
     assert.deepEqual(properties['plumb.showValuesAs'].enum, [...VALUE_DISPLAYS]);
   });
 
+  it('is documented: the README names every setting and every command', () => {
+    const readme = fs.readFileSync(path.join(EXTENSION, 'README.md'), 'utf8');
+    for (const key of Object.keys(properties)) assert.ok(readme.includes(`\`${key}\``), `README lacks ${key}`);
+    for (const c of contributes.commands as Command[]) {
+      assert.ok(readme.includes(`**Plumb: ${c.title}**`), `README lacks the command "Plumb: ${c.title}"`);
+    }
+  });
+
   it('lets only the user, never a workspace, say which program starts the server', () => {
     for (const key of LAUNCH_SETTING_KEYS) assert.equal(properties[`plumb.${key}`].scope, 'machine', key);
     for (const key of SERVER_SETTING_KEYS) assert.notEqual(properties[`plumb.${key}`].scope, 'machine', key);

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # CI of the editor extension, from a fresh machine: Node.js 20 or later with npm, `npm ci` from the
-# committed lock file, `tsc --noEmit`, the .vsix (scripts/package.sh: compile, copy the server jar
+# committed lock file, `tsc --noEmit`, the .vsix (scripts/package.js: compile, copy the server jar
 # in, package), then every node test, the real-server and .vsix ones included. Needs Java 17 and
 # server/target/plumb.jar (`mvn -B verify` makes it). Prints the time each step took. The .vsix
 # goes to target/vscode/ of the repository; under CI (CI set) the installed and compiled files are
@@ -34,7 +34,7 @@ npm ci --no-audit --no-fund
 took "npm ci"
 npx tsc -p . --noEmit
 took "tsc --noEmit"
-vsix="$(PLUMB_VSIX_DIR="$repo/target/vscode" bash scripts/package.sh)"
+vsix="$(PLUMB_VSIX_DIR="$repo/target/vscode" node scripts/package.js)"
 unzip -l "$vsix" | tail -n 1
 took "package ($vsix)"
 PLUMB_VSIX="$vsix" PLUMB_REQUIRE_SERVER=1 npm test
