@@ -171,10 +171,18 @@ check_installation() {
 
 cp -r "$repo/server/src/test/resources/golden" "$work/golden"
 
-# The portable bundle, with the machine's Java and no Maven.
+# The portable bundle, with the machine's Java and no Maven. Its launcher keeps an archive of
+# Plumb's classes in the user's cache folder, made by the first check: here a folder of the test's
+# own, so every run after the first (their output compared below, as all runs are) maps it.
+export XDG_CACHE_HOME=$work/cache
 mkdir "$work/bundle" && tar -xzf "$tgz" -C "$work/bundle"
 bundle=$work/bundle/plumb-$version
 PLUMB_PATH=$work/path-no-mvn PLUMB_UNSET_JAVA_HOME='' check_installation bundle "$bundle/bin/plumb" "$bundle"
+if ls "$work"/cache/plumb/cds-java*.jsa > /dev/null 2>&1; then
+  ok "bundle: an archive of its classes in the user's cache: $(basename "$(ls "$work"/cache/plumb/cds-java*.jsa)")"
+else
+  bad "bundle: no class-data archive was made in $work/cache/plumb"
+fi
 # Through a link on the PATH, as a user installs it.
 mkdir "$work/links" && ln -s "$bundle/bin/plumb" "$work/links/plumb"
 code=$(PLUMB_PATH=$work/links:$work/path-no-mvn run_in plumb "$work" --version)
