@@ -10,6 +10,6 @@ import picocli.CommandLine.Command;
 final class LspCommand implements Callable<Integer> {
     @Override
     public Integer call() {
-        return LspMain.run();
+        return LspMain.run(BuildInfo.load().version());
     }
 }

@@ -12,7 +12,8 @@ public final class LspMain {
     private LspMain() {
     }
 
-    public static int run() {
+    /** @param version the program's version as the build recorded it, which the server names at initialize */
+    public static int run(String version) {
         InputStream in = System.in;
         OutputStream out = new FileOutputStream(FileDescriptor.out);
         // Stray prints and our own notes go to stderr, in UTF-8 whatever the locale.
@@ -24,7 +25,7 @@ public final class LspMain {
         Thread library = new Thread(dev.plumb.analysis.Stdlib::get, "plumb-library");
         library.setDaemon(true);
         library.start();
-        PlumbLanguageServer server = new PlumbLanguageServer();
+        PlumbLanguageServer server = new PlumbLanguageServer(version);
         var launcher = PlumbLauncher.create(server, in, out, err);
         try {
             launcher.startListening().get();

@@ -49,6 +49,17 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
     private volatile boolean watchesFiles;
     private volatile boolean refreshHints;
     private Path libraryCopy;
+    /** What the server says it is at initialize: the program's version as the build recorded it. */
+    private final String version;
+
+    /** A server that does not know its build's version (tests). */
+    public PlumbLanguageServer() {
+        this("unknown");
+    }
+
+    public PlumbLanguageServer(String version) {
+        this.version = version;
+    }
 
     @Override
     public void connect(LanguageClient client) {
@@ -90,7 +101,7 @@ public final class PlumbLanguageServer implements LanguageServer, LanguageClient
         c.setExecuteCommandProvider(new org.eclipse.lsp4j.ExecuteCommandOptions(
             List.of(ProtocolMapping.SHOW_VALUE, WriteReport.COMMAND)));
         c.setSemanticTokensProvider(new org.eclipse.lsp4j.SemanticTokensWithRegistrationOptions(Features.LEGEND, true));
-        return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", "0.1.0")));
+        return CompletableFuture.completedFuture(new InitializeResult(c, new ServerInfo("plumb", version)));
     }
 
     /** UTF-16 unless the client offers only others; the client's first choice among those we know. */
