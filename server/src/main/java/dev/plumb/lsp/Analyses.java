@@ -29,8 +29,12 @@ import java.util.function.Supplier;
  * an edited file are re-run too.
  */
 final class Analyses {
-    /** An analysis and the document version it was made from. */
-    record Result(int version, Analysis analysis) {
+    /**
+     * An analysis, the document version it was made from, and the engine settings it was made
+     * with: after a settings change a result made under the old ones is stale even at the same
+     * version (a run that started before the change may finish after it).
+     */
+    record Result(int version, Settings settings, Analysis analysis) {
     }
 
     private final DocumentStore documents;
@@ -119,13 +123,14 @@ final class Analyses {
         OpenDocument d = documents.get(uri);
         if (d == null) return null;
         Result r = latest.get(uri);
-        if (r != null && r.version() == d.version()) return r.analysis();
+        Settings s = engineSettings();
+        if (r != null && r.version() == d.version() && r.settings().equals(s)) return r.analysis();
         // A request's own run stops, like a scheduled one, once an edit or a close makes it pointless.
-        Analysis a = analyze(d, () -> {
+        Analysis a = analyze(d, s, () -> {
             OpenDocument now = documents.get(uri);
             return now == null || now.version() != d.version();
         });
-        if (a != null) store(d, a);
+        if (a != null) store(d, s, a);
         return a;
     }
 
@@ -133,11 +138,12 @@ final class Analyses {
         OpenDocument d = documents.get(uri);
         if (d == null) return;
         try {
-            Analysis a = analyze(d, () -> {
+            Settings s = engineSettings();
+            Analysis a = analyze(d, s, () -> {
                 OpenDocument now = documents.get(uri);
                 return now == null || now.version() != d.version();
             });
-            if (a == null || !store(d, a)) return;
+            if (a == null || !store(d, s, a)) return;
             publisher.accept(new OpenDocumentResult(d, a));
             for (String user : usersOf(d.path(), uri)) schedule(user);
         } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
@@ -147,18 +153,22 @@ final class Analyses {
         }
     }
 
-    /** Keeps a result only while it belongs to the document's current version. */
-    private boolean store(OpenDocument d, Analysis a) {
+    /** Keeps a result only while it belongs to the document's current version and the current settings. */
+    private boolean store(OpenDocument d, Settings made, Analysis a) {
         OpenDocument now = documents.get(d.uri());
-        if (now == null || now.version() != d.version()) return false;
-        latest.put(d.uri(), new Result(d.version(), a));
+        if (now == null || now.version() != d.version() || !made.equals(engineSettings())) return false;
+        latest.put(d.uri(), new Result(d.version(), made, a));
         return true;
     }
 
+    /** The engine's options from the server's settings as they are now. */
+    private Settings engineSettings() {
+        ServerSettings now = settings.get();
+        return new Settings(now.digits(), Settings.DEFAULT.equalityTolerance(), now.criticalReynolds());
+    }
+
     /** The engine on a document's text; null when a newer edit made the run pointless on the way. */
-    private Analysis analyze(OpenDocument d, BooleanSupplier superseded) {
-        Settings s = new Settings(settings.get().digits(), Settings.DEFAULT.equalityTolerance(),
-            settings.get().criticalReynolds());
+    private Analysis analyze(OpenDocument d, Settings s, BooleanSupplier superseded) {
         // The last result's parse, whatever version it was: only the edited part is read again.
         Result last = latest.get(d.uri());
         return engine.analyze(d.path(), d.text(), last == null ? null : last.analysis().syntax(), superseded, s);

@@ -57,6 +57,40 @@ class AnalysesTest {
     }
 
     @Test
+    void aRunStartedBeforeASettingsChangeIsNotKeptAfterIt() throws Exception {
+        DocumentStore documents = new DocumentStore(new Positions.Enc());
+        java.util.concurrent.atomic.AtomicReference<ServerSettings> settings =
+            new java.util.concurrent.atomic.AtomicReference<>(ServerSettings.DEFAULT);
+        java.util.concurrent.CountDownLatch started = new java.util.concurrent.CountDownLatch(1);
+        java.util.concurrent.CountDownLatch release = new java.util.concurrent.CountDownLatch(1);
+        Analyses analyses = new Analyses(documents, settings::get, r -> { }, m -> { },
+            (file, text, earlier, superseded, engine) -> {
+                // The first run (under the old settings) waits until the settings have changed.
+                if (engine.significantFigures() == 4) {
+                    started.countDown();
+                    try {
+                        release.await(10, TimeUnit.SECONDS);
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                }
+                return new dev.plumb.analysis.Workspace(new dev.plumb.analysis.FileSources(), engine).analyzeText(file, text);
+            });
+        try {
+            documents.open("file:///tmp/race.plumb", "x = 2 / 3\n", 1);
+            var old = java.util.concurrent.CompletableFuture.supplyAsync(() -> analyses.current("file:///tmp/race.plumb"));
+            assertTrue(started.await(10, TimeUnit.SECONDS));
+            settings.set(settings.get().with(com.google.gson.JsonParser.parseString("{\"significantFigures\": 6}")));
+            release.countDown();
+            assertEquals(4, old.get(10, TimeUnit.SECONDS).settings().significantFigures(), "the old run answers its own request");
+            // Same version, new settings: the old result is not what the document reads as now.
+            assertEquals(6, analyses.current("file:///tmp/race.plumb").settings().significantFigures());
+        } finally {
+            analyses.shutdown();
+        }
+    }
+
+    @Test
     void aRequestThatRunsOutOfMemoryGetsAShortErrorWithoutTrace() {
         var error = PlumbLauncher.error(new java.util.concurrent.CompletionException(new OutOfMemoryError("planted")));
         assertEquals(org.eclipse.lsp4j.jsonrpc.messages.ResponseErrorCode.RequestFailed.getValue(), error.getCode());
