@@ -47,18 +47,9 @@ final class CheckCommand implements Callable<Integer> {
         Style style = common.style();
         PrintWriter out = style.writer(spec.commandLine().getOut());
         PrintWriter err = spec.commandLine().getErr();
-        PlumbFiles.Expanded expanded;
-        try {
-            expanded = PlumbFiles.expand(paths);
-        } catch (PlumbFiles.NoSuchPath e) {
-            err.println("plumb: " + e.getMessage());
-            return Main.USAGE;
-        }
+        PlumbFiles.Expanded expanded = PlumbFiles.expandOrSay(paths, err);
+        if (expanded == null) return Main.USAGE;
         List<Path> files = expanded.files();
-        if (files.isEmpty() && expanded.unreadable().isEmpty()) {
-            err.println("plumb: no .plumb files in " + paths);
-            return Main.USAGE;
-        }
         Workspace workspace = new Workspace(common.sources(), common.settings());
         List<Batch.Checked> results = new ArrayList<>(
             Batch.check(workspace, files, Runtime.getRuntime().availableProcessors()));

@@ -27,6 +27,26 @@ final class PlumbFiles {
      * followed; a link to a file is listed and left to the engine's reading rules. A folder that
      * cannot be read is listed as unreadable and the walk goes on. Throws for a missing path.
      */
+    /**
+     * The calcs under {@code paths} for a command that reads them; null after saying on {@code err}
+     * why there is nothing to read (a path that does not exist, or no .plumb file anywhere), which
+     * is a usage problem (exit 2).
+     */
+    static Expanded expandOrSay(List<Path> paths, java.io.PrintWriter err) {
+        Expanded expanded;
+        try {
+            expanded = expand(paths);
+        } catch (NoSuchPath e) {
+            err.println("plumb: " + dev.plumb.diagnostics.Printable.line(e.getMessage()));
+            return null;
+        }
+        if (expanded.files().isEmpty() && expanded.unreadable().isEmpty()) {
+            err.println("plumb: no .plumb files in " + dev.plumb.diagnostics.Printable.line(paths.toString()));
+            return null;
+        }
+        return expanded;
+    }
+
     static Expanded expand(List<Path> paths) throws NoSuchPath {
         List<Path> out = new ArrayList<>();
         List<Unreadable> unreadable = new ArrayList<>();

@@ -47,18 +47,15 @@ final class ReportCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = common.style().writer(spec.commandLine().getOut());
         PrintWriter err = spec.commandLine().getErr();
-        PlumbFiles.Expanded expanded;
-        try {
-            expanded = PlumbFiles.expand(paths);
-        } catch (PlumbFiles.NoSuchPath e) {
-            err.println("plumb: " + e.getMessage());
-            return Main.USAGE;
-        }
+        PlumbFiles.Expanded expanded = PlumbFiles.expandOrSay(paths, err);
+        if (expanded == null) return Main.USAGE;
         List<Path> files = expanded.files();
-        if (files.isEmpty()) {
-            err.println("plumb: no .plumb files in " + Printable.line(paths.toString()));
-            return Main.USAGE;
+        // A folder that cannot be read has no report: said, never skipped in silence (check makes it a finding).
+        for (PlumbFiles.Unreadable u : expanded.unreadable()) {
+            err.println("plumb: cannot read " + Printable.line(u.path().toString()) + " (" + u.reason()
+                + "), so the calcs in it have no report: let plumb read it, or name only readable folders");
         }
+        if (files.isEmpty()) return Main.USAGE;
         boolean oneFile = files.size() == 1 && paths.size() == 1 && !Files.isDirectory(paths.get(0));
         if (output != null && output.toString().endsWith(".html") && !oneFile) {
             err.println("plumb: -o " + Printable.line(output.toString()) + " names one page, but there are "
@@ -99,7 +96,8 @@ final class ReportCommand implements Callable<Integer> {
             return Main.USAGE;
         }
         out.flush();
-        return TextReport.Tally.of(results).exitCode(false);
+        int code = TextReport.Tally.of(results).exitCode(false);
+        return expanded.unreadable().isEmpty() ? code : Math.max(code, Main.FINDINGS);
     }
 
     /** Beside the calc by default; under -o, at the calc's path relative to here (or its name, for a calc elsewhere). */

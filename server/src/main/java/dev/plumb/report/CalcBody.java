@@ -23,6 +23,8 @@ final class CalcBody {
         /** Inputs written here, listed in place (their sources are in the inputs table). */
         private final List<Row.ValueRow> inputs = new ArrayList<>();
         private boolean inSection;
+        /** The statements by their place, to find a check's or function's own statement in one step. */
+        private final java.util.Map<Span, Statement> statements = new java.util.HashMap<>();
 
         private final CalcReport.Changes changes;
 
@@ -34,6 +36,7 @@ final class CalcBody {
             this.math = math;
             this.references = references;
             this.out = out;
+            for (Statement s : a.syntax().statements()) statements.putIfAbsent(s.span(), s);
         }
 
         void row(Row r) {
@@ -79,7 +82,7 @@ final class CalcBody {
         }
 
         private String function(Row.FunctionRow f) {
-            Statement s = statementAt(a, f.span());
+            Statement s = statements.get(f.span());
             String head = s instanceof Statement.Function fn ? Html.formula(math.function(fn))
                 : Html.element("p", "signature", Html.element("code", null, Html.text(f.signature())) + " — "
                     + Html.text(f.kind().word()));
@@ -91,7 +94,7 @@ final class CalcBody {
             String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.verdict() == Row.Verdict.FAILED ? "fail" : "unjudged";
             String words = c.verdict() == Row.Verdict.PASSED ? "passes" : c.verdict() == Row.Verdict.FAILED ? "FAILS"
                 : "NOT EVALUATED";
-            Statement s = statementAt(a, c.span());
+            Statement s = statements.get(c.span());
             String comparison = s instanceof Statement.Check check
                 ? Html.formula(math.comparison(check.operands(), check.comparators(), ValueSource.none()))
                 : Html.element("code", null, Html.text(c.source()));
@@ -100,13 +103,5 @@ final class CalcBody {
                 : " — " + Html.text(c.note())));
             return Html.element("div", "check " + kind, mark + comparison + detail);
         }
-    }
-
-    /** The statement a row was made from, found by its place in the text. */
-    static Statement statementAt(Analysis a, Span span) {
-        for (Statement s : a.syntax().statements()) {
-            if (s.span().equals(span)) return s;
-        }
-        return null;
     }
 }

@@ -126,6 +126,25 @@ class ReportCliTest {
     }
 
     @Test
+    void aFolderThatCannotBeReadIsSaidAndFailsTheRun() throws IOException {
+        Cli.write(dir, "ok/a.plumb", "x = 1 m\n");
+        Path locked = Files.createDirectories(dir.resolve("locked"));
+        Files.writeString(locked.resolve("b.plumb"), "y = 2 m\n");
+        assertTrue(locked.toFile().setReadable(false, false) && locked.toFile().setExecutable(false, false));
+        try {
+            org.junit.jupiter.api.Assumptions.assumeTrue(!Files.isReadable(locked), "running as a user who can read any folder");
+            Cli run = Cli.run("report", dir.toString(), "-o", dir.resolve("out").toString());
+            assertEquals(1, run.exitCode(), run.err());
+            assertTrue(run.err().contains("cannot read") && run.err().contains("have no report"), run.err());
+            assertTrue(Files.isRegularFile(dir.resolve("out").resolve(dir.relativize(dir.resolve("ok/a.html")))) || run.out()
+                .contains("a.html"), run.out());
+        } finally {
+            locked.toFile().setReadable(true, false);
+            locked.toFile().setExecutable(true, false);
+        }
+    }
+
+    @Test
     void aPageNameForManyCalcsOrAMissingPathIsAUsageError() throws IOException {
         Cli.write(dir, "a.plumb", "x = 1 m\n");
         Cli.write(dir, "b.plumb", "y = 2 m\n");

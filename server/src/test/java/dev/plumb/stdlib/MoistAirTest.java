@@ -61,8 +61,8 @@ class MoistAirTest {
     @ParameterizedTest(name = "{0} degC, {1} Pa, RH {2}")
     @CsvSource({"15, 60000, 0", "20, 101325, 0.5", "22.5, 95000, 1", "27, 110000, 0.8", "18, 80000, 0.3"})
     void cipmEntryIsTheEquation(double celsius, double pascal, double h) {
-        // Transcription check: the library's entry and the helper above are written independently
-        // from the same equations.
+        // The library's entry and the helper above each write out the CIPM-2007 equations (Picard
+        // et al. 2008) on their own: the two must agree to rounding.
         double expected = cipm2007(celsius + 273.15, pascal, h);
         assertEquals(expected, si("moist_air_density_cipm(" + celsius + " degC, " + pascal + " Pa, " + h + ")"), 1e-12 * expected);
     }
