@@ -18,7 +18,8 @@ import java.util.Optional;
  * A library entry or table column as a curve around one of its calls: the entry evaluated over
  * its stated range of one argument (the others held at the call's values), with that range and the
  * call's own point, so a reader sees where the calc sits — and an argument outside the range at
- * once. Evaluated quietly (nothing is reported) within a budget of its own.
+ * once. Evaluated quietly (nothing is reported) within one small budget per curve; a curve that
+ * exceeds it is not drawn.
  *
  * @param parameter the argument swept; {@code low}/{@code high} its stated range in SI (NaN: none)
  * @param xs the swept values (SI), {@code ys} the entry's values there (NaN where it has none)
@@ -26,6 +27,13 @@ import java.util.Optional;
  */
 public record EntryCurve(String entry, String parameter, Dimension xDimension, Unit xUnit, Dimension yDimension,
                          double[] xs, double[] ys, double low, double high, double x, double y, boolean logarithmic) {
+
+    /**
+     * One budget for a whole curve (its range and every sample): a curve is a picture, and a
+     * library entry written by anyone must not make a report take longer than a few seconds each.
+     */
+    private static final long CURVE_STEPS = 2_000_000L;
+    private static final long CURVE_SECONDS = 5;
 
     /** Decades a range must span to be drawn on a log axis. */
     private static final double LOG_SPAN = 30;
@@ -37,6 +45,15 @@ public record EntryCurve(String entry, String parameter, Dimension xDimension, U
 
     /** The curve of the entry called at {@code call}, sampled at {@code points} values; empty when it cannot be drawn. */
     public static Optional<EntryCurve> of(Analysis a, Analysis.CallSite call, UnitRegistry units, int points) {
+        try {
+            return sample(a, call, units, points, new Budget(CURVE_STEPS, CURVE_SECONDS, () -> false));
+        } catch (Budget.Exhausted e) {
+            return Optional.empty();
+        }
+    }
+
+    private static Optional<EntryCurve> sample(Analysis a, Analysis.CallSite call, UnitRegistry units, int points,
+                                               Budget budget) {
         Binding b = a.scope().lookup(call.name());
         if (call.arguments().isEmpty() || call.arguments().stream().anyMatch(arg -> !arg.value().known())) {
             return Optional.empty();
@@ -50,7 +67,7 @@ public record EntryCurve(String entry, String parameter, Dimension xDimension, U
         } else if (b instanceof Binding.CorrelationBinding c) {
             List<Statement.Param> params = c.def().params();
             for (int i = 0; i < params.size() && Double.isNaN(low) && Double.isNaN(high); i++) {
-                double[] range = range(c, params.get(i).name().text(), units);
+                double[] range = range(c, params.get(i).name().text(), units, budget);
                 if (!Double.isNaN(range[0]) || !Double.isNaN(range[1])) {
                     swept = i;
                     low = range[0];
@@ -84,18 +101,19 @@ public record EntryCurve(String entry, String parameter, Dimension xDimension, U
         for (int i = 0; i < points; i++) {
             double f = points == 1 ? 0 : (double) i / (points - 1);
             xs[i] = log ? Math.exp(Math.log(from) + f * (Math.log(to) - Math.log(from))) : from + f * (to - from);
-            Value v = at(a, call, swept, Value.of(xs[i], arg.value().dimension()), units);
+            Value v = at(a, call, swept, Value.of(xs[i], arg.value().dimension()), units, budget);
             ys[i] = v.known() ? v.si() : Double.NaN;
             if (v.known()) yDimension = v.dimension();
         }
-        Value here = at(a, call, swept, arg.value(), units);
+        Value here = at(a, call, swept, arg.value(), units, budget);
         if (!here.known() || yDimension == null) return Optional.empty();
         return Optional.of(new EntryCurve(call.name(), arg.name(), arg.value().dimension(), arg.unit(), yDimension, xs, ys,
             low, high, x, here.si(), log));
     }
 
     /** The entry at the call's arguments, one of them replaced. */
-    private static Value at(Analysis a, Analysis.CallSite call, int swept, Value replaced, UnitRegistry units) {
+    private static Value at(Analysis a, Analysis.CallSite call, int swept, Value replaced, UnitRegistry units,
+                            Budget budget) {
         Map<String, Value> locals = new HashMap<>();
         List<Expr> args = new ArrayList<>();
         for (int i = 0; i < call.arguments().size(); i++) {
@@ -105,20 +123,16 @@ public record EntryCurve(String entry, String parameter, Dimension xDimension, U
             args.add(new Expr.Reference(Span.NONE, local));
         }
         Expr.Call synthetic = new Expr.Call(Span.NONE, new Ident(call.name(), Span.NONE), args);
-        try {
-            return new Evaluator(a.scope(), Environment.NONE, locals, Reporter.discarding(), a.text(), units,
-                Budget.standalone()).eval(synthetic);
-        } catch (Budget.Exhausted e) {
-            return Value.UNKNOWN;
-        }
+        return new Evaluator(a.scope(), Environment.NONE, locals, Reporter.discarding(), a.text(), units, budget)
+            .eval(synthetic);
     }
 
     /** The stated range of one parameter from the entry's `valid` lines: {low, high} in SI, NaN where none. */
-    private static double[] range(Binding.CorrelationBinding c, String param, UnitRegistry units) {
+    private static double[] range(Binding.CorrelationBinding c, String param, UnitRegistry units, Budget budget) {
         double low = Double.NaN;
         double high = Double.NaN;
         Evaluator constants = new Evaluator(c.scope(), Environment.NONE, Map.of(), Reporter.discarding(), c.scope().text(),
-            units, Budget.standalone());
+            units, budget);
         java.util.Set<String> params = new java.util.HashSet<>();
         c.def().params().forEach(p -> params.add(p.name().text()));
         for (Statement.Bound bound : c.def().valid()) {
