@@ -40,9 +40,15 @@ final class LibraryBlock {
                 String line = "line " + a.lines().line(c.callee().start()) + ": " + CallText.arguments(c) + " — "
                     + CallText.standing(c) + (c.used() == null ? "" : "; fit used: " + c.used());
                 // Drawn where the entry states a range: the plot is there to show where the call sits in it.
-                String plot = EntryCurve.of(a, c, units, POINTS)
-                    .filter(curve -> !Double.isNaN(curve.low()) || !Double.isNaN(curve.high())).map(curve -> "<figure class=\"plot\">" + CurvePlot.svg(curve)
-                    + Html.element("figcaption", null, Html.text(CurvePlot.caption(curve))) + "</figure>").orElse("");
+                var curve = EntryCurve.of(a, c, units, POINTS)
+                    .filter(k -> !Double.isNaN(k.low()) || !Double.isNaN(k.high()));
+                String plot = curve.map(k -> "<figure class=\"plot\">" + CurvePlot.svg(k)
+                    + Html.element("figcaption", null, Html.text(CurvePlot.caption(k))) + "</figure>").orElse("");
+                // A ranged call without its picture says why, rather than leaving the reader to wonder.
+                if (curve.isEmpty() && c.standing() != Analysis.Standing.NO_RANGE) {
+                    plot = Html.element("p", "no-plot", "Not drawn: the entry could not be sampled around this call "
+                        + "(more work than a picture is given).");
+                }
                 out.append(Html.element("li", outside ? "outside" : "inside", (outside ? "⚠ " : "") + Html.text(line) + plot));
             }
             out.append("</ul></div>");

@@ -150,6 +150,19 @@ class CalcReportTest {
     }
 
     @Test
+    void aRangedCallWhosePlotCannotBeMadeSaysSo() {
+        // `slow` calls f ten thousand times per evaluation: computed once for the calc, too costly to
+        // sample ninety times for a picture, so the report says it was not drawn.
+        String parts = "f(x) = x + 1\ng(x) = f(f(f(f(f(f(f(f(f(f(x))))))))))\nh(x) = g(g(g(g(g(g(g(g(g(g(x))))))))))\n"
+            + "k(x) = h(h(h(h(h(h(h(h(h(h(x))))))))))\nl(x) = k(k(k(k(k(k(k(k(k(k(x))))))))))\n";
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("np.plumb"), parts
+            + "correlation slow(Re: dimensionless)\n    valid 1 <= Re <= 10\n    = l(Re) * 0 + 1\nend\ny = slow(5)\n");
+        Document page = report(a);
+        assertTrue(page.select("section.library svg").isEmpty());
+        assertTrue(page.selectFirst("section.library p.no-plot").text().startsWith("Not drawn"), page.select("section.library").text());
+    }
+
+    @Test
     void aFormulaTooLongForALineListsItsValuesInstead() {
         // Formulas do not wrap when printed: a long one with its values put in would run off the page.
         Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("long.plumb"),
