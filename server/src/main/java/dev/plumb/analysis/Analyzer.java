@@ -86,16 +86,36 @@ final class Analyzer {
             new DefinitionGraph(file, resolved.uses(), findingsByDefinition(declared.own(), findings)));
     }
 
-    /** Each own definition's findings: those within the span of the statement that defines it. */
+    /**
+     * Each own definition's findings: those within the span of the statement that defines it.
+     * {@code findings} are sorted by where they start, so each statement's are one run of them.
+     */
     private static Map<String, List<Diagnostic>> findingsByDefinition(Map<String, Statement> own, List<Diagnostic> findings) {
         Map<String, List<Diagnostic>> out = new LinkedHashMap<>();
+        if (findings.isEmpty()) return out;
         for (var e : own.entrySet()) {
             dev.plumb.diagnostics.Span s = e.getValue().span();
-            List<Diagnostic> on = findings.stream()
-                .filter(d -> d.span().start() >= s.start() && d.span().end() <= s.end()).toList();
-            if (!on.isEmpty()) out.put(e.getKey(), on);
+            List<Diagnostic> on = new ArrayList<>();
+            for (int i = firstStartingAtOrAfter(findings, s.start()); i < findings.size(); i++) {
+                Diagnostic d = findings.get(i);
+                if (d.span().start() > s.end()) break;
+                if (d.span().end() <= s.end()) on.add(d);
+            }
+            if (!on.isEmpty()) out.put(e.getKey(), List.copyOf(on));
         }
         return out;
+    }
+
+    /** The index of the first finding that starts at or after {@code offset} (findings sorted by start). */
+    private static int firstStartingAtOrAfter(List<Diagnostic> findings, int offset) {
+        int low = 0;
+        int high = findings.size();
+        while (low < high) {
+            int mid = (low + high) >>> 1;
+            if (findings.get(mid).span().start() < offset) low = mid + 1;
+            else high = mid;
+        }
+        return low;
     }
 
     /** A repair a finding asked for, as edits of this document; none when it cannot be made here. */

@@ -74,6 +74,9 @@ final class HandConversions {
         near("16.01846", "1 lb/ft³ = 16.02 kg/m³", "kg/m^3", "lb/ft^3", DENSITY),
         near("0.06242796", "1 kg/m³ = 0.06243 lb/ft³", "lb/ft^3", "kg/m^3", DENSITY));
 
+    /** The factors' values as doubles, in the order of {@link #FACTORS}, for {@link #nearAny}. */
+    private static final double[] APPROX = FACTORS.stream().mapToDouble(f -> f.value().doubleValue()).toArray();
+
     private final Reporter reporter;
     private final String text;
     private final BiFunction<Expr, Value, String> operand;
@@ -124,6 +127,7 @@ final class HandConversions {
      * least three significant digits unless it is the exact factor (3.6 and 12, not 2.2).
      */
     static Factor match(String numberText, Dimension kind, boolean divide) {
+        if (!nearAny(numberText, kind)) return null;
         BigDecimal x;
         try {
             x = new BigDecimal(numberText);
@@ -140,6 +144,24 @@ final class HandConversions {
             if (same || rounded) return f;
         }
         return null;
+    }
+
+    /**
+     * A cheap first look, since nearly every product in a calc is no conversion: the rule above
+     * admits a number within half a unit of its third significant digit (0.5 %) of a factor of
+     * its kind, so one more than 1 % from all of them matches none.
+     */
+    private static boolean nearAny(String numberText, Dimension kind) {
+        double x;
+        try {
+            x = Double.parseDouble(numberText);
+        } catch (NumberFormatException e) {
+            return true;
+        }
+        for (int i = 0; i < FACTORS.size(); i++) {
+            if (Math.abs(x - APPROX[i]) <= 0.01 * APPROX[i] && FACTORS.get(i).kind().equals(kind)) return true;
+        }
+        return false;
     }
 
     private static Factor whole(String value, String words, String times, String over, Dimension kind) {

@@ -24,6 +24,8 @@ final class SeekDependents {
     /** Adjusts {@code uses} in place and returns, for each seek, the names re-evaluated with it. */
     static Map<String, Set<String>> adjust(Map<String, Statement> own, Map<String, Set<String>> uses) {
         Map<String, Set<String>> out = new LinkedHashMap<>();
+        // Most calcs solve nothing: the reverse graph is made only for one that does.
+        if (own.values().stream().noneMatch(s -> s instanceof Statement.Seek)) return out;
         Map<String, Set<String>> usedBy = reverse(uses);
         for (var entry : own.entrySet()) {
             if (!(entry.getValue() instanceof Statement.Seek f)) continue;

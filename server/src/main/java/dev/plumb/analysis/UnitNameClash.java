@@ -28,18 +28,18 @@ final class UnitNameClash {
     /** @param own the calc's own value of a name, null for a name it does not define */
     static void report(List<Statement> statements, java.util.function.Function<String, Binding.ValueBinding> own, Scope scope,
                        UnitRegistry units, Reporter reporter) {
-        Set<String> said = new HashSet<>();
+        // The finding depends on the word alone, so each word is judged once, at its first place.
+        Set<String> judged = new HashSet<>();
         for (Statement s : statements) {
             for (Expr e : dev.plumb.syntax.ExprWalk.of(s)) {
                 dev.plumb.syntax.ExprWalk.each(e, node -> {
                     if (!(node instanceof Expr.Quantity q)) return;
                     String word = q.unit() == null ? null : q.unit().text();
-                    if (word == null || !WORD.matcher(word).matches() || said.contains(word)) return;
+                    if (word == null || !judged.add(word) || !WORD.matcher(word).matches()) return;
                     Binding.ValueBinding value = own.apply(word) != null ? own.apply(word)
                         : scope.lookup(word) instanceof Binding.ValueBinding v && v.file() != null && !Stdlib.isLibrary(v.file())
                         ? v : null;
                     if (value == null || !(units.resolve(word) instanceof UnitResult.Ok ok)) return;
-                    said.add(word);
                     say(q, ok.unit(), value, reporter);
                 });
             }
