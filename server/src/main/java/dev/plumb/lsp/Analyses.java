@@ -34,7 +34,7 @@ final class Analyses {
      * with: after a settings change a result made under the old ones is stale even at the same
      * version (a run that started before the change may finish after it).
      */
-    record Result(int version, Settings settings, Analysis analysis) {
+    record Result(int version, Settings settings, Analysis analysis, int generation) {
     }
 
     private final DocumentStore documents;
@@ -47,6 +47,22 @@ final class Analyses {
         Math.max(1, Runtime.getRuntime().availableProcessors()), Workspace.threadFactory());
     private final Map<String, Result> latest = new ConcurrentHashMap<>();
     private final Map<String, ScheduledFuture<?>> pending = new ConcurrentHashMap<>();
+    /**
+     * The run under way for each document: a request that arrives while the edit's own run is
+     * working waits for that run instead of starting a second one beside it.
+     */
+    private final Map<String, Run> running = new ConcurrentHashMap<>();
+
+    /** One engine run: what it is for (see {@link Result}), and its analysis when done (null if superseded). */
+    private record Run(int version, Settings settings, int generation, java.util.concurrent.CompletableFuture<Analysis> analysis) {
+    }
+
+    /**
+     * For each document, how many times what it uses changed beneath it (a used file was edited,
+     * files changed on disk): a result or run of an earlier generation is out of date even at the
+     * same version and settings. The parse it holds is still worth reparsing from.
+     */
+    private final Map<String, Integer> generations = new ConcurrentHashMap<>();
 
     /** What is published: the document and its fresh analysis. */
     record OpenDocumentResult(OpenDocument document, Analysis analysis) {
@@ -116,22 +132,57 @@ final class Analyses {
         ScheduledFuture<?> previous = pending.remove(uri);
         if (previous != null) previous.cancel(false);
         latest.remove(uri);
+        // A run still going for the closed text must not be kept for a reopened one at the same version.
+        generations.merge(uri, 1, Integer::sum);
     }
 
-    /** The analysis of a document's current text, made now if the last one is stale. */
+    /** The analysis of a document's current text, made now (or awaited from the run making it) if the last one is stale. */
     Analysis current(String uri) {
         OpenDocument d = documents.get(uri);
         if (d == null) return null;
-        Result r = latest.get(uri);
-        Settings s = engineSettings();
-        if (r != null && r.version() == d.version() && r.settings().equals(s)) return r.analysis();
-        // A request's own run stops, like a scheduled one, once an edit or a close makes it pointless.
-        Analysis a = analyze(d, s, () -> {
-            OpenDocument now = documents.get(uri);
-            return now == null || now.version() != d.version();
-        });
-        if (a != null) store(d, s, a);
-        return a;
+        return analysisOf(d, engineSettings());
+    }
+
+    /**
+     * The analysis of this version of a document under these settings: the kept one, the one a
+     * run under way is making, or one made now. Null when an edit or a close made it pointless.
+     */
+    private Analysis analysisOf(OpenDocument d, Settings s) {
+        int generation = generations.getOrDefault(d.uri(), 0);
+        Result r = latest.get(d.uri());
+        if (r != null && r.generation() == generation && r.version() == d.version() && r.settings().equals(s)) {
+            return r.analysis();
+        }
+        java.util.concurrent.CompletableFuture<Analysis> mine = new java.util.concurrent.CompletableFuture<>();
+        Run run = running.compute(d.uri(), (k, now) -> now != null && now.generation() == generation
+            && now.version() == d.version() && now.settings().equals(s) ? now : new Run(d.version(), s, generation, mine));
+        if (run.analysis() != mine) return awaited(run);
+        try {
+            // A run stops, whoever asked for it, once an edit or a close makes it pointless.
+            Analysis a = analyze(d, s, () -> {
+                OpenDocument now = documents.get(d.uri());
+                return now == null || now.version() != d.version();
+            });
+            if (a != null) store(d, s, generation, a);
+            mine.complete(a);
+            return a;
+        } catch (RuntimeException | Error e) {
+            mine.completeExceptionally(e);
+            throw e;
+        } finally {
+            running.remove(d.uri(), run);
+        }
+    }
+
+    /** What another thread's run made; its failure is thrown here as it was there. */
+    private static Analysis awaited(Run run) {
+        try {
+            return run.analysis().join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException re) throw re;
+            if (e.getCause() instanceof Error err) throw err;
+            throw e;
+        }
     }
 
     private void run(String uri) {
@@ -139,13 +190,15 @@ final class Analyses {
         if (d == null) return;
         try {
             Settings s = engineSettings();
-            Analysis a = analyze(d, s, () -> {
-                OpenDocument now = documents.get(uri);
-                return now == null || now.version() != d.version();
-            });
-            if (a == null || !store(d, s, a)) return;
+            Analysis a = analysisOf(d, s);
+            // Published only while it is still the document's current result.
+            Result kept = latest.get(uri);
+            if (a == null || kept == null || kept.analysis() != a) return;
             publisher.accept(new OpenDocumentResult(d, a));
-            for (String user : usersOf(d.path(), uri)) schedule(user);
+            for (String user : usersOf(d.path(), uri)) {
+                generations.merge(user, 1, Integer::sum);
+                schedule(user);
+            }
         } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
             System.err.println("plumb: analysis of " + uri + " failed: " + e);
             trouble.accept("Plumb could not check " + d.path().getFileName() + " (" + e
@@ -154,10 +207,13 @@ final class Analyses {
     }
 
     /** Keeps a result only while it belongs to the document's current version and the current settings. */
-    private boolean store(OpenDocument d, Settings made, Analysis a) {
+    private boolean store(OpenDocument d, Settings made, int generation, Analysis a) {
         OpenDocument now = documents.get(d.uri());
-        if (now == null || now.version() != d.version() || !made.equals(engineSettings())) return false;
-        latest.put(d.uri(), new Result(d.version(), made, a));
+        if (now == null || now.version() != d.version() || !made.equals(engineSettings())
+            || generation != generations.getOrDefault(d.uri(), 0)) {
+            return false;
+        }
+        latest.put(d.uri(), new Result(d.version(), made, a, generation));
         return true;
     }
 
@@ -197,6 +253,7 @@ final class Analyses {
     /** Every open document again (settings or files on disk changed): earlier results are void. */
     void scheduleAll() {
         latest.clear();
+        for (OpenDocument d : documents.all()) generations.merge(d.uri(), 1, Integer::sum);
         engine.forgetKept();
         for (OpenDocument d : documents.all()) schedule(d.uri());
     }

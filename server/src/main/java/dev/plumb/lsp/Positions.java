@@ -30,18 +30,23 @@ final class Positions {
         return new Position(line, units(text, starts[line], offset, enc));
     }
 
-    /** Line starts of the texts converted most recently: a document's positions are asked for many times. */
-    private static final java.util.Map<String, int[]> RECENT = java.util.Collections.synchronizedMap(
-        new java.util.LinkedHashMap<>(8, 0.75f, true) {
-            @Override
-            protected boolean removeEldestEntry(java.util.Map.Entry<String, int[]> eldest) {
-                return size() > 8;
-            }
-        });
+    /**
+     * Line starts of the texts converted most recently: a document's positions are asked for many
+     * times. Found by identity, not by content: an editor that retypes a character back and forth
+     * makes texts that are equal without being the same object, and comparing two long texts
+     * character by character on every lookup cost more than the lookups saved.
+     */
+    private static final int KEPT = 8;
+    private static final String[] KEPT_TEXTS = new String[KEPT];
+    private static final int[][] KEPT_STARTS = new int[KEPT][];
+    private static int next;
 
     private static int[] lineStarts(String text) {
-        int[] cached = RECENT.get(text);
-        if (cached != null) return cached;
+        synchronized (KEPT_TEXTS) {
+            for (int i = 0; i < KEPT; i++) {
+                if (KEPT_TEXTS[i] == text) return KEPT_STARTS[i];
+            }
+        }
         int[] starts = new int[16];
         int n = 1;
         for (int i = 0; i < text.length(); i++) {
@@ -52,7 +57,11 @@ final class Positions {
             }
         }
         int[] exact = java.util.Arrays.copyOf(starts, n);
-        RECENT.put(text, exact);
+        synchronized (KEPT_TEXTS) {
+            KEPT_TEXTS[next] = text;
+            KEPT_STARTS[next] = exact;
+            next = (next + 1) % KEPT;
+        }
         return exact;
     }
 
