@@ -25,14 +25,17 @@ final class Analyzer {
     private final String text;
     /** An earlier parse of this document, to reparse from; null for none. */
     private final ParsedSource earlier;
+    /** What an earlier run of this document left for this one to take over. */
+    private final ReusableValues reusable;
     private final List<Path> chain;
     private final Settings settings;
     private final UnitRegistry units;
     /** Asked between statements: true once nobody wants this run's result. */
     private final java.util.function.BooleanSupplier superseded;
 
-    Analyzer(Workspace workspace, Path file, String text, ParsedSource earlier, List<Path> chain, Settings settings,
-             UnitRegistry units, java.util.function.BooleanSupplier superseded) {
+    Analyzer(Workspace workspace, Path file, String text, ParsedSource earlier, ReusableValues reusable, List<Path> chain,
+             Settings settings, UnitRegistry units, java.util.function.BooleanSupplier superseded) {
+        this.reusable = reusable;
         this.superseded = superseded;
         this.workspace = workspace;
         this.file = file;
@@ -59,7 +62,9 @@ final class Analyzer {
         bindBlocks(scope, plan);
 
         Budget budget = Budget.standard(superseded);
+        boolean fits = reusable.fits(file, settings, transition, workspace.library().names(), imports.names());
         EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, units, budget)
+            .reusing(fits ? reusable : ReusableValues.NONE, resolved.uses())
             .run(declared.duplicates());
         Map<Statement, Row> checkRows = new java.util.IdentityHashMap<>();
         CheckRunner checks = new CheckRunner(scope, evaluated.values(), reporter, text, settings, units, budget);
@@ -83,7 +88,9 @@ final class Analyzer {
         List<Diagnostic> findings = sorted(diagnostics);
         return new Analysis(file, text, parsed, headers, inOrder, findings, scope,
             resolved.importedUses(), imports.files(), resolved.references(), reporter.calls(), settings,
-            new DefinitionGraph(file, resolved.uses(), findingsByDefinition(declared.own(), findings)));
+            new DefinitionGraph(file, resolved.uses(), findingsByDefinition(declared.own(), findings),
+                new ReusableValues(file, text, settings, transition, workspace.library().names(), imports.names(), evaluated.reusable(),
+                    evaluated.takenOver())));
     }
 
     /**

@@ -24,15 +24,14 @@ import java.util.Set;
 final class DeclarationPass {
     /**
      * @param own the statement defining each name, in source order (the first definition wins)
-     * @param duplicates statements that define a name already defined; they are evaluated for
+     * @param duplicates statements that define a name already defined, in source order (so their
+     *     findings and calls come out in the same order on every run); they are evaluated for
      *     their own findings but bind nothing
      */
-    record Declarations(Map<String, Statement> own, Set<Statement> duplicates) {
+    record Declarations(Map<String, Statement> own, java.util.List<Statement> duplicates) {
         Declarations {
             own = Collections.unmodifiableMap(own);
-            Set<Statement> byIdentity = Collections.newSetFromMap(new IdentityHashMap<>());
-            byIdentity.addAll(duplicates);
-            duplicates = Collections.unmodifiableSet(byIdentity);
+            duplicates = Collections.unmodifiableList(duplicates);
         }
 
         /** The statements that define names: every first definition, then the duplicates. */
@@ -50,7 +49,7 @@ final class DeclarationPass {
     private final UnitRegistry units;
     private final Map<String, Statement> own = new LinkedHashMap<>();
     // Statements are records whose hash walks the whole syntax tree: key them by identity.
-    private final Set<Statement> duplicates = Collections.newSetFromMap(new IdentityHashMap<>());
+    private final java.util.List<Statement> duplicates = new java.util.ArrayList<>();
 
     /** @param scope the document's scope, holding its imports; table columns are added to it */
     DeclarationPass(Path file, String text, Scope scope, Reporter reporter, UnitRegistry units) {

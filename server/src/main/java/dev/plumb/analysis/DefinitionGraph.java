@@ -25,19 +25,25 @@ public final class DefinitionGraph {
     private final Path file;
     private final Map<String, Set<String>> uses;
     private final Map<String, List<Diagnostic>> findings;
+    /** What the next run of the same document may take over from this one. */
+    private final ReusableValues reusable;
 
-    DefinitionGraph(Path file, Map<String, Set<String>> uses, Map<String, List<Diagnostic>> findings) {
+    /** @param uses read-only, kept as given: the resolver's graph, which nothing changes after it is made */
+    DefinitionGraph(Path file, Map<String, Set<String>> uses, Map<String, List<Diagnostic>> findings, ReusableValues reusable) {
         this.file = file;
-        Map<String, Set<String>> u = new LinkedHashMap<>();
-        uses.forEach((k, v) -> u.put(k, Collections.unmodifiableSet(new LinkedHashSet<>(v))));
-        this.uses = Collections.unmodifiableMap(u);
+        this.reusable = reusable;
+        this.uses = uses;
         Map<String, List<Diagnostic>> f = new LinkedHashMap<>();
         findings.forEach((k, v) -> f.put(k, List.copyOf(v)));
         this.findings = Collections.unmodifiableMap(f);
     }
 
     static DefinitionGraph empty(Path file) {
-        return new DefinitionGraph(file, Map.of(), Map.of());
+        return new DefinitionGraph(file, Map.of(), Map.of(), ReusableValues.NONE);
+    }
+
+    ReusableValues reusable() {
+        return reusable;
     }
 
     /** The document's own names, in the order they are written. */

@@ -15,8 +15,11 @@ import java.util.Map;
  * @see Plan#evaluate the same evaluation, for many runs
  */
 final class EvaluationPass {
-    /** The document's own values, and the row of each statement that defines a name (by identity). */
-    record Evaluated(Environment values, Map<Statement, Row> rows) {
+    /**
+     * The document's own values, the row of each statement that defines a name (by identity), and
+     * what the next run of the document may take over.
+     */
+    record Evaluated(Environment values, Map<Statement, Row> rows, Map<String, ReusableValues.Entry> reusable, int takenOver) {
         Evaluated {
             rows = java.util.Collections.unmodifiableMap(rows);
         }
@@ -31,6 +34,10 @@ final class EvaluationPass {
     /** Set once the run's time is up: what is left is not evaluated (one finding said so). */
     private boolean outOfTime;
     private final Map<Statement, Row> rows = new IdentityHashMap<>();
+    /** The run before this one, when its values may be taken over (else {@link ReusableValues#NONE}). */
+    private ReusableValues earlier = ReusableValues.NONE;
+    /** For each own name, the own names its statement uses. */
+    private Map<String, java.util.Set<String>> uses = Map.of();
 
     EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, UnitRegistry units, Budget budget) {
         this.plan = plan;
@@ -41,17 +48,75 @@ final class EvaluationPass {
         this.budget = budget;
     }
 
+    /**
+     * Takes over what {@code earlier} (the document's previous run, already judged to fit this one)
+     * left that this run would compute again: see {@link ReusableValues}.
+     *
+     * @param uses for each own name, the own names its statement uses
+     */
+    EvaluationPass reusing(ReusableValues earlier, Map<String, java.util.Set<String>> uses) {
+        this.earlier = earlier;
+        this.uses = uses;
+        return this;
+    }
+
     /** @param duplicates statements defining a name a second time: evaluated for their findings, bound to nothing */
     Evaluated run(Iterable<Statement> duplicates) {
         Environment.Builder values = new Environment.Builder(scope);
+        Map<String, ReusableValues.Entry> reusable = new java.util.HashMap<>();
+        // The own names whose values (or, for a function or a table, whose statements) are as in the earlier run.
+        java.util.Set<String> same = new java.util.HashSet<>();
+        int takenOver = 0;
+        ReusableValues.Moves moves = new ReusableValues.Moves();
         for (String name : plan.order()) {
             Statement s = plan.own().get(name);
-            Binding.ValueBinding bound = withinBudget(s, values.now(), plan.inCycle().contains(name));
+            boolean inCycle = plan.inCycle().contains(name);
+            java.util.Set<String> used = uses.getOrDefault(name, java.util.Set.of());
+            boolean written = !inCycle && earlier.unchanged(name, s, text, used);
+            boolean unchanged = written && same.containsAll(used);
+            ReusableValues.Entry before = earlier.entry(name);
+            if (written) moves.add(before.span(), s.span());
+            // The earlier value, moved to where the statement is now (null when it cannot be).
+            Binding.ValueBinding was = before == null || before.binding() == null ? null
+                : moves.moved(before.binding(), DeclarationPass.definedName(s).span());
+            if (unchanged && before.quiet() && before.statement() == s && was == before.binding() && !outOfTime) {
+                // The very statement of the earlier run, in its place: everything it left stands as it was.
+                rows.put(s, before.row());
+                values.put(name, was);
+                same.add(name);
+                reusable.put(name, before);
+                takenOver++;
+                continue;
+            }
+            Binding.ValueBinding bound;
+            boolean quiet;
+            if (unchanged && before.quiet() && was != null && s instanceof Statement.Definition d && !outOfTime) {
+                bound = takenOver(d, was);
+                quiet = true;
+                takenOver++;
+            } else {
+                int said = reporter.said();
+                bound = withinBudget(s, values.now(), inCycle);
+                quiet = reporter.said() == said && !outOfTime;
+            }
             if (bound != null) values.put(name, bound);
+            boolean valued = s instanceof Statement.Definition || s instanceof Statement.Seek;
+            if (valued ? ReusableValues.sameValue(bound, was) : unchanged) same.add(name);
+            if (!inCycle) {
+                reusable.put(name, new ReusableValues.Entry(s.span(), used, bound,
+                    quiet && s instanceof Statement.Definition && bound != null, s, rows.get(s)));
+            }
         }
         Environment done = values.build();
         for (Statement s : duplicates) withinBudget(s, done, false);
-        return new Evaluated(done, rows);
+        return new Evaluated(done, rows, reusable, takenOver);
+    }
+
+    /** An earlier run's value of an unchanged definition, already moved to where the definition is written now. */
+    private Binding.ValueBinding takenOver(Statement.Definition d, Binding.ValueBinding bound) {
+        rows.put(d, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), bound.basis(), d.note(),
+            bound.origin(), null, bound.display(), d));
+        return bound;
     }
 
     /** A statement's evaluation, cut short with one finding when it takes more than its budget. */

@@ -42,15 +42,20 @@ final class Reporter {
     private final List<Analysis.CallSite> calls;
     /** Repairs to resolve once the document is evaluated, by the finding that asked (by identity). */
     private final java.util.Map<Diagnostic, List<FixRequest>> requests;
+    /**
+     * How many findings and calls were reported here and in every reporter made from this one,
+     * counted before duplicates are dropped: a step that left it unchanged said nothing at all.
+     */
+    private final int[] said;
 
     Reporter() {
-        this(new LinkedHashSet<>(), new ArrayList<>(), new java.util.IdentityHashMap<>(), null, null, null, null, false,
-            false);
+        this(new LinkedHashSet<>(), new ArrayList<>(), new java.util.IdentityHashMap<>(), new int[1], null, null, null, null,
+            false, false);
     }
 
     /** A sink that keeps nothing; see the class comment. */
     static Reporter discarding() {
-        return new Reporter(Set.of(), List.of(), java.util.Map.of(), null, null, null, null, false, true);
+        return new Reporter(Set.of(), List.of(), java.util.Map.of(), new int[1], null, null, null, null, false, true);
     }
 
     /** False for a {@link #discarding()} reporter: whatever is reported here is dropped unread. */
@@ -64,8 +69,9 @@ final class Reporter {
     }
 
     private Reporter(Set<Diagnostic> diagnostics, List<Analysis.CallSite> calls,
-                     java.util.Map<Diagnostic, List<FixRequest>> requests, Reporter caller, String function,
+                     java.util.Map<Diagnostic, List<FixRequest>> requests, int[] said, Reporter caller, String function,
                      Span callSpan, Path file, boolean quietRanges, boolean discards) {
+        this.said = said;
         this.discards = discards;
         this.diagnostics = diagnostics;
         this.calls = calls;
@@ -96,6 +102,7 @@ final class Reporter {
         if (quietRanges && (code == Code.RANGE_OUTSIDE || code == Code.RANGE_REGIME || code == Code.UNIT_BARE_ANGLE)) {
             return;
         }
+        said[0]++;
         if (caller == null) {
             Diagnostic d = new Diagnostic(code, severity, span, message, List.of(), fixes);
             if (diagnostics.add(d) && !later.isEmpty()) requests.put(d, later);
@@ -126,22 +133,32 @@ final class Reporter {
     }
 
     void add(Diagnostic d) {
-        if (!discards) diagnostics.add(d);
+        if (discards) return;
+        said[0]++;
+        diagnostics.add(d);
+    }
+
+    /** A count that grows with every finding or call reported (duplicates too); compare two readings. */
+    int said() {
+        return said[0];
     }
 
     /** A reporter for evaluating the body of {@code function} called at {@code at}. */
     Reporter inCall(String function, Span at, Path definingFile) {
-        return new Reporter(diagnostics, calls, requests, this, function, at, definingFile, quietRanges, discards);
+        return new Reporter(diagnostics, calls, requests, said, this, function, at, definingFile, quietRanges, discards);
     }
 
     /** As {@link #inCall}, for a correlation's formula: nested range warnings stay quiet. */
     Reporter inCorrelation(String correlation, Span at, Path definingFile) {
-        return new Reporter(diagnostics, calls, requests, this, correlation, at, definingFile, true, discards);
+        return new Reporter(diagnostics, calls, requests, said, this, correlation, at, definingFile, true, discards);
     }
 
     /** Records a correlation call made at document level. */
     void call(Analysis.CallSite site) {
-        if (caller == null && !quietRanges && !discards) calls.add(site);
+        if (caller == null && !quietRanges && !discards) {
+            said[0]++;
+            calls.add(site);
+        }
     }
 
     List<Analysis.CallSite> calls() {

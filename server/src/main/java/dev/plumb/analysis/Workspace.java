@@ -79,7 +79,7 @@ public final class Workspace {
 
     /** Analyses text that is not (or not yet) saved under its path, e.g. an editor buffer. */
     public Analysis analyzeText(Path file, String text) {
-        return guarded(file.toAbsolutePath().normalize(), text, null, List.of(), NEVER);
+        return guarded(file.toAbsolutePath().normalize(), text, null, ReusableValues.NONE, List.of(), NEVER);
     }
 
     /** For runs nobody abandons. */
@@ -93,7 +93,23 @@ public final class Workspace {
      */
     public Analysis analyzeText(Path file, String text, ParsedSource earlier, java.util.function.BooleanSupplier superseded) {
         try {
-            return guarded(file.toAbsolutePath().normalize(), text, earlier, List.of(), superseded);
+            return guarded(file.toAbsolutePath().normalize(), text, earlier, ReusableValues.NONE, List.of(), superseded);
+        } catch (Superseded e) {
+            return null;
+        }
+    }
+
+    /**
+     * As {@link #analyzeText(Path, String, ParsedSource, java.util.function.BooleanSupplier)} after an
+     * edit of a document whose previous analysis is {@code earlier} (null for none): besides
+     * reparsing only the edited part, it evaluates again only the definitions the edit can have
+     * changed and takes the other values over from {@code earlier} (see {@link ReusableValues}).
+     * The result is the one a fresh analysis of {@code text} gives.
+     */
+    public Analysis analyzeEdit(Path file, String text, Analysis earlier, java.util.function.BooleanSupplier superseded) {
+        try {
+            return guarded(file.toAbsolutePath().normalize(), text, earlier == null ? null : earlier.syntax(),
+                earlier == null ? ReusableValues.NONE : earlier.graph().reusable(), List.of(), superseded);
         } catch (Superseded e) {
             return null;
         }
@@ -126,7 +142,7 @@ public final class Workspace {
         Sources.Loaded loaded = sources.load(file, root);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
-            fresh = new Imported(guarded(file, t.text(), uses.parsed(file), chain, superseded), null);
+            fresh = new Imported(guarded(file, t.text(), uses.parsed(file), ReusableValues.NONE, chain, superseded), null);
         } else if (loaded instanceof Sources.NotText n) {
             fresh = new Imported(failure(file, "", Code.FILE_NOT_TEXT,
                 "this is not a calc file: " + n.reason() + " (first bad byte at offset " + n.offset() + ")", 0), null);
@@ -167,15 +183,15 @@ public final class Workspace {
         return uses.path(from, to, sources.workspaceRoot(start));
     }
 
-    private Analysis guarded(Path file, String text, ParsedSource earlier, List<Path> chain,
+    private Analysis guarded(Path file, String text, ParsedSource earlier, ReusableValues reusable, List<Path> chain,
                              java.util.function.BooleanSupplier superseded) {
         if (DiskReads.exceeds(text, sources.maxBytes())) {
             return failure(file, "", Code.FILE_UNREADABLE, "cannot check this document: " + DiskReads.tooLarge(sources.maxBytes()), 0);
         }
         return DeepStack.call(() -> {
             try {
-                return new Analyzer(this, file, text, earlier, chain, settings, dev.plumb.units.UnitRegistry.standard(),
-                    superseded).run();
+                return new Analyzer(this, file, text, earlier, reusable, chain, settings,
+                    dev.plumb.units.UnitRegistry.standard(), superseded).run();
             } catch (Superseded e) {
                 throw e;
             } catch (StackOverflowError e) {

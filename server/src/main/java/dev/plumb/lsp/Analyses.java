@@ -4,7 +4,6 @@ import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.ImportMemory;
 import dev.plumb.analysis.Settings;
 import dev.plumb.analysis.Workspace;
-import dev.plumb.syntax.ParsedSource;
 import java.nio.file.Path;
 import java.util.ArrayDeque;
 import java.util.Deque;
@@ -70,7 +69,8 @@ final class Analyses {
 
     /** What runs the engine on a document's text: the workspace of open buffers and files. */
     interface Engine {
-        Analysis analyze(Path file, String text, ParsedSource earlier, BooleanSupplier superseded, Settings settings);
+        /** @param earlier the document's last analysis, whatever its version (null for none): what an edit can reuse */
+        Analysis analyze(Path file, String text, Analysis earlier, BooleanSupplier superseded, Settings settings);
 
         /** Drops whatever it keeps between runs (settings or files outside the editor changed). */
         default void forgetKept() {
@@ -85,8 +85,9 @@ final class Analyses {
         AtomicReference<ImportMemory> kept = new AtomicReference<>(new ImportMemory());
         return new Engine() {
             @Override
-            public Analysis analyze(Path file, String text, ParsedSource earlier, BooleanSupplier superseded, Settings s) {
-                return new Workspace(new OverlaySources(documents, maxBytes.getAsLong()), s, kept.get()).analyzeText(file, text, earlier, superseded);
+            public Analysis analyze(Path file, String text, Analysis earlier, BooleanSupplier superseded, Settings s) {
+                return new Workspace(new OverlaySources(documents, maxBytes.getAsLong()), s, kept.get())
+                    .analyzeEdit(file, text, earlier, superseded);
             }
 
             @Override
@@ -225,9 +226,10 @@ final class Analyses {
 
     /** The engine on a document's text; null when a newer edit made the run pointless on the way. */
     private Analysis analyze(OpenDocument d, Settings s, BooleanSupplier superseded) {
-        // The last result's parse, whatever version it was: only the edited part is read again.
+        // The last result, whatever version it was: only the edited part is read again, and only
+        // the values the edit can have changed are evaluated again.
         Result last = latest.get(d.uri());
-        return engine.analyze(d.path(), d.text(), last == null ? null : last.analysis().syntax(), superseded, s);
+        return engine.analyze(d.path(), d.text(), last == null ? null : last.analysis(), superseded, s);
     }
 
     /** Open documents that use this path, directly or through other files. */
