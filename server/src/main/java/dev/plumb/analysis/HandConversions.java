@@ -75,7 +75,7 @@ final class HandConversions {
         near("0.06242796", "1 kg/m³ = 0.06243 lb/ft³", "lb/ft^3", "kg/m^3", DENSITY));
 
     /** The factors' values as doubles, in the order of {@link #FACTORS}, for {@link #nearAny}. */
-    private static final double[] APPROX = FACTORS.stream().mapToDouble(f -> f.value().doubleValue()).toArray();
+    private static final List<Double> APPROX = FACTORS.stream().map(f -> f.value().doubleValue()).toList();
 
     private final Reporter reporter;
     private final String text;
@@ -159,7 +159,8 @@ final class HandConversions {
             return true;
         }
         for (int i = 0; i < FACTORS.size(); i++) {
-            if (Math.abs(x - APPROX[i]) <= 0.01 * APPROX[i] && FACTORS.get(i).kind().equals(kind)) return true;
+            double f = APPROX.get(i);
+            if (Math.abs(x - f) <= 0.01 * f && FACTORS.get(i).kind().equals(kind)) return true;
         }
         return false;
     }

@@ -15,7 +15,8 @@ import tech.units.indriya.unit.Units;
 /**
  * The units whose knowledge comes from the unit library (Indriya and systems-common). Each is
  * read once: its factor and offset to the SI system unit, computed in the library's exact
- * arithmetic and then rounded to a double, and its base-dimension exponents.
+ * arithmetic and then rounded to a double, and its base-dimension exponents. A running Plumb
+ * reads them from the table the build made of this list ({@link LibraryUnitTable}).
  */
 final class LibraryUnits {
 

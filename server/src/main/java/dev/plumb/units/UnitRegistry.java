@@ -35,7 +35,8 @@ public final class UnitRegistry {
     }
 
     private static List<AtomDefinition> standardDefinitions() {
-        List<AtomDefinition> all = new ArrayList<>(LibraryUnits.all());
+        // The unit library's units as the build wrote them out: reading the library itself is slow to start.
+        List<AtomDefinition> all = new ArrayList<>(LibraryUnitTable.read());
         all.addAll(TradeUnits.all());
         return all;
     }
