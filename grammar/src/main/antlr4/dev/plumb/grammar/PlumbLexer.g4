@@ -29,7 +29,8 @@ tokens { NARRATIVE }
     /**
      * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
      * after `seek` as the line's first token, 2 after the name that follows it. At 2, `in` starts
-     * the search range (`seek V in V_lo .. V_hi`), not a unit.
+     * the search range (`seek V in V_lo .. V_hi`), not a unit. A comma after the name goes back to
+     * 1: another unknown follows (`seek U, a in …`).
      */
     private int seekHead = 0;
     /** Whether no token but blanks and comments has been read on the current line yet. */
@@ -47,6 +48,7 @@ tokens { NARRATIVE }
         } else if (t.getChannel() == Token.DEFAULT_CHANNEL && type != COMMENT) {
             if (type == SEEK && lineStart) seekHead = 1;
             else if (seekHead == 1 && (type == IDENT || type >= TITLE && type <= INTERPOLATE)) seekHead = 2;
+            else if (seekHead == 2 && type == COMMA) seekHead = 1;   // `seek U, a in …`: another unknown
             else seekHead = 0;
             lineStart = false;
         }

@@ -25,6 +25,7 @@ statement
     | definition
     | check
     | seek
+    | seekSystem
     | oldSolve
     | accept
     | transition
@@ -50,6 +51,16 @@ value       : expr ( WHEN condition ( ( OTHERWISE | ASSIGN ) expr WHEN condition
 condition   : expr ( comparator expr )+;
 check       : CHECK expr ( comparator expr )+ note?;
 seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
+/**
+ * Several unknowns at once: `seek U, a from 2 m/s, 10 deg where D = T_x, L = W - T_y`, or a
+ * bracket per unknown (`in 1 m/s .. 5 m/s, 0 deg .. 30 deg`). The counts are not fixed here: a
+ * mismatch is the engine's finding, worded in the calc's terms. A lone unknown with a lone
+ * equation reads as `seek` (listed first), so only the new forms reach this rule.
+ */
+seekSystem  : SEEK name ( COMMA name )* ( IN bracket ( COMMA bracket )* | FROM expr ( COMMA expr )* )
+              WHERE equation ( COMMA equation )* note?;
+bracket     : expr DOTDOT expr;
+equation    : expr ASSIGN expr;
 /**
  * A reviewer accepts one finding: its code, the value whose statement it is on, and why. The
  * reason is optional here only so that the engine can say clearly that it is missing.

@@ -75,6 +75,10 @@ final class ResolutionPass {
                         references.add(new Analysis.Reference(n, span));
                         return;
                     }
+                    if (s instanceof Statement.SeekSystem k && SeekSystems.unknowns(k).contains(n)) {
+                        references.add(new Analysis.Reference(n, span));
+                        return;
+                    }
                     if (params.contains(n)) return;
                     used.add(n);
                     references.add(new Analysis.Reference(n, span));
@@ -89,6 +93,10 @@ final class ResolutionPass {
                         importedUses.computeIfAbsent(b.file(), k -> new HashSet<>()).add(n);
                     }
                 });
+            }
+            // The other unknowns of a several-unknown solve take their values from the first's statement.
+            if (s instanceof Statement.SeekSystem k && k.index() > 0 && own.get(nameOf(s)) == s) {
+                deps.add(SeekSystems.leader(k));
             }
         }
         return new Resolution(uses, references, used, importedUses);
@@ -124,6 +132,14 @@ final class ResolutionPass {
             for (Expr e : new Expr[] {f.low(), f.high(), f.start(), f.lhs(), f.rhs()}) {
                 if (e != null) exprs.add(e);
             }
+        }
+        if (s instanceof Statement.SeekSystem k && k.index() == 0) {
+            // The unknowns are not dependencies of their own equations, but they are used.
+            for (String n : SeekSystems.unknowns(k)) {
+                params.add(n);
+                used.add(n);
+            }
+            exprs.addAll(dev.plumb.syntax.ExprWalk.of(k));
         }
     }
 

@@ -26,12 +26,27 @@ final class SeekDependents {
         Map<String, Set<String>> out = new LinkedHashMap<>();
         Map<String, Set<String>> usedBy = reverse(uses);
         for (var entry : own.entrySet()) {
-            if (!(entry.getValue() instanceof Statement.Seek f)) continue;
             String unknown = entry.getKey();
-            Set<String> dependsOnUnknown = closure(unknown, usedBy);
+            Set<String> dependsOnUnknown;
             Set<String> fromEquation = new LinkedHashSet<>();
-            References.each(f.lhs(), (n, span) -> fromEquation.add(n));
-            References.each(f.rhs(), (n, span) -> fromEquation.add(n));
+            Set<String> unknowns = new LinkedHashSet<>(List.of(unknown));
+            if (entry.getValue() instanceof Statement.Seek f) {
+                dependsOnUnknown = closure(unknown, usedBy);
+                References.each(f.lhs(), (n, span) -> fromEquation.add(n));
+                References.each(f.rhs(), (n, span) -> fromEquation.add(n));
+            } else if (entry.getValue() instanceof Statement.SeekSystem k && k.index() == 0) {
+                // Several unknowns: what depends on any of them is re-evaluated per trial; the
+                // system's statement comes after everything else its equations use.
+                unknowns.addAll(SeekSystems.unknowns(k));
+                dependsOnUnknown = new HashSet<>();
+                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy));
+                for (Statement.Equation q : k.system().equations()) {
+                    References.each(q.lhs(), (n, span) -> fromEquation.add(n));
+                    References.each(q.rhs(), (n, span) -> fromEquation.add(n));
+                }
+            } else {
+                continue;
+            }
             Set<String> reached = new LinkedHashSet<>();
             for (String n : fromEquation) {
                 if (uses.containsKey(n)) reached.addAll(closureFrom(n, uses));
@@ -43,7 +58,7 @@ final class SeekDependents {
             Set<String> adjusted = new LinkedHashSet<>(uses.get(unknown));
             for (String d : dependents) adjusted.addAll(uses.get(d));
             adjusted.removeAll(dependents);
-            adjusted.remove(unknown);
+            adjusted.removeAll(unknowns);
             uses.put(unknown, adjusted);
             out.put(unknown, dependents);
         }

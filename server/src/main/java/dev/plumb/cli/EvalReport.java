@@ -8,6 +8,8 @@ import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.analysis.Solution;
+import dev.plumb.analysis.SystemSolution;
+import dev.plumb.present.SystemText;
 import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.QuantityFormat;
 import dev.plumb.units.Unit;
@@ -83,6 +85,7 @@ final class EvalReport {
     /** For a solved `seek`: how many evaluations and the residual left at the root. */
     private static String solved(Row.ValueRow v) {
         if (v.solution() == null) return "";
+        if (v.solution().system() != null) return "  [solved " + SystemText.summary(v.solution().system(), v.name()) + "]";
         Unit unit = DisplayUnits.defaultFor(v.solution().residualDimension());
         return "  [solved: " + v.solution().iterations() + " iterations, residual "
             + QuantityFormat.format(v.solution().residual(), unit, 2) + "]";
@@ -90,12 +93,33 @@ final class EvalReport {
 
     /** The refinement's record: each trial, its residual and the bracket after it, in the unit the root is shown in. */
     private static void writeSteps(PrintWriter out, Solution s, Row.ValueRow root) {
+        if (s.system() != null) {
+            writeSystemSteps(out, s.system(), root);
+            return;
+        }
         Unit unit = DisplayUnits.defaultFor(s.residualDimension());
         Unit x = root.display() != null ? root.display() : DisplayUnits.defaultFor(root.value().dimension());
         for (Solution.Step step : s.steps()) {
             out.printf("      %3d  %s = %-16s residual = %-14s bracket %s .. %s%n", step.n(), Printable.line(root.name()),
                 QuantityFormat.format(step.x(), x, 10), QuantityFormat.format(step.residual(), unit, 3),
                 QuantityFormat.format(step.low(), x, 10), QuantityFormat.format(step.high(), x, 10));
+        }
+    }
+
+    /** A system's iterates, under its first unknown only: the unknowns, then each equation's residual. */
+    private static void writeSystemSteps(PrintWriter out, SystemSolution s, Row.ValueRow row) {
+        if (!s.unknowns().get(0).equals(row.name())) return;
+        for (SystemSolution.Iterate it : s.record()) {
+            List<String> parts = new ArrayList<>();
+            for (int j = 0; j < s.unknowns().size(); j++) {
+                parts.add(s.unknowns().get(j) + " = " + SystemText.unknown(s, j, it.x().get(j), 10));
+            }
+            List<String> residuals = new ArrayList<>();
+            for (int i = 0; i < it.residual().size(); i++) {
+                residuals.add(SystemText.residual(it.residual().get(i), s.residuals().get(i).dimension()));
+            }
+            out.println(Printable.line(String.format("      %3d  %s   residuals %s", it.n(), String.join(", ", parts),
+                String.join(", ", residuals))));
         }
     }
 

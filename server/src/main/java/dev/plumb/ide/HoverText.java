@@ -69,7 +69,14 @@ public final class HoverText {
                 out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
             }
         }
-        if (row != null && row.solution() != null) {
+        if (row != null && row.solution() != null && row.solution().system() != null) {
+            dev.plumb.analysis.SystemSolution system = row.solution().system();
+            out.append("\n\nsolved by `seek` together ").append(dev.plumb.present.SystemText.summary(system, row.name()));
+            for (int i = 0; i < system.residuals().size(); i++) {
+                out.append("\n- `").append(system.residuals().get(i).equation()).append("`: ")
+                    .append(dev.plumb.present.SystemText.residuals(system).get(i));
+            }
+        } else if (row != null && row.solution() != null) {
             out.append("\n\nsolved by `seek` in ").append(row.solution().iterations()).append(" iterations");
         }
         if (b.file() != null && !b.file().equals(a.file())) out.append("\n\ndefined in ").append(b.file().getFileName());

@@ -40,7 +40,10 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             if (errors.anyWithin(startCp, lineEndCp)) {
                 out.add(broken(s, tokens));
             } else {
-                out.add(visit(s));
+                Object made = visit(s);
+                // A several-unknown solve is one statement per unknown.
+                if (made instanceof List<?> several) out.addAll(several);
+                else out.add(made);
             }
         }
         return out;
@@ -177,6 +180,31 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         Ident basis = tail.name() == null ? null : ident(tail.name());
         return new Statement.Seek(span(ctx), ident(ctx.name()), low, high, start, lhs, rhs,
             Span.cover(lhs.span(), rhs.span()), unit, basis, note(tail.note()));
+    }
+
+    /** One statement per unknown, sharing what was written (see {@link Statement.SeekSystem}). */
+    @Override
+    public Object visitSeekSystem(PlumbParser.SeekSystemContext ctx) {
+        List<Ident> unknowns = new ArrayList<>();
+        for (PlumbParser.NameContext n : ctx.name()) unknowns.add(ident(n));
+        List<Expr> starts = new ArrayList<>();
+        for (PlumbParser.ExprContext e : ctx.expr()) starts.add(expr(e));
+        List<Expr> lows = new ArrayList<>();
+        List<Expr> highs = new ArrayList<>();
+        for (PlumbParser.BracketContext b : ctx.bracket()) {
+            lows.add(expr(b.expr(0)));
+            highs.add(expr(b.expr(1)));
+        }
+        List<Statement.Equation> equations = new ArrayList<>();
+        for (PlumbParser.EquationContext q : ctx.equation()) {
+            Expr lhs = expr(q.expr(0));
+            Expr rhs = expr(q.expr(1));
+            equations.add(new Statement.Equation(Span.cover(lhs.span(), rhs.span()), lhs, rhs));
+        }
+        Statement.Equations system = new Statement.Equations(unknowns, starts, lows, highs, equations, note(ctx.note()));
+        List<Statement> out = new ArrayList<>();
+        for (int i = 0; i < unknowns.size(); i++) out.add(new Statement.SeekSystem(span(ctx), unknowns.get(i), i, system));
+        return out;
     }
 
     @Override

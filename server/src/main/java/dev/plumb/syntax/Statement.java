@@ -50,6 +50,41 @@ public sealed interface Statement {
     }
 
     /**
+     * One unknown of {@code seek A, B, … (from S1, S2, … | in L1 .. H1, …) where E1, E2, …}: the
+     * parser gives one such statement per unknown, in order, each with the whole statement's span
+     * and the same {@code system}, so every unknown is a name defined by a statement of its own
+     * (outline, rename, dependency graph). The first ({@code index} 0) solves the system; the
+     * others take their values from it.
+     */
+    record SeekSystem(Span span, Ident name, int index, Equations system) implements Statement {
+    }
+
+    /**
+     * What a several-unknown solve writes: the unknowns, their start values (or brackets: lows and
+     * highs, empty otherwise) and the equations, each {@code LHS = RHS}. The counts are as written;
+     * the engine reports a mismatch.
+     */
+    record Equations(List<Ident> unknowns, List<Expr> starts, List<Expr> lows, List<Expr> highs,
+                     List<Equation> equations, String note) {
+        public Equations {
+            unknowns = List.copyOf(unknowns);
+            starts = List.copyOf(starts);
+            lows = List.copyOf(lows);
+            highs = List.copyOf(highs);
+            equations = List.copyOf(equations);
+        }
+
+        /** Whether the unknowns are given brackets rather than start values. */
+        public boolean bracketed() {
+            return !lows.isEmpty();
+        }
+    }
+
+    /** One equation {@code LHS = RHS} of a several-unknown solve; span covers both sides. */
+    record Equation(Span span, Expr lhs, Expr rhs) {
+    }
+
+    /**
      * {@code correlation NAME(PARAMS) … end}: a published formula with what a reviewer needs to
      * trust it. Optional parts are null when absent; {@code pieces} has one entry for a single
      * {@code = EXPR}; {@code flow} is the flow direction its basis faces ({@code basis frontal
