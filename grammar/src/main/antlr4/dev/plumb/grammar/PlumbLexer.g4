@@ -21,10 +21,11 @@ tokens { NARRATIVE }
     /**
      * Words that end an expression; after a number they are keywords, not units. `so`, `within`
      * and `guess` belong to the solve statement's former spelling, still read so that its error
-     * can show the new one.
+     * can show the new one; `over`, `rates`, `until` and `every` are the motion statement's.
      */
     private static final java.util.Set<String> CLAUSE_WORDS =
-        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess");
+        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "over", "rates", "until",
+            "every");
 
     /**
      * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
@@ -165,6 +166,11 @@ DOMAIN      : 'domain';
 ACCEPT      : 'accept';
 AT          : 'at';
 TRANSITION  : 'transition';
+EVOLVE      : 'evolve';
+OVER        : 'over';
+RATES       : 'rates';
+UNTIL       : 'until';
+EVERY       : 'every';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

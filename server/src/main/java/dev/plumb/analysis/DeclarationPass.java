@@ -121,6 +121,7 @@ final class DeclarationPass {
         if (s instanceof Statement.Table t) return t.name();
         if (s instanceof Statement.Seek f) return f.name();
         if (s instanceof Statement.SeekSystem k) return k.name();
+        if (s instanceof Statement.Evolve k) return k.name();
         if (s instanceof Statement.Broken b) return b.name();
         return null;
     }

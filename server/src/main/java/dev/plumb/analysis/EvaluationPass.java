@@ -90,7 +90,7 @@ final class EvaluationPass {
         rows.put(s, new Row.ValueRow(s.span(), name.text(), s instanceof Statement.Definition d && d.input(), Value.UNKNOWN,
             null, null, null, null, null, s));
         return s instanceof Statement.Definition || s instanceof Statement.Seek || s instanceof Statement.SeekSystem
-            || s instanceof Statement.Broken
+            || s instanceof Statement.Evolve || s instanceof Statement.Broken
             ? new Binding.ValueBinding(plan.definitions().bare(Value.UNKNOWN).file(), name.span(), Value.UNKNOWN, null, null,
                 false, null, null)
             : null;
@@ -124,6 +124,7 @@ final class EvaluationPass {
         }
         if (s instanceof Statement.Seek f) return seek(f, env, inCycle);
         if (s instanceof Statement.SeekSystem k) return seekSystem(k, env, inCycle);
+        if (s instanceof Statement.Evolve k) return evolve(k, env, inCycle);
         if (!(s instanceof Statement.Definition d)) return null;
         Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle, budget);
         rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), bound.basis(), d.note(),
@@ -141,6 +142,38 @@ final class EvaluationPass {
         Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter, budget);
         rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), bound.basis(), f.note(), null,
             outcome.solution(), bound.display(), f));
+        return bound;
+    }
+
+    /**
+     * The time's statement integrates the motion and keeps the states' values until the plan
+     * reaches them (they use the time, so they come after it).
+     */
+    private Binding.ValueBinding evolve(Statement.Evolve k, Environment env, boolean inCycle) {
+        String name = k.name().text();
+        String note = k.motion().note();
+        if (inCycle || plan.own().get(name) != k) {
+            rows.put(k, new Row.ValueRow(k.span(), name, false, Value.UNKNOWN, null, note, null, null, null, k));
+            return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
+        }
+        if (k.index() > 0) {
+            Binding.ValueBinding bound = solvedAhead.remove(name);
+            if (bound == null) bound = plan.definitions().evolved(k, Value.UNKNOWN, null, null);
+            rows.put(k, new Row.ValueRow(k.span(), name, false, bound.value(), null, note, null, null, bound.display(), k));
+            return bound;
+        }
+        MotionRunner.Outcome outcome = new MotionRunner(plan, scope, env, reporter, text, units, budget).run(k);
+        java.util.List<Ident> names = k.motion().names();
+        for (int j = 1; j < names.size(); j++) {
+            Ident other = names.get(j);
+            if (plan.own().get(other.text()) instanceof Statement.Evolve mine && mine.motion().equals(k.motion())) {
+                solvedAhead.put(other.text(), plan.definitions().evolved(mine, outcome.values().get(j),
+                    outcome.units().get(j), outcome.trajectory()));
+            }
+        }
+        Binding.ValueBinding bound = plan.definitions().evolved(k, outcome.values().get(0), outcome.units().get(0),
+            outcome.trajectory());
+        rows.put(k, new Row.ValueRow(k.span(), name, false, bound.value(), null, note, null, null, bound.display(), k));
         return bound;
     }
 

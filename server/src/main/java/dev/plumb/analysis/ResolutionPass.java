@@ -79,6 +79,10 @@ final class ResolutionPass {
                         references.add(new Analysis.Reference(n, span));
                         return;
                     }
+                    if (s instanceof Statement.Evolve k && Motions.names(k).contains(n)) {
+                        references.add(new Analysis.Reference(n, span));
+                        return;
+                    }
                     if (params.contains(n)) return;
                     used.add(n);
                     references.add(new Analysis.Reference(n, span));
@@ -98,6 +102,8 @@ final class ResolutionPass {
             if (s instanceof Statement.SeekSystem k && k.index() > 0 && own.get(nameOf(s)) == s) {
                 deps.add(SeekSystems.leader(k));
             }
+            // A motion's states take their values from its time's statement, which integrates it.
+            if (s instanceof Statement.Evolve k && k.index() > 0 && own.get(nameOf(s)) == s) deps.add(Motions.leader(k));
         }
         return new Resolution(uses, references, used, importedUses);
     }
@@ -136,6 +142,14 @@ final class ResolutionPass {
         if (s instanceof Statement.SeekSystem k && k.index() == 0) {
             // The unknowns are not dependencies of their own equations, but they are used.
             for (String n : SeekSystems.unknowns(k)) {
+                params.add(n);
+                used.add(n);
+            }
+            exprs.addAll(dev.plumb.syntax.ExprWalk.of(k));
+        }
+        if (s instanceof Statement.Evolve k && k.index() == 0) {
+            // The time and the states are bound by the motion itself, not dependencies of its formulas.
+            for (String n : Motions.names(k)) {
                 params.add(n);
                 used.add(n);
             }

@@ -44,6 +44,16 @@ final class SeekDependents {
                     References.each(q.lhs(), (n, span) -> fromEquation.add(n));
                     References.each(q.rhs(), (n, span) -> fromEquation.add(n));
                 }
+            } else if (entry.getValue() instanceof Statement.Evolve k && k.index() == 0) {
+                // A motion: what depends on the time or a state and feeds the rates or the stop
+                // condition is re-evaluated at every evaluation of the rates.
+                unknowns.addAll(Motions.names(k));
+                dependsOnUnknown = new HashSet<>();
+                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy));
+                List<dev.plumb.syntax.Expr> read = new java.util.ArrayList<>(k.motion().rates());
+                read.add(k.motion().stopLeft());
+                read.add(k.motion().stopRight());
+                for (dev.plumb.syntax.Expr e : read) References.each(e, (n, span) -> fromEquation.add(n));
             } else {
                 continue;
             }

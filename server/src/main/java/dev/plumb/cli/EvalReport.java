@@ -9,6 +9,10 @@ import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.analysis.Solution;
 import dev.plumb.analysis.SystemSolution;
+import dev.plumb.analysis.Trajectory;
+import dev.plumb.analysis.Value;
+import dev.plumb.present.TrajectoryText;
+import dev.plumb.syntax.Statement;
 import dev.plumb.present.SystemText;
 import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.QuantityFormat;
@@ -70,8 +74,11 @@ final class EvalReport {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
                 out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v), valueWidth) + basis + solved(v)
-                    + note).stripTrailing());
+                    + evolved(a, v) + note).stripTrailing());
                 if (steps && v.solution() != null) writeSteps(out, v.solution(), v);
+                if (v.statement() instanceof Statement.Evolve k && k.index() == 0 && a.trajectory(v.name()) != null) {
+                    writeTrajectory(out, a.trajectory(v.name()), a.settings().significantFigures());
+                }
             } else if (r instanceof Row.FunctionRow f) {
                 out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));
             } else if (r instanceof Row.CheckRow c) {
@@ -104,6 +111,36 @@ final class EvalReport {
                 QuantityFormat.format(step.x(), x, 10), QuantityFormat.format(step.residual(), unit, 3),
                 QuantityFormat.format(step.low(), x, 10), QuantityFormat.format(step.high(), x, 10));
         }
+    }
+
+    /** For a motion: how it ran, on its time's row; the time a state's value is at, on each state's row. */
+    private static String evolved(Analysis a, Row.ValueRow v) {
+        if (!(v.statement() instanceof Statement.Evolve k)) return "";
+        Trajectory t = a.trajectory(v.name());
+        if (t == null) return "";
+        if (k.index() == 0) return "  [" + TrajectoryText.summary(t) + "]";
+        return "  [at " + t.names().get(0) + " = " + ValueText.of(Value.of(t.end(), t.dimensions().get(0)), t.units().get(0),
+            a.settings().significantFigures()) + "]";
+    }
+
+    /** The trajectory table under the motion's time, columns aligned, then where its correlations' arguments went. */
+    private static void writeTrajectory(PrintWriter out, Trajectory t, int sig) {
+        List<String> heads = TrajectoryText.heads(t);
+        int[] widths = new int[heads.size()];
+        for (int j = 0; j < heads.size(); j++) {
+            widths[j] = width(heads.get(j));
+            for (int i = 0; i < t.times().length; i++) widths[j] = Math.max(widths[j], width(TrajectoryText.cell(t, i, j, sig)));
+        }
+        StringBuilder head = new StringBuilder("     ");
+        for (int j = 0; j < heads.size(); j++) head.append("  ").append(pad(heads.get(j), widths[j]));
+        out.println(Printable.line(head.toString()).stripTrailing());
+        for (int i = 0; i < t.times().length; i++) {
+            StringBuilder row = new StringBuilder("     ");
+            for (int j = 0; j < heads.size(); j++) row.append("  ").append(pad(TrajectoryText.cell(t, i, j, sig), widths[j]));
+            out.println(Printable.line(row.toString()).stripTrailing());
+        }
+        if (t.widened()) out.println("       (interval widened to keep the table within " + Trajectory.MAX_ROWS + " rows)");
+        for (String visited : t.visited()) out.println(Printable.line("       over the motion, " + visited));
     }
 
     /** A system's iterates, under its first unknown only: the unknowns, then each equation's residual. */

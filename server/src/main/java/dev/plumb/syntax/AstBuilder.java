@@ -207,6 +207,32 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         return out;
     }
 
+    /** One statement for the time and one per state, sharing what was written (see {@link Statement.Evolve}). */
+    @Override
+    public Object visitEvolve(PlumbParser.EvolveContext ctx) {
+        List<PlumbParser.NameContext> names = ctx.name();
+        List<Ident> states = new ArrayList<>();
+        for (int i = 0; i < names.size() - 1; i++) states.add(ident(names.get(i)));
+        Ident time = ident(names.get(names.size() - 1));
+        List<PlumbParser.ExprContext> e = ctx.expr();
+        int timeAt = names.get(names.size() - 1).getStart().getTokenIndex();
+        List<Expr> starts = new ArrayList<>();
+        List<Expr> rates = new ArrayList<>();
+        int k = 0;
+        while (k < e.size() && e.get(k).getStart().getTokenIndex() < timeAt) starts.add(expr(e.get(k++)));
+        int untilAt = ctx.UNTIL().getSymbol().getTokenIndex();
+        while (k < e.size() && e.get(k).getStart().getTokenIndex() < untilAt) rates.add(expr(e.get(k++)));
+        Expr left = expr(e.get(k));
+        Expr right = expr(e.get(k + 1));
+        Expr every = ctx.EVERY() != null ? expr(e.get(k + 2)) : null;
+        Statement.Motion motion = new Statement.Motion(time, states, starts, rates, left,
+            comparator(ctx.comparator().getStart()), right, Span.cover(left.span(), right.span()), every, note(ctx.note()));
+        List<Statement> out = new ArrayList<>();
+        List<Ident> all = motion.names();
+        for (int i = 0; i < all.size(); i++) out.add(new Statement.Evolve(span(ctx), all.get(i), i, motion));
+        return out;
+    }
+
     @Override
     public Object visitTransition(PlumbParser.TransitionContext ctx) {
         Token n = ctx.NUMBER().getSymbol();

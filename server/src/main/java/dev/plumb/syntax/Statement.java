@@ -85,6 +85,36 @@ public sealed interface Statement {
     }
 
     /**
+     * One name of {@code evolve S1, S2, … from A1, A2, … over T rates R1, R2, … until L op R [every DT]}:
+     * the parser gives one such statement for the time T ({@code index} 0, which integrates the
+     * motion) and one per state, each with the whole statement's span and the same {@code motion}.
+     */
+    record Evolve(Span span, Ident name, int index, Motion motion) implements Statement {
+    }
+
+    /**
+     * What a motion statement writes: the states with their start values, the name of the time,
+     * each state's rate of change, the stop condition ({@code stopLeft stop stopRight}, spanning
+     * {@code until}), the interval of the trajectory table (null: none written) and the note.
+     */
+    record Motion(Ident time, List<Ident> states, List<Expr> starts, List<Expr> rates, Expr stopLeft, Comparator stop,
+                  Expr stopRight, Span until, Expr every, String note) {
+        public Motion {
+            states = List.copyOf(states);
+            starts = List.copyOf(starts);
+            rates = List.copyOf(rates);
+        }
+
+        /** The names the statement defines: the time first, then the states. */
+        public List<Ident> names() {
+            List<Ident> out = new java.util.ArrayList<>();
+            out.add(time);
+            out.addAll(states);
+            return out;
+        }
+    }
+
+    /**
      * {@code correlation NAME(PARAMS) … end}: a published formula with what a reviewer needs to
      * trust it. Optional parts are null when absent; {@code pieces} has one entry for a single
      * {@code = EXPR}; {@code flow} is the flow direction its basis faces ({@code basis frontal
