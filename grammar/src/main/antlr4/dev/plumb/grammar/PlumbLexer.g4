@@ -21,11 +21,11 @@ tokens { NARRATIVE }
     /**
      * Words that end an expression; after a number they are keywords, not units. `so`, `within`
      * and `guess` belong to the solve statement's former spelling, still read so that its error
-     * can show the new one; `over`, `rates`, `until` and `every` are the motion statement's.
+     * can show the new one; `over`, `rates`, `until`, `every` and `draw` are the motion statement's.
      */
     private static final java.util.Set<String> CLAUSE_WORDS =
         java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "over", "rates", "until",
-            "every");
+            "every", "draw");
 
     /**
      * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
@@ -171,6 +171,7 @@ OVER        : 'over';
 RATES       : 'rates';
 UNTIL       : 'until';
 EVERY       : 'every';
+DRAW        : 'draw';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

@@ -63,10 +63,10 @@ seekSystem  : SEEK name ( COMMA name )* ( IN bracket ( COMMA bracket )* | FROM e
 /**
  * Motion over time: `evolve v, y from 0 m/s, 0 m over t rates a, v until y >= 20 m every 0.5 s`.
  * The states, their start values, the time's name, one rate (time derivative) per state, the stop
- * condition and, optionally, the interval of the trajectory table. Counts are the engine's finding.
+ * condition and, optionally, the interval of the trajectory table and the states the report plots. Counts are the engine's finding.
  */
 evolve      : EVOLVE name ( COMMA name )* FROM expr ( COMMA expr )* OVER name
-              RATES expr ( COMMA expr )* UNTIL expr comparator expr ( EVERY expr )? note?;
+              RATES expr ( COMMA expr )* UNTIL expr comparator expr ( EVERY expr )? ( DRAW name ( COMMA name )* )? note?;
 bracket     : expr DOTDOT expr;
 equation    : expr ASSIGN expr;
 /**
@@ -128,5 +128,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT | TRANSITION | EVOLVE | OVER | RATES | UNTIL | EVERY
+    | DOMAIN | ACCEPT | AT | TRANSITION | EVOLVE | OVER | RATES | UNTIL | EVERY | DRAW
     ;

@@ -84,6 +84,8 @@ final class MotionRunner {
     private Value[] start;
     private List<Statement.Definition> dependents;
     private int evaluations;
+    /** The states the report plots, by their place among the names (1 the first state). */
+    private List<Integer> drawn;
 
     MotionRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units, Budget budget) {
         this.plan = plan;
@@ -99,7 +101,7 @@ final class MotionRunner {
         motion = k.motion();
         names = Motions.names(k);
         int n = motion.states().size();
-        if (!counted() || !Motions.ownsAll(k, plan.own())) return failed();
+        if (!counted() || !Motions.ownsAll(k, plan.own()) || !drawnAreStates()) return failed();
         if (motion.stop() == Comparator.NE) {
             reporter.report(Code.MOTION_NO_STOP, motion.until(), "`until` needs a condition that starts to hold at a "
                 + "moment (<=, <, >=, > or ==); `!=` holds almost everywhere: write the side the motion crosses, such as "
@@ -462,7 +464,7 @@ final class MotionRunner {
 
     private Trajectory single(double[] y0, List<Unit> shown, String how) {
         return new Trajectory(names, dimensions(), shown, new double[] {0}, new double[][] {y0.clone()}, new double[] {0},
-            new double[][] {y0.clone()}, how, 0, evaluations, List.of(), false, null);
+            new double[][] {y0.clone()}, how, 0, evaluations, List.of(), false, drawn, null);
     }
 
     private List<Dimension> dimensions() {
@@ -489,7 +491,7 @@ final class MotionRunner {
         for (int i = 0; i <= PLOT_POINTS; i++) pts[i] = end * i / PLOT_POINTS;
         double[][] plot = sample(pts, yEnd, dense);
         return new Trajectory(names, dimensions(), shown, ts, rows, pts, plot, stop, steps, evaluations, visited, widened,
-            new Trajectory.Dense(dense));
+            drawn, new Trajectory.Dense(dense));
     }
 
     private static double[][] sample(double[] ts, double[] yEnd, ContinuousOutputModel dense) {
@@ -522,6 +524,23 @@ final class MotionRunner {
                 + count(motion.rates().size(), "rate") + ": give each state's rate of change, in the order of the states");
             return false;
         }
+        return true;
+    }
+
+    /** The states `draw` names, each a state of this motion; all of them when it names none. */
+    private boolean drawnAreStates() {
+        drawn = new ArrayList<>();
+        for (dev.plumb.syntax.Ident d : motion.drawn()) {
+            int at = names.indexOf(d.text());
+            if (at < 1) {
+                reporter.report(Code.NAME_UNKNOWN, d.span(), "`draw` lists the states to plot against " + names.get(0)
+                    + ", and " + d.text() + " is not one of this motion's states (" + String.join(", ", names.subList(1,
+                        names.size())) + ")");
+                return false;
+            }
+            if (!drawn.contains(at)) drawn.add(at);
+        }
+        if (drawn.isEmpty()) for (int j = 1; j < names.size(); j++) drawn.add(j);
         return true;
     }
 

@@ -102,6 +102,13 @@ final class ResolutionPass {
             if (s instanceof Statement.SeekSystem k && k.index() > 0 && own.get(nameOf(s)) == s) {
                 deps.add(SeekSystems.leader(k));
             }
+            // The states a motion draws are references to them (rename, references), checked by the motion.
+            if (s instanceof Statement.Evolve k && k.index() == 0) {
+                for (Ident d : k.motion().drawn()) {
+                    used.add(d.text());
+                    references.add(new Analysis.Reference(d.text(), d.span()));
+                }
+            }
             // A motion's states take their values from its time's statement, which integrates it.
             if (s instanceof Statement.Evolve k && k.index() > 0 && own.get(nameOf(s)) == s) deps.add(Motions.leader(k));
         }

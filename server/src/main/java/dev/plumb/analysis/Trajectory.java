@@ -24,10 +24,11 @@ import org.apache.commons.math3.ode.ContinuousOutputModel;
  * @param evaluations evaluations of the rates
  * @param visited for each correlation argument used in the rates: where it went over the motion, in words
  * @param widened whether the table's interval was widened to keep it within {@link #MAX_ROWS} rows
+ * @param drawn the states the report plots, by their place in {@code names} (1 the first state)
  */
 public record Trajectory(List<String> names, List<Dimension> dimensions, List<Unit> units, double[] times,
                          double[][] rows, double[] plotTimes, double[][] plotRows, String stop, int steps,
-                         int evaluations, List<String> visited, boolean widened, Dense dense) {
+                         int evaluations, List<String> visited, boolean widened, List<Integer> drawn, Dense dense) {
     /** The most rows a trajectory table holds. */
     public static final int MAX_ROWS = 1000;
 
@@ -36,6 +37,7 @@ public record Trajectory(List<String> names, List<Dimension> dimensions, List<Un
         dimensions = List.copyOf(dimensions);
         units = List.copyOf(units);
         visited = List.copyOf(visited);
+        drawn = List.copyOf(drawn);
     }
 
     /** The time at which the motion stopped (SI). */

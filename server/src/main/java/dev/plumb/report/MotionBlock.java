@@ -11,7 +11,7 @@ import java.util.List;
 /**
  * A motion as a reviewer checks it. The time's entry shows the whole motion: each state's start
  * value and rate in symbols, the stop condition, where it stopped, how the correlations' arguments
- * ranged, the trajectory table and a plot of each state against time; each state's entry shows
+ * ranged, the trajectory table and a plot of each drawn state (all, unless `draw` chose) against time; each state's entry shows
  * its value at the stop and points to the time's.
  */
 final class MotionBlock {
@@ -48,7 +48,7 @@ final class MotionBlock {
             + t.evaluations() + " evaluations of the rates)")));
         for (String visited : t.visited()) out.append(Html.element("p", "visited", Html.text("over the motion, " + visited)));
         out.append(table(a, t));
-        for (int j = 1; j < t.names().size(); j++) {
+        for (int j : t.drawn()) {
             out.append("<figure class=\"plot\">").append(TrajectoryPlot.svg(t, j)).append("<figcaption>")
                 .append(Html.text(t.names().get(j) + " against " + t.names().get(0) + "; the dot is the stop."))
                 .append("</figcaption></figure>");

@@ -211,11 +211,17 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     @Override
     public Object visitEvolve(PlumbParser.EvolveContext ctx) {
         List<PlumbParser.NameContext> names = ctx.name();
+        int overAt = ctx.OVER().getSymbol().getTokenIndex();
         List<Ident> states = new ArrayList<>();
-        for (int i = 0; i < names.size() - 1; i++) states.add(ident(names.get(i)));
-        Ident time = ident(names.get(names.size() - 1));
+        List<Ident> drawn = new ArrayList<>();
+        Ident time = null;
+        for (PlumbParser.NameContext n : names) {
+            if (n.getStart().getTokenIndex() < overAt) states.add(ident(n));
+            else if (time == null) time = ident(n);
+            else drawn.add(ident(n));
+        }
         List<PlumbParser.ExprContext> e = ctx.expr();
-        int timeAt = names.get(names.size() - 1).getStart().getTokenIndex();
+        int timeAt = overAt;
         List<Expr> starts = new ArrayList<>();
         List<Expr> rates = new ArrayList<>();
         int k = 0;
@@ -226,7 +232,8 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         Expr right = expr(e.get(k + 1));
         Expr every = ctx.EVERY() != null ? expr(e.get(k + 2)) : null;
         Statement.Motion motion = new Statement.Motion(time, states, starts, rates, left,
-            comparator(ctx.comparator().getStart()), right, Span.cover(left.span(), right.span()), every, note(ctx.note()));
+            comparator(ctx.comparator().getStart()), right, Span.cover(left.span(), right.span()), every, drawn,
+            note(ctx.note()));
         List<Statement> out = new ArrayList<>();
         List<Ident> all = motion.names();
         for (int i = 0; i < all.size(); i++) out.add(new Statement.Evolve(span(ctx), all.get(i), i, motion));

@@ -116,7 +116,8 @@ final class Shift {
         if (s instanceof Statement.Evolve k) {
             Statement.Motion m = k.motion();
             Statement.Motion moved = new Statement.Motion(ident(m.time()), idents(m.states()), exprs(m.starts()),
-                exprs(m.rates()), expr(m.stopLeft()), m.stop(), expr(m.stopRight()), span(m.until()), expr(m.every()), m.note());
+                exprs(m.rates()), expr(m.stopLeft()), m.stop(), expr(m.stopRight()), span(m.until()), expr(m.every()),
+                idents(m.drawn()), m.note());
             return new Statement.Evolve(span(k.span()), ident(k.name()), k.index(), moved);
         }
         if (s instanceof Statement.SeekSystem k) {

@@ -95,12 +95,14 @@ public sealed interface Statement {
     /**
      * What a motion statement writes: the states with their start values, the name of the time,
      * each state's rate of change, the stop condition ({@code stopLeft stop stopRight}, spanning
-     * {@code until}), the interval of the trajectory table (null: none written) and the note.
+     * {@code until}), the interval of the trajectory table (null: none written), the states the
+     * report plots ({@code draw v, z}; empty: all of them) and the note.
      */
     record Motion(Ident time, List<Ident> states, List<Expr> starts, List<Expr> rates, Expr stopLeft, Comparator stop,
-                  Expr stopRight, Span until, Expr every, String note) {
+                  Expr stopRight, Span until, Expr every, List<Ident> drawn, String note) {
         public Motion {
             states = List.copyOf(states);
+            drawn = List.copyOf(drawn);
             starts = List.copyOf(starts);
             rates = List.copyOf(rates);
         }

@@ -52,4 +52,20 @@ class MotionReportTest {
         assertEquals(2, solved.select("p.solve-summary").stream().filter(p -> p.text().startsWith("residual ")).count());
         assertTrue(solved.selectFirst("table.steps") != null);
     }
+
+    @Test
+    void drawChoosesTheStatesPlotted() {
+        // by hand: x = u t, so 12 m at 4 m/s takes 3 s; only x is drawn.
+        Analysis a = new Workspace(new FileSources(),
+            Settings.DEFAULT).analyzeText(java.nio.file.Path.of("coast.plumb").toAbsolutePath(),
+                "input u = 4 m/s\nevolve v, x from u, 0 m over t rates 0 m/s^2, v until x >= 12 m draw x\n");
+        assertEquals(List.of(), a.diagnostics());
+        Document page = Jsoup.parse(CalcReport.html(a, a.diagnostics(), new CalcReport.Context("coast.plumb", "2026-12-02", null)));
+        assertEquals(List.of("x against t"), page.select("svg.trajectory").eachAttr("aria-label"));
+        Analysis wrong = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(
+            java.nio.file.Path.of("coast.plumb").toAbsolutePath(),
+            "input u = 4 m/s\nevolve x from 0 m over t rates u until x >= 12 m draw u\n");
+        assertEquals(List.of("name.unknown"), wrong.diagnostics().stream().map(d -> d.code().id()).toList());
+        assertTrue(wrong.diagnostics().get(0).message().contains("u is not one of this motion's states (x)"));
+    }
 }
