@@ -23,10 +23,17 @@ final class Motions {
         return k.motion().time().text();
     }
 
-    /** Whether every name is defined by this motion's own statements (see {@link SeekSystems#ownsAll}). */
+    /**
+     * Whether every name is defined by this motion's own statement for it (see {@link SeekSystems#ownsAll}); a
+     * name written twice in one motion (a state named like the time) is defined by the first only, so it fails.
+     */
     static boolean ownsAll(Statement.Evolve k, Map<String, Statement> own) {
-        for (Ident i : k.motion().names()) {
-            if (!(own.get(i.text()) instanceof Statement.Evolve m) || !m.motion().equals(k.motion())) return false;
+        List<Ident> names = k.motion().names();
+        for (int i = 0; i < names.size(); i++) {
+            if (!(own.get(names.get(i).text()) instanceof Statement.Evolve m) || !m.motion().equals(k.motion())
+                || m.index() != i) {
+                return false;
+            }
         }
         return true;
     }

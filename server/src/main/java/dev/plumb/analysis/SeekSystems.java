@@ -29,8 +29,13 @@ final class SeekSystems {
      * another definition's value: the system is then not solved.
      */
     static boolean ownsAll(Statement.SeekSystem k, Map<String, Statement> own) {
-        for (Ident i : k.system().unknowns()) {
-            if (!(own.get(i.text()) instanceof Statement.SeekSystem m) || !m.system().equals(k.system())) return false;
+        List<Ident> unknowns = k.system().unknowns();
+        for (int i = 0; i < unknowns.size(); i++) {
+            // An unknown written twice is defined by its first statement only: the system is then not solved.
+            if (!(own.get(unknowns.get(i).text()) instanceof Statement.SeekSystem m) || !m.system().equals(k.system())
+                || m.index() != i) {
+                return false;
+            }
         }
         return true;
     }

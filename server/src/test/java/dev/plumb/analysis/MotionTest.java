@@ -158,6 +158,25 @@ class MotionTest {
     }
 
     @Test
+    void aStateNamedLikeTheTimeIsADuplicateAndNothingMoves() {
+        Analysis a = Fixture.analyze("evolve t from 1 over t rates 1 / 1 s until t >= 2\n");
+        assertEquals(List.of(Code.NAME_DUPLICATE), codes(a));
+        assertFalse(Fixture.value(a, "t").value().known());
+    }
+
+    @Test
+    void aLongMotionWithAFineTableIsCheckedAtItsStepsNotAtEveryRow() {
+        // by hand: x = 1 m + 1 m/s × t reaches 1e6 m at t = 999,999 s; the table asks for a row
+        // every millisecond (a billion rows), so it is widened to 1,000 rows, and the stop is
+        // still found at the integrator's steps.
+        Analysis a = Fixture.analyze("evolve x from 1 m over t rates 1 m/s until x >= 1e6 m every 1 ms\n");
+        assertEquals(List.of(), codes(a));
+        relative(999_999, si(a, "t"), 1e-9, "the stop");
+        assertTrue(a.trajectory("x").widened());
+        assertEquals(Trajectory.MAX_ROWS + 1, a.trajectory("x").times().length);
+    }
+
+    @Test
     void theFindingsOfTheFixtures() {
         Fixture.checkResource("motion.count-mismatch.plumb");
         Fixture.checkResource("motion.not-evaluated.plumb");

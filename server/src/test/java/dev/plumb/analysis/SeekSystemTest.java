@@ -142,4 +142,11 @@ class SeekSystemTest {
         assertEquals(5, si(a, "b"), 0);
         assertFalse(Fixture.value(a, "a").value().known());
     }
+
+    @Test
+    void anUnknownWrittenTwiceIsADuplicateAndNothingIsSolved() {
+        Analysis a = Fixture.analyze("seek a, a from 1, 2 where a = 1, a = 2\n");
+        assertEquals(List.of(Code.NAME_DUPLICATE), codes(a));
+        assertFalse(Fixture.value(a, "a").value().known());
+    }
 }
