@@ -21,15 +21,17 @@ tokens { NARRATIVE }
     /**
      * Words that end an expression; after a number they are keywords, not units. `so`, `within`
      * and `guess` belong to the solve statement's former spelling, still read so that its error
-     * can show the new one.
+     * can show the new one; `over`, `rates`, `until`, `every` and `draw` are the motion statement's.
      */
     private static final java.util.Set<String> CLAUSE_WORDS =
-        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess");
+        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "over", "rates", "until",
+            "every", "draw");
 
     /**
      * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
      * after `seek` as the line's first token, 2 after the name that follows it. At 2, `in` starts
-     * the search range (`seek V in V_lo .. V_hi`), not a unit.
+     * the search range (`seek V in V_lo .. V_hi`), not a unit. A comma after the name goes back to
+     * 1: another unknown follows (`seek U, a in …`).
      */
     private int seekHead = 0;
     /** Whether no token but blanks and comments has been read on the current line yet. */
@@ -47,6 +49,7 @@ tokens { NARRATIVE }
         } else if (t.getChannel() == Token.DEFAULT_CHANNEL && type != COMMENT) {
             if (type == SEEK && lineStart) seekHead = 1;
             else if (seekHead == 1 && (type == IDENT || type >= TITLE && type <= INTERPOLATE)) seekHead = 2;
+            else if (seekHead == 2 && type == COMMA) seekHead = 1;   // `seek U, a in …`: another unknown
             else seekHead = 0;
             lineStart = false;
         }
@@ -163,6 +166,12 @@ DOMAIN      : 'domain';
 ACCEPT      : 'accept';
 AT          : 'at';
 TRANSITION  : 'transition';
+EVOLVE      : 'evolve';
+OVER        : 'over';
+RATES       : 'rates';
+UNTIL       : 'until';
+EVERY       : 'every';
+DRAW        : 'draw';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

@@ -25,6 +25,8 @@ statement
     | definition
     | check
     | seek
+    | seekSystem
+    | evolve
     | oldSolve
     | accept
     | transition
@@ -50,6 +52,23 @@ value       : expr ( WHEN condition ( ( OTHERWISE | ASSIGN ) expr WHEN condition
 condition   : expr ( comparator expr )+;
 check       : CHECK expr ( comparator expr )+ note?;
 seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
+/**
+ * Several unknowns at once: `seek U, a from 2 m/s, 10 deg where D = T_x, L = W - T_y`, or a
+ * bracket per unknown (`in 1 m/s .. 5 m/s, 0 deg .. 30 deg`). The counts are not fixed here: a
+ * mismatch is the engine's finding, worded in the calc's terms. A lone unknown with a lone
+ * equation reads as `seek` (listed first), so only the new forms reach this rule.
+ */
+seekSystem  : SEEK name ( COMMA name )* ( IN bracket ( COMMA bracket )* | FROM expr ( COMMA expr )* )
+              WHERE equation ( COMMA equation )* note?;
+/**
+ * Motion over time: `evolve v, y from 0 m/s, 0 m over t rates a, v until y >= 20 m every 0.5 s`.
+ * The states, their start values, the time's name, one rate (time derivative) per state, the stop
+ * condition and, optionally, the interval of the trajectory table and the states the report plots. Counts are the engine's finding.
+ */
+evolve      : EVOLVE name ( COMMA name )* FROM expr ( COMMA expr )* OVER name
+              RATES expr ( COMMA expr )* UNTIL expr comparator expr ( EVERY expr )? ( DRAW name ( COMMA name )* )? note?;
+bracket     : expr DOTDOT expr;
+equation    : expr ASSIGN expr;
 /**
  * A reviewer accepts one finding: its code, the value whose statement it is on, and why. The
  * reason is optional here only so that the engine can say clearly that it is missing.
@@ -109,5 +128,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT | TRANSITION
+    | DOMAIN | ACCEPT | AT | TRANSITION | EVOLVE | OVER | RATES | UNTIL | EVERY | DRAW
     ;

@@ -110,6 +110,23 @@ public record Analysis(Path file, String text, ParsedSource syntax, Map<String, 
     }
 
     /** Lines and columns of the text. */
+    /** The trajectory of the motion whose time or state {@code name} is, or null when it is none (or did not run). */
+    public Trajectory trajectory(String name) {
+        return scope.lookup(name) instanceof Binding.ValueBinding v ? v.trajectory() : null;
+    }
+
+    /** Each motion's trajectory that ran, in source order: one per motion statement (its time's row). */
+    public List<Trajectory> trajectories() {
+        List<Trajectory> out = new java.util.ArrayList<>();
+        for (Row r : rows) {
+            if (r instanceof Row.ValueRow v && v.statement() instanceof dev.plumb.syntax.Statement.Evolve k && k.index() == 0) {
+                Trajectory t = trajectory(v.name());
+                if (t != null) out.add(t);
+            }
+        }
+        return out;
+    }
+
     public LineMap lines() {
         return syntax.lines();
     }

@@ -16,9 +16,16 @@ public sealed interface Binding {
     /**
      * A value: an input, a derived value or a built-in constant; origin is set for a correlation's
      * result, note to its source note (null for none), so files that use it can show where it comes from.
+     * A state of a motion (and its time) carries the motion's {@link Trajectory}: the state at a
+     * time inside it is {@code NAME(TIME)}; null for every other value.
      */
     record ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input, Origin origin,
-                        String note) implements Binding {
+                        String note, Trajectory trajectory) implements Binding {
+        /** A value that is not a state of a motion. */
+        public ValueBinding(Path file, Span span, Value value, Unit display, String basis, boolean input, Origin origin,
+                            String note) {
+            this(file, span, value, display, basis, input, origin, note, null);
+        }
     }
 
     /** A correlation, with the scope of the file that defines it. */

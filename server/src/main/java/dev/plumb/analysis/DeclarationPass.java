@@ -119,6 +119,8 @@ final class DeclarationPass {
         if (s instanceof Statement.Correlation c) return c.name();
         if (s instanceof Statement.Table t) return t.name();
         if (s instanceof Statement.Seek f) return f.name();
+        if (s instanceof Statement.SeekSystem k) return k.name();
+        if (s instanceof Statement.Evolve k) return k.name();
         if (s instanceof Statement.Broken b) return b.name();
         return null;
     }

@@ -50,6 +50,19 @@ final class Definitions {
         return new Binding.ValueBinding(file, s.name().span(), tagged.value(), display, tagged.tag(), false, null, s.note());
     }
 
+    /** An unknown of a several-unknown solve: shown in the unit of its start value (or bracket), SI when none. */
+    Binding.ValueBinding solvedInSystem(Statement.SeekSystem k, Value v, Unit shown) {
+        Unit display = v.known() ? (shown != null ? shown : DisplayUnits.defaultFor(v.dimension())) : null;
+        return new Binding.ValueBinding(file, k.name().span(), v, display, null, false, null, k.system().note());
+    }
+
+    /** A name of a motion (its time or a state) at the stop, carrying the whole trajectory. */
+    Binding.ValueBinding evolved(Statement.Evolve k, Value v, Unit shown, Trajectory trajectory) {
+        Unit display = v.known() ? (shown != null ? shown : DisplayUnits.defaultFor(v.dimension())) : null;
+        return new Binding.ValueBinding(file, k.name().span(), v, display, null, false, null, k.motion().note(),
+            v.known() ? trajectory : null);
+    }
+
     /** A binding for a value with nothing to show it by (a trial value, an unknown). */
     Binding.ValueBinding bare(Value v) {
         return new Binding.ValueBinding(file, Span.NONE, v, null, null, false, null, null);

@@ -38,6 +38,9 @@ final class EvaluationPass {
     private ReusableValues earlier = ReusableValues.NONE;
     /** For each own name, the own names its statement uses. */
     private Map<String, java.util.Set<String>> uses = Map.of();
+    /** The values a several-unknown solve gave its later unknowns, waiting for their turn in the plan. */
+    private final Map<String, Binding.ValueBinding> solvedAhead = new java.util.HashMap<>();
+    private final Map<String, Solution> solvedAheadHow = new java.util.HashMap<>();
 
     EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, UnitRegistry units, Budget budget) {
         this.plan = plan;
@@ -100,8 +103,9 @@ final class EvaluationPass {
                 quiet = reporter.said() == said && !outOfTime;
             }
             if (bound != null) values.put(name, bound);
-            boolean valued = s instanceof Statement.Definition || s instanceof Statement.Seek;
-            if (valued ? ReusableValues.sameValue(bound, was) : unchanged) same.add(name);
+            // A name with a value (a definition, a solved unknown, a state of a motion) is the same when
+            // its value is; a function, a correlation or a table when its statement and what it uses are.
+            if (bound != null ? ReusableValues.sameValue(bound, was) : unchanged) same.add(name);
             if (!inCycle) {
                 reusable.put(name, new ReusableValues.Entry(s.span(), used, bound,
                     quiet && s instanceof Statement.Definition && bound != null, s, rows.get(s)));
@@ -151,7 +155,8 @@ final class EvaluationPass {
         if (name == null) return null;
         rows.put(s, new Row.ValueRow(s.span(), name.text(), s instanceof Statement.Definition d && d.input(), Value.UNKNOWN,
             null, null, null, null, null, s));
-        return s instanceof Statement.Definition || s instanceof Statement.Seek || s instanceof Statement.Broken
+        return s instanceof Statement.Definition || s instanceof Statement.Seek || s instanceof Statement.SeekSystem
+            || s instanceof Statement.Evolve || s instanceof Statement.Broken
             ? new Binding.ValueBinding(plan.definitions().bare(Value.UNKNOWN).file(), name.span(), Value.UNKNOWN, null, null,
                 false, null, null)
             : null;
@@ -184,6 +189,8 @@ final class EvaluationPass {
             return null;
         }
         if (s instanceof Statement.Seek f) return seek(f, env, inCycle);
+        if (s instanceof Statement.SeekSystem k) return seekSystem(k, env, inCycle);
+        if (s instanceof Statement.Evolve k) return evolve(k, env, inCycle);
         if (!(s instanceof Statement.Definition d)) return null;
         Binding.ValueBinding bound = definitions.evaluate(d, env, reporter, inCycle, budget);
         rows.put(s, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), bound.basis(), d.note(),
@@ -201,6 +208,72 @@ final class EvaluationPass {
         Binding.ValueBinding bound = plan.definitions().solved(f, outcome.value(), env, reporter, budget);
         rows.put(f, new Row.ValueRow(f.span(), name, false, bound.value(), bound.basis(), f.note(), null,
             outcome.solution(), bound.display(), f));
+        return bound;
+    }
+
+    /**
+     * The time's statement integrates the motion and keeps the states' values until the plan
+     * reaches them (they use the time, so they come after it).
+     */
+    private Binding.ValueBinding evolve(Statement.Evolve k, Environment env, boolean inCycle) {
+        String name = k.name().text();
+        String note = k.motion().note();
+        if (inCycle || plan.own().get(name) != k) {
+            rows.put(k, new Row.ValueRow(k.span(), name, false, Value.UNKNOWN, null, note, null, null, null, k));
+            return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
+        }
+        if (k.index() > 0) {
+            Binding.ValueBinding bound = solvedAhead.remove(name);
+            if (bound == null) bound = plan.definitions().evolved(k, Value.UNKNOWN, null, null);
+            rows.put(k, new Row.ValueRow(k.span(), name, false, bound.value(), null, note, null, null, bound.display(), k));
+            return bound;
+        }
+        MotionRunner.Outcome outcome = new MotionRunner(plan, scope, env, reporter, text, units, budget).run(k);
+        java.util.List<Ident> names = k.motion().names();
+        for (int j = 1; j < names.size(); j++) {
+            Ident other = names.get(j);
+            if (plan.own().get(other.text()) instanceof Statement.Evolve mine && mine.motion().equals(k.motion())) {
+                solvedAhead.put(other.text(), plan.definitions().evolved(mine, outcome.values().get(j),
+                    outcome.units().get(j), outcome.trajectory()));
+            }
+        }
+        Binding.ValueBinding bound = plan.definitions().evolved(k, outcome.values().get(0), outcome.units().get(0),
+            outcome.trajectory());
+        rows.put(k, new Row.ValueRow(k.span(), name, false, bound.value(), null, note, null, null, bound.display(), k));
+        return bound;
+    }
+
+    /**
+     * The first unknown's statement solves the whole system and keeps the others' values until
+     * the plan reaches them (they use the first, so they come after it).
+     */
+    private Binding.ValueBinding seekSystem(Statement.SeekSystem k, Environment env, boolean inCycle) {
+        String name = k.name().text();
+        String note = k.system().note();
+        if (inCycle || plan.own().get(name) != k) {
+            rows.put(k, new Row.ValueRow(k.span(), name, false, Value.UNKNOWN, null, note, null, null, null, k));
+            return inCycle ? plan.definitions().bare(Value.UNKNOWN) : null;
+        }
+        if (k.index() > 0) {
+            Binding.ValueBinding bound = solvedAhead.remove(name);
+            if (bound == null) bound = plan.definitions().solvedInSystem(k, Value.UNKNOWN, null);
+            rows.put(k, new Row.ValueRow(k.span(), name, false, bound.value(), null, note, null, solvedAheadHow.remove(name),
+                bound.display(), k));
+            return bound;
+        }
+        SeekSystemRunner.Outcome outcome = new SeekSystemRunner(plan, scope, env, reporter, text, units, budget).run(k);
+        java.util.List<String> names = SeekSystems.unknowns(k);
+        for (int j = 1; j < names.size(); j++) {
+            Ident other = k.system().unknowns().get(j);
+            if (plan.own().get(other.text()) instanceof Statement.SeekSystem mine && mine.system().equals(k.system())) {
+                solvedAhead.put(other.text(), plan.definitions().solvedInSystem(mine, outcome.values().get(j),
+                    outcome.units().get(j)));
+                if (outcome.solution() != null) solvedAheadHow.put(other.text(), outcome.solution());
+            }
+        }
+        Binding.ValueBinding bound = plan.definitions().solvedInSystem(k, outcome.values().get(0), outcome.units().get(0));
+        rows.put(k, new Row.ValueRow(k.span(), name, false, bound.value(), null, note, null, outcome.solution(),
+            bound.display(), k));
         return bound;
     }
 }

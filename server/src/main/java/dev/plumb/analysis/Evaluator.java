@@ -179,6 +179,10 @@ final class Evaluator {
     private Value call(Expr.Call c) {
         String name = c.callee().text();
         Binding b = locals.containsKey(name) ? null : lookup(name);
+        if (!locals.containsKey(name) && b instanceof Binding.ValueBinding v && v.trajectory() != null
+            && v.trajectory().names().indexOf(name) > 0) {
+            return MotionCalls.stateAt(this, reporter, c, v, name);
+        }
         if (locals.containsKey(name) || b instanceof Binding.ValueBinding) {
             // A name whose statement could not be read (a broken table, say) is already reported.
             if (b instanceof Binding.ValueBinding v && !v.value().known() && !locals.containsKey(name)) return Value.UNKNOWN;

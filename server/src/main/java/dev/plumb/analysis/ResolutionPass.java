@@ -75,6 +75,14 @@ final class ResolutionPass {
                         references.add(new Analysis.Reference(n, span));
                         return;
                     }
+                    if (s instanceof Statement.SeekSystem k && SeekSystems.unknowns(k).contains(n)) {
+                        references.add(new Analysis.Reference(n, span));
+                        return;
+                    }
+                    if (s instanceof Statement.Evolve k && Motions.names(k).contains(n)) {
+                        references.add(new Analysis.Reference(n, span));
+                        return;
+                    }
                     if (params.contains(n)) return;
                     used.add(n);
                     references.add(new Analysis.Reference(n, span));
@@ -90,6 +98,19 @@ final class ResolutionPass {
                     }
                 });
             }
+            // The other unknowns of a several-unknown solve take their values from the first's statement.
+            if (s instanceof Statement.SeekSystem k && k.index() > 0 && own.get(nameOf(s)) == s) {
+                deps.add(SeekSystems.leader(k));
+            }
+            // The states a motion draws are references to them (rename, references), checked by the motion.
+            if (s instanceof Statement.Evolve k && k.index() == 0) {
+                for (Ident d : k.motion().drawn()) {
+                    used.add(d.text());
+                    references.add(new Analysis.Reference(d.text(), d.span()));
+                }
+            }
+            // A motion's states take their values from its time's statement, which integrates it.
+            if (s instanceof Statement.Evolve k && k.index() > 0 && own.get(nameOf(s)) == s) deps.add(Motions.leader(k));
         }
         return new Resolution(uses, references, used, importedUses);
     }
@@ -124,6 +145,22 @@ final class ResolutionPass {
             for (Expr e : new Expr[] {f.low(), f.high(), f.start(), f.lhs(), f.rhs()}) {
                 if (e != null) exprs.add(e);
             }
+        }
+        if (s instanceof Statement.SeekSystem k && k.index() == 0) {
+            // The unknowns are not dependencies of their own equations, but they are used.
+            for (String n : SeekSystems.unknowns(k)) {
+                params.add(n);
+                used.add(n);
+            }
+            exprs.addAll(dev.plumb.syntax.ExprWalk.of(k));
+        }
+        if (s instanceof Statement.Evolve k && k.index() == 0) {
+            // The time and the states are bound by the motion itself, not dependencies of its formulas.
+            for (String n : Motions.names(k)) {
+                params.add(n);
+                used.add(n);
+            }
+            exprs.addAll(dev.plumb.syntax.ExprWalk.of(k));
         }
     }
 

@@ -157,7 +157,8 @@ final class ReusableValues {
                 }
                 v = v.noted(v.notes().withShape(new Shape(shape.factor(), lengths)));
             }
-            return new Binding.ValueBinding(b.file(), name, v, b.display(), b.basis(), b.input(), b.origin(), b.note());
+            return new Binding.ValueBinding(b.file(), name, v, b.display(), b.basis(), b.input(), b.origin(), b.note(),
+                b.trajectory());
         }
 
         /** Whether any unchanged statement so far moved (most edits leave everything before them in place). */
@@ -205,6 +206,6 @@ final class ReusableValues {
     static boolean sameValue(Binding.ValueBinding a, Binding.ValueBinding b) {
         return a != null && b != null && a.value().equals(b.value()) && Objects.equals(a.display(), b.display())
             && Objects.equals(a.basis(), b.basis()) && a.input() == b.input() && Objects.equals(a.origin(), b.origin())
-            && Objects.equals(a.note(), b.note());
+            && Objects.equals(a.note(), b.note()) && Objects.equals(a.trajectory(), b.trajectory());
     }
 }

@@ -25,15 +25,43 @@ final class SeekDependents {
     static Map<String, Set<String>> adjust(Map<String, Statement> own, Map<String, Set<String>> uses) {
         Map<String, Set<String>> out = new LinkedHashMap<>();
         // Most calcs solve nothing: the reverse graph is made only for one that does.
-        if (own.values().stream().noneMatch(s -> s instanceof Statement.Seek)) return out;
+        if (own.values().stream().noneMatch(s -> s instanceof Statement.Seek || s instanceof Statement.SeekSystem
+            || s instanceof Statement.Evolve)) {
+            return out;
+        }
         Map<String, Set<String>> usedBy = reverse(uses);
         for (var entry : own.entrySet()) {
-            if (!(entry.getValue() instanceof Statement.Seek f)) continue;
             String unknown = entry.getKey();
-            Set<String> dependsOnUnknown = closure(unknown, usedBy);
+            Set<String> dependsOnUnknown;
             Set<String> fromEquation = new LinkedHashSet<>();
-            References.each(f.lhs(), (n, span) -> fromEquation.add(n));
-            References.each(f.rhs(), (n, span) -> fromEquation.add(n));
+            Set<String> unknowns = new LinkedHashSet<>(List.of(unknown));
+            if (entry.getValue() instanceof Statement.Seek f) {
+                dependsOnUnknown = closure(unknown, usedBy);
+                References.each(f.lhs(), (n, span) -> fromEquation.add(n));
+                References.each(f.rhs(), (n, span) -> fromEquation.add(n));
+            } else if (entry.getValue() instanceof Statement.SeekSystem k && k.index() == 0) {
+                // Several unknowns: what depends on any of them is re-evaluated per trial; the
+                // system's statement comes after everything else its equations use.
+                unknowns.addAll(SeekSystems.unknowns(k));
+                dependsOnUnknown = new HashSet<>();
+                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy));
+                for (Statement.Equation q : k.system().equations()) {
+                    References.each(q.lhs(), (n, span) -> fromEquation.add(n));
+                    References.each(q.rhs(), (n, span) -> fromEquation.add(n));
+                }
+            } else if (entry.getValue() instanceof Statement.Evolve k && k.index() == 0) {
+                // A motion: what depends on the time or a state and feeds the rates or the stop
+                // condition is re-evaluated at every evaluation of the rates.
+                unknowns.addAll(Motions.names(k));
+                dependsOnUnknown = new HashSet<>();
+                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy));
+                List<dev.plumb.syntax.Expr> read = new java.util.ArrayList<>(k.motion().rates());
+                read.add(k.motion().stopLeft());
+                read.add(k.motion().stopRight());
+                for (dev.plumb.syntax.Expr e : read) References.each(e, (n, span) -> fromEquation.add(n));
+            } else {
+                continue;
+            }
             Set<String> reached = new LinkedHashSet<>();
             for (String n : fromEquation) {
                 if (uses.containsKey(n)) reached.addAll(closureFrom(n, uses));
@@ -45,7 +73,7 @@ final class SeekDependents {
             Set<String> adjusted = new LinkedHashSet<>(uses.get(unknown));
             for (String d : dependents) adjusted.addAll(uses.get(d));
             adjusted.removeAll(dependents);
-            adjusted.remove(unknown);
+            adjusted.removeAll(unknowns);
             uses.put(unknown, adjusted);
             out.put(unknown, dependents);
         }

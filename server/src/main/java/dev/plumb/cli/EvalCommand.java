@@ -35,6 +35,11 @@ final class EvalCommand implements Callable<Integer> {
         description = "text, json (every value, check and finding) or csv (one row per value); default: ${DEFAULT-VALUE}")
     Format format;
 
+    @picocli.CommandLine.Option(names = "--trajectory", paramLabel = "NAME",
+        description = "with --format csv: write the trajectory table of the motion whose time or state is NAME "
+            + "instead of the values")
+    String trajectory;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -53,6 +58,11 @@ final class EvalCommand implements Callable<Integer> {
             err.println("plumb: no such file: " + dev.plumb.diagnostics.Printable.line(file.toString()));
             return Main.USAGE;
         }
+        if (trajectory != null && format != Format.csv) {
+            err.println("plumb: --trajectory chooses the table that --format csv writes; text and json show every "
+                + "motion's table already");
+            return Main.USAGE;
+        }
         Workspace workspace = new Workspace(common.sources(), common.settings());
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
@@ -60,8 +70,21 @@ final class EvalCommand implements Callable<Integer> {
         if (format != Format.text) {
             // Machine formats are the data alone: no colours, no notice a parser would trip on.
             PrintWriter plain = spec.commandLine().getOut();
-            if (format == Format.json) ValueExport.json(a, checked.diagnostics(), plain);
-            else ValueExport.csv(a, plain);
+            if (format == Format.json) {
+                ValueExport.json(a, checked.diagnostics(), plain);
+            } else if (trajectory != null) {
+                dev.plumb.analysis.Trajectory t = a.trajectory(trajectory);
+                if (t == null) {
+                    List<String> motions = a.trajectories().stream().map(m -> m.names().get(0)).toList();
+                    err.println("plumb: " + dev.plumb.diagnostics.Printable.line(trajectory) + " is not the time or a "
+                        + "state of a motion that ran in this calc" + (motions.isEmpty() ? " (it has none)"
+                        : "; its motions' times: " + dev.plumb.diagnostics.Printable.line(String.join(", ", motions))));
+                    return Main.USAGE;
+                }
+                ValueExport.csvTrajectory(t, plain);
+            } else {
+                ValueExport.csv(a, plain);
+            }
             plain.flush();
             return TextReport.Tally.of(results).exitCode(false);
         }

@@ -8,6 +8,12 @@ import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.analysis.Solution;
+import dev.plumb.analysis.SystemSolution;
+import dev.plumb.analysis.Trajectory;
+import dev.plumb.analysis.Value;
+import dev.plumb.present.TrajectoryText;
+import dev.plumb.syntax.Statement;
+import dev.plumb.present.SystemText;
 import dev.plumb.units.DisplayUnits;
 import dev.plumb.units.QuantityFormat;
 import dev.plumb.units.Unit;
@@ -68,8 +74,11 @@ final class EvalReport {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
                 out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v), valueWidth) + basis + solved(v)
-                    + note).stripTrailing());
+                    + evolved(a, v) + note).stripTrailing());
                 if (steps && v.solution() != null) writeSteps(out, v.solution(), v);
+                if (v.statement() instanceof Statement.Evolve k && k.index() == 0 && a.trajectory(v.name()) != null) {
+                    writeTrajectory(out, a.trajectory(v.name()), a.settings().significantFigures());
+                }
             } else if (r instanceof Row.FunctionRow f) {
                 out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));
             } else if (r instanceof Row.CheckRow c) {
@@ -83,6 +92,7 @@ final class EvalReport {
     /** For a solved `seek`: how many evaluations and the residual left at the root. */
     private static String solved(Row.ValueRow v) {
         if (v.solution() == null) return "";
+        if (v.solution().system() != null) return "  [solved " + SystemText.summary(v.solution().system(), v.name()) + "]";
         Unit unit = DisplayUnits.defaultFor(v.solution().residualDimension());
         return "  [solved: " + v.solution().iterations() + " iterations, residual "
             + QuantityFormat.format(v.solution().residual(), unit, 2) + "]";
@@ -90,12 +100,63 @@ final class EvalReport {
 
     /** The refinement's record: each trial, its residual and the bracket after it, in the unit the root is shown in. */
     private static void writeSteps(PrintWriter out, Solution s, Row.ValueRow root) {
+        if (s.system() != null) {
+            writeSystemSteps(out, s.system(), root);
+            return;
+        }
         Unit unit = DisplayUnits.defaultFor(s.residualDimension());
         Unit x = root.display() != null ? root.display() : DisplayUnits.defaultFor(root.value().dimension());
         for (Solution.Step step : s.steps()) {
             out.printf("      %3d  %s = %-16s residual = %-14s bracket %s .. %s%n", step.n(), Printable.line(root.name()),
                 QuantityFormat.format(step.x(), x, 10), QuantityFormat.format(step.residual(), unit, 3),
                 QuantityFormat.format(step.low(), x, 10), QuantityFormat.format(step.high(), x, 10));
+        }
+    }
+
+    /** For a motion: how it ran, on its time's row; the time a state's value is at, on each state's row. */
+    private static String evolved(Analysis a, Row.ValueRow v) {
+        if (!(v.statement() instanceof Statement.Evolve k)) return "";
+        Trajectory t = a.trajectory(v.name());
+        if (t == null) return "";
+        if (k.index() == 0) return "  [" + TrajectoryText.summary(t) + "]";
+        return "  [at " + t.names().get(0) + " = " + ValueText.of(Value.of(t.end(), t.dimensions().get(0)), t.units().get(0),
+            a.settings().significantFigures()) + "]";
+    }
+
+    /** The trajectory table under the motion's time, columns aligned, then where its correlations' arguments went. */
+    private static void writeTrajectory(PrintWriter out, Trajectory t, int sig) {
+        List<String> heads = TrajectoryText.heads(t);
+        int[] widths = new int[heads.size()];
+        for (int j = 0; j < heads.size(); j++) {
+            widths[j] = width(heads.get(j));
+            for (int i = 0; i < t.times().length; i++) widths[j] = Math.max(widths[j], width(TrajectoryText.cell(t, i, j, sig)));
+        }
+        StringBuilder head = new StringBuilder("     ");
+        for (int j = 0; j < heads.size(); j++) head.append("  ").append(pad(heads.get(j), widths[j]));
+        out.println(Printable.line(head.toString()).stripTrailing());
+        for (int i = 0; i < t.times().length; i++) {
+            StringBuilder row = new StringBuilder("     ");
+            for (int j = 0; j < heads.size(); j++) row.append("  ").append(pad(TrajectoryText.cell(t, i, j, sig), widths[j]));
+            out.println(Printable.line(row.toString()).stripTrailing());
+        }
+        if (t.widened()) out.println("       (interval widened to keep the table within " + Trajectory.MAX_ROWS + " rows)");
+        for (String visited : t.visited()) out.println(Printable.line("       over the motion, " + visited));
+    }
+
+    /** A system's iterates, under its first unknown only: the unknowns, then each equation's residual. */
+    private static void writeSystemSteps(PrintWriter out, SystemSolution s, Row.ValueRow row) {
+        if (!s.unknowns().get(0).equals(row.name())) return;
+        for (SystemSolution.Iterate it : s.record()) {
+            List<String> parts = new ArrayList<>();
+            for (int j = 0; j < s.unknowns().size(); j++) {
+                parts.add(s.unknowns().get(j) + " = " + SystemText.unknown(s, j, it.x().get(j), 10));
+            }
+            List<String> residuals = new ArrayList<>();
+            for (int i = 0; i < it.residual().size(); i++) {
+                residuals.add(SystemText.residual(it.residual().get(i), s.residuals().get(i).dimension()));
+            }
+            out.println(Printable.line(String.format("      %3d  %s   residuals %s", it.n(), String.join(", ", parts),
+                String.join(", ", residuals))));
         }
     }
 

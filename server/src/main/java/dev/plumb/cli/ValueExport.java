@@ -1,5 +1,7 @@
 package dev.plumb.cli;
 
+import dev.plumb.analysis.Trajectory;
+import dev.plumb.present.TrajectoryText;
 import dev.plumb.present.UsedValues;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
@@ -74,10 +76,52 @@ final class ValueExport {
         }
         root.add("usedValues", used);
         root.add("checks", checks);
+        JsonArray motions = new JsonArray();
+        for (Trajectory t : a.trajectories()) motions.add(trajectory(t));
+        root.add("trajectories", motions);
         JsonArray findings = new JsonArray();
         for (Diagnostic d : diagnostics) findings.add(JsonReport.diagnostic(a, d));
         root.add("diagnostics", findings);
         out.println(new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root));
+    }
+
+    /** A motion: its names, units, how it stopped, and its table (numbers in the units named). */
+    private static JsonObject trajectory(Trajectory t) {
+        JsonObject o = new JsonObject();
+        JsonArray names = new JsonArray();
+        JsonArray units = new JsonArray();
+        for (int j = 0; j < t.names().size(); j++) {
+            names.add(t.names().get(j));
+            units.add(t.units().get(j).symbol());
+        }
+        o.add("names", names);
+        o.add("units", units);
+        o.addProperty("stopped", t.stop());
+        o.addProperty("steps", t.steps());
+        JsonArray rows = new JsonArray();
+        for (int i = 0; i < t.times().length; i++) {
+            JsonArray row = new JsonArray();
+            for (int j = 0; j < t.names().size(); j++) row.add(TrajectoryText.number(t, i, j));
+            rows.add(row);
+        }
+        o.add("rows", rows);
+        JsonArray visited = new JsonArray();
+        t.visited().forEach(visited::add);
+        o.add("visited", visited);
+        return o;
+    }
+
+    /** A motion's table as CSV: a head of names with units, then one row per table time, in those units. */
+    static void csvTrajectory(Trajectory t, PrintWriter out) {
+        List<String> heads = TrajectoryText.heads(t);
+        StringBuilder head = new StringBuilder();
+        for (int j = 0; j < heads.size(); j++) head.append(j > 0 ? "," : "").append(quoted(dev.plumb.diagnostics.Printable.line(heads.get(j))));
+        out.print(head.append("\r\n"));
+        for (int i = 0; i < t.times().length; i++) {
+            StringBuilder row = new StringBuilder();
+            for (int j = 0; j < heads.size(); j++) row.append(j > 0 ? "," : "").append(TrajectoryText.number(t, i, j));
+            out.print(row.append("\r\n"));
+        }
     }
 
     /** One row per value, RFC 4180 quoting; an unknown value has empty number cells and "?" as shown. */

@@ -55,6 +55,11 @@ public final class Completion {
                 out.add(new CompletionEntry("seek … from … where …", CompletionEntry.Kind.KEYWORD,
                     "solve for a value from a start value", "seek ${1:x} from ${2:start} where ${3:lhs} = ${4:rhs}", true));
             }
+            if (matches("evolve", word)) {
+                out.add(new CompletionEntry("evolve … over … rates … until …", CompletionEntry.Kind.KEYWORD,
+                    "follow states in time from start values", "evolve ${1:v} from ${2:start} over ${3:t} rates ${4:rate} "
+                        + "until ${5:condition}", true));
+            }
         }
         for (String name : new TreeSet<>(a.scope().visibleNames())) {
             if (!matches(name, word)) continue;

@@ -69,7 +69,25 @@ public final class HoverText {
                 out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
             }
         }
-        if (row != null && row.solution() != null) {
+        if (row != null && row.statement() instanceof dev.plumb.syntax.Statement.Evolve k && a.trajectory(row.name()) != null) {
+            dev.plumb.analysis.Trajectory t = a.trajectory(row.name());
+            out.append("\n\n").append(dev.plumb.present.TrajectoryText.summary(t));
+            if (k.index() > 0) {
+                out.append("; the value at the stop, ").append(t.names().get(0)).append(" = ")
+                    .append(dev.plumb.present.ValueText.of(dev.plumb.analysis.Value.of(t.end(), t.dimensions().get(0)),
+                        t.units().get(0), a.settings().significantFigures()))
+                    .append("; `").append(row.name()).append("(TIME)` reads it at another time of the motion");
+            }
+            for (String visited : t.visited()) out.append("\n- over the motion, ").append(visited);
+        }
+        if (row != null && row.solution() != null && row.solution().system() != null) {
+            dev.plumb.analysis.SystemSolution system = row.solution().system();
+            out.append("\n\nsolved by `seek` together ").append(dev.plumb.present.SystemText.summary(system, row.name()));
+            for (int i = 0; i < system.residuals().size(); i++) {
+                out.append("\n- `").append(system.residuals().get(i).equation()).append("`: ")
+                    .append(dev.plumb.present.SystemText.residuals(system).get(i));
+            }
+        } else if (row != null && row.solution() != null) {
             out.append("\n\nsolved by `seek` in ").append(row.solution().iterations()).append(" iterations");
         }
         if (b.file() != null && !b.file().equals(a.file())) out.append("\n\ndefined in ").append(b.file().getFileName());

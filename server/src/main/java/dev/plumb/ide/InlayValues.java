@@ -26,7 +26,9 @@ public final class InlayValues {
             if (r.span().end() < from || r.span().end() > to) continue;
             if (r instanceof Row.ValueRow v && !v.input()) {
                 String solved = v.solution() == null ? "" : "  (solved, " + v.solution().iterations() + " iterations)";
-                out.add(new InlayValue(v.span().end(), "= " + ValueText.of(a, v) + solved, v.name()));
+                // The unknowns of one several-unknown solve share its line: each says whose value it is.
+                String lead = v.statement() instanceof dev.plumb.syntax.Statement.SeekSystem ? v.name() + " = " : "= ";
+                out.add(new InlayValue(v.span().end(), lead + ValueText.of(a, v) + solved, v.name()));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "? not evaluated" : CheckText.mark(c) + " " + CheckText.detail(c);
                 out.add(new InlayValue(c.span().end(), mark, "check"));

@@ -47,6 +47,8 @@ public final class SemanticSpans {
         } else if (s instanceof Statement.Seek f) {
             for (Expr e : new Expr[] {f.low(), f.high(), f.start(), f.lhs(), f.rhs()}) if (e != null) expr(e, out);
             if (f.displayUnit() != null) out.add(new Token(f.displayUnit().span(), Type.UNIT));
+        } else if (s instanceof Statement.SeekSystem) {
+            dev.plumb.syntax.ExprWalk.of(s).forEach(e -> expr(e, out));
         }
     }
 

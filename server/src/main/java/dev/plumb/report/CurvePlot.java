@@ -137,7 +137,7 @@ final class CurvePlot {
     }
 
     /** One axis: SI values to page coordinates, linear or logarithmic, with a few round ticks. */
-    private record Axis(double from, double to, boolean log, double pageFrom, double pageTo) {
+    record Axis(double from, double to, boolean log, double pageFrom, double pageTo) {
         double at(double v) {
             double f = log ? (Math.log10(v) - Math.log10(from)) / (Math.log10(to) - Math.log10(from)) : (v - from) / (to - from);
             return pageFrom + f * (pageTo - pageFrom);

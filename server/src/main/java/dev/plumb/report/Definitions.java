@@ -46,6 +46,10 @@ final class Definitions {
             }
         } else if (v.statement() instanceof Statement.Seek s) {
             out.append(solved(a, v, s, values, math));
+        } else if (v.statement() instanceof Statement.SeekSystem k) {
+            out.append(SystemBlock.html(a, v, k, values, math));
+        } else if (v.statement() instanceof Statement.Evolve k) {
+            out.append(MotionBlock.html(a, v, k, values, math));
         } else {
             out.append(Html.element("p", "broken", math.symbol(v.name()) + " — this line could not be read; see the findings"));
         }

@@ -40,7 +40,10 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             if (errors.anyWithin(startCp, lineEndCp)) {
                 out.add(broken(s, tokens));
             } else {
-                out.add(visit(s));
+                Object made = visit(s);
+                // A several-unknown solve is one statement per unknown.
+                if (made instanceof List<?> several) out.addAll(several);
+                else out.add(made);
             }
         }
         return out;
@@ -177,6 +180,64 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         Ident basis = tail.name() == null ? null : ident(tail.name());
         return new Statement.Seek(span(ctx), ident(ctx.name()), low, high, start, lhs, rhs,
             Span.cover(lhs.span(), rhs.span()), unit, basis, note(tail.note()));
+    }
+
+    /** One statement per unknown, sharing what was written (see {@link Statement.SeekSystem}). */
+    @Override
+    public Object visitSeekSystem(PlumbParser.SeekSystemContext ctx) {
+        List<Ident> unknowns = new ArrayList<>();
+        for (PlumbParser.NameContext n : ctx.name()) unknowns.add(ident(n));
+        List<Expr> starts = new ArrayList<>();
+        for (PlumbParser.ExprContext e : ctx.expr()) starts.add(expr(e));
+        List<Expr> lows = new ArrayList<>();
+        List<Expr> highs = new ArrayList<>();
+        for (PlumbParser.BracketContext b : ctx.bracket()) {
+            lows.add(expr(b.expr(0)));
+            highs.add(expr(b.expr(1)));
+        }
+        List<Statement.Equation> equations = new ArrayList<>();
+        for (PlumbParser.EquationContext q : ctx.equation()) {
+            Expr lhs = expr(q.expr(0));
+            Expr rhs = expr(q.expr(1));
+            equations.add(new Statement.Equation(Span.cover(lhs.span(), rhs.span()), lhs, rhs));
+        }
+        Statement.Equations system = new Statement.Equations(unknowns, starts, lows, highs, equations, note(ctx.note()));
+        List<Statement> out = new ArrayList<>();
+        for (int i = 0; i < unknowns.size(); i++) out.add(new Statement.SeekSystem(span(ctx), unknowns.get(i), i, system));
+        return out;
+    }
+
+    /** One statement for the time and one per state, sharing what was written (see {@link Statement.Evolve}). */
+    @Override
+    public Object visitEvolve(PlumbParser.EvolveContext ctx) {
+        List<PlumbParser.NameContext> names = ctx.name();
+        int overAt = ctx.OVER().getSymbol().getTokenIndex();
+        List<Ident> states = new ArrayList<>();
+        List<Ident> drawn = new ArrayList<>();
+        Ident time = null;
+        for (PlumbParser.NameContext n : names) {
+            if (n.getStart().getTokenIndex() < overAt) states.add(ident(n));
+            else if (time == null) time = ident(n);
+            else drawn.add(ident(n));
+        }
+        List<PlumbParser.ExprContext> e = ctx.expr();
+        int timeAt = overAt;
+        List<Expr> starts = new ArrayList<>();
+        List<Expr> rates = new ArrayList<>();
+        int k = 0;
+        while (k < e.size() && e.get(k).getStart().getTokenIndex() < timeAt) starts.add(expr(e.get(k++)));
+        int untilAt = ctx.UNTIL().getSymbol().getTokenIndex();
+        while (k < e.size() && e.get(k).getStart().getTokenIndex() < untilAt) rates.add(expr(e.get(k++)));
+        Expr left = expr(e.get(k));
+        Expr right = expr(e.get(k + 1));
+        Expr every = ctx.EVERY() != null ? expr(e.get(k + 2)) : null;
+        Statement.Motion motion = new Statement.Motion(time, states, starts, rates, left,
+            comparator(ctx.comparator().getStart()), right, Span.cover(left.span(), right.span()), every, drawn,
+            note(ctx.note()));
+        List<Statement> out = new ArrayList<>();
+        List<Ident> all = motion.names();
+        for (int i = 0; i < all.size(); i++) out.add(new Statement.Evolve(span(ctx), all.get(i), i, motion));
+        return out;
     }
 
     @Override

@@ -39,6 +39,28 @@ public final class ExprWalk {
         if (s instanceof Statement.Seek k) {
             for (Expr e : new Expr[] {k.low(), k.high(), k.start(), k.lhs(), k.rhs()}) if (e != null) out.add(e);
         }
+        if (s instanceof Statement.Evolve k && k.index() == 0) {
+            // The time's statement speaks for the motion's formulas, so each is walked once.
+            Statement.Motion m = k.motion();
+            out.addAll(m.starts());
+            out.addAll(m.rates());
+            out.add(m.stopLeft());
+            out.add(m.stopRight());
+            if (m.every() != null) out.add(m.every());
+        }
+        if (s instanceof Statement.SeekSystem k && k.index() == 0) {
+            // The first unknown's statement speaks for the system's formulas, so each is walked once.
+            Statement.Equations q = k.system();
+            out.addAll(q.starts());
+            for (int i = 0; i < q.lows().size(); i++) {
+                out.add(q.lows().get(i));
+                out.add(q.highs().get(i));
+            }
+            for (Statement.Equation e : q.equations()) {
+                out.add(e.lhs());
+                out.add(e.rhs());
+            }
+        }
         return out;
     }
 }

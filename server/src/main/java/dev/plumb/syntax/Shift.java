@@ -113,6 +113,20 @@ final class Shift {
             return new Statement.Seek(span(f.span()), ident(f.name()), expr(f.low()), expr(f.high()), expr(f.start()),
                 expr(f.lhs()), expr(f.rhs()), span(f.equation()), unit(f.displayUnit()), ident(f.basis()), f.note());
         }
+        if (s instanceof Statement.Evolve k) {
+            Statement.Motion m = k.motion();
+            Statement.Motion moved = new Statement.Motion(ident(m.time()), idents(m.states()), exprs(m.starts()),
+                exprs(m.rates()), expr(m.stopLeft()), m.stop(), expr(m.stopRight()), span(m.until()), expr(m.every()),
+                idents(m.drawn()), m.note());
+            return new Statement.Evolve(span(k.span()), ident(k.name()), k.index(), moved);
+        }
+        if (s instanceof Statement.SeekSystem k) {
+            Statement.Equations q = k.system();
+            Statement.Equations moved = new Statement.Equations(idents(q.unknowns()), exprs(q.starts()), exprs(q.lows()),
+                exprs(q.highs()), each(q.equations(), e -> new Statement.Equation(span(e.span()), expr(e.lhs()), expr(e.rhs()))),
+                q.note());
+            return new Statement.SeekSystem(span(k.span()), ident(k.name()), k.index(), moved);
+        }
         if (s instanceof Statement.Correlation c) {
             List<Statement.Param> params = each(c.params(), this::param);
             List<Statement.Piece> pieces = each(c.pieces(), this::piece);

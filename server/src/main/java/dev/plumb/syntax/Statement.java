@@ -50,6 +50,73 @@ public sealed interface Statement {
     }
 
     /**
+     * One unknown of {@code seek A, B, … (from S1, S2, … | in L1 .. H1, …) where E1, E2, …}: the
+     * parser gives one such statement per unknown, in order, each with the whole statement's span
+     * and the same {@code system}, so every unknown is a name defined by a statement of its own
+     * (outline, rename, dependency graph). The first ({@code index} 0) solves the system; the
+     * others take their values from it.
+     */
+    record SeekSystem(Span span, Ident name, int index, Equations system) implements Statement {
+    }
+
+    /**
+     * What a several-unknown solve writes: the unknowns, their start values (or brackets: lows and
+     * highs, empty otherwise) and the equations, each {@code LHS = RHS}. The counts are as written;
+     * the engine reports a mismatch.
+     */
+    record Equations(List<Ident> unknowns, List<Expr> starts, List<Expr> lows, List<Expr> highs,
+                     List<Equation> equations, String note) {
+        public Equations {
+            unknowns = List.copyOf(unknowns);
+            starts = List.copyOf(starts);
+            lows = List.copyOf(lows);
+            highs = List.copyOf(highs);
+            equations = List.copyOf(equations);
+        }
+
+        /** Whether the unknowns are given brackets rather than start values. */
+        public boolean bracketed() {
+            return !lows.isEmpty();
+        }
+    }
+
+    /** One equation {@code LHS = RHS} of a several-unknown solve; span covers both sides. */
+    record Equation(Span span, Expr lhs, Expr rhs) {
+    }
+
+    /**
+     * One name of {@code evolve S1, S2, … from A1, A2, … over T rates R1, R2, … until L op R [every DT]}:
+     * the parser gives one such statement for the time T ({@code index} 0, which integrates the
+     * motion) and one per state, each with the whole statement's span and the same {@code motion}.
+     */
+    record Evolve(Span span, Ident name, int index, Motion motion) implements Statement {
+    }
+
+    /**
+     * What a motion statement writes: the states with their start values, the name of the time,
+     * each state's rate of change, the stop condition ({@code stopLeft stop stopRight}, spanning
+     * {@code until}), the interval of the trajectory table (null: none written), the states the
+     * report plots ({@code draw v, z}; empty: all of them) and the note.
+     */
+    record Motion(Ident time, List<Ident> states, List<Expr> starts, List<Expr> rates, Expr stopLeft, Comparator stop,
+                  Expr stopRight, Span until, Expr every, List<Ident> drawn, String note) {
+        public Motion {
+            states = List.copyOf(states);
+            drawn = List.copyOf(drawn);
+            starts = List.copyOf(starts);
+            rates = List.copyOf(rates);
+        }
+
+        /** The names the statement defines: the time first, then the states. */
+        public List<Ident> names() {
+            List<Ident> out = new java.util.ArrayList<>();
+            out.add(time);
+            out.addAll(states);
+            return out;
+        }
+    }
+
+    /**
      * {@code correlation NAME(PARAMS) … end}: a published formula with what a reviewer needs to
      * trust it. Optional parts are null when absent; {@code pieces} has one entry for a single
      * {@code = EXPR}; {@code flow} is the flow direction its basis faces ({@code basis frontal

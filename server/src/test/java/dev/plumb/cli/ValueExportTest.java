@@ -91,4 +91,43 @@ class ValueExportTest {
         assertTrue(rows.get(1).endsWith(",\"panel width, drawing \"\"S-01\"\", rev B\""), rows.get(1));
         assertTrue(rows.get(4).startsWith("x,4,false,,,?,"), rows.get(4));
     }
+
+    /** A body coasting at constant speed: by hand, x = u t, so 12 m at 4 m/s takes 3 s. */
+    private static final String MOTION = """
+        input u = 4 m/s
+        evolve x from 0 m over t rates u until x >= 12 m every 1 s
+        """;
+
+    @Test
+    void csvWritesTheTableOfTheMotionNamedAndJsonHoldsEveryMotion() throws IOException {
+        Path calc = Cli.write(dir, "coast.plumb", MOTION);
+        Cli csv = Cli.run("eval", "--format", "csv", "--trajectory", "x", calc.toString());
+        assertEquals(0, csv.exitCode(), csv.err());
+        List<String> lines = csv.out().lines().toList();
+        assertEquals("t (s),x (m)", lines.get(0));
+        assertEquals(5, lines.size(), csv.out());
+        // by hand: x = 4 m/s × t at t = 0, 1, 2, 3 s
+        for (int i = 0; i <= 3; i++) {
+            String[] cells = lines.get(i + 1).split(",");
+            assertEquals(i, Double.parseDouble(cells[0]), 1e-9);
+            assertEquals(4.0 * i, Double.parseDouble(cells[1]), 1e-9);
+        }
+        JsonObject root = JsonParser.parseString(Cli.run("eval", "--format", "json", calc.toString()).out()).getAsJsonObject();
+        JsonObject motion = root.getAsJsonArray("trajectories").get(0).getAsJsonObject();
+        assertEquals("[\"t\",\"x\"]", motion.getAsJsonArray("names").toString());
+        assertEquals(4, motion.getAsJsonArray("rows").size());
+        assertEquals(12, motion.getAsJsonArray("rows").get(3).getAsJsonArray().get(1).getAsDouble(), 1e-9);
+    }
+
+    @Test
+    void aTrajectoryNameThatIsNoMotionOrAnotherFormatIsAUsageError() throws IOException {
+        Path calc = Cli.write(dir, "coast.plumb", MOTION);
+        Cli none = Cli.run("eval", "--format", "csv", "--trajectory", "u", calc.toString());
+        assertEquals(2, none.exitCode());
+        assertTrue(none.err().contains("u is not the time or a state of a motion") && none.err().contains("times: t"),
+            none.err());
+        Cli text = Cli.run("eval", "--trajectory", "x", calc.toString());
+        assertEquals(2, text.exitCode());
+        assertTrue(text.err().contains("--format csv"), text.err());
+    }
 }

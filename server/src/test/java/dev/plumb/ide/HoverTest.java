@@ -42,6 +42,15 @@ class HoverTest {
     }
 
     @Test
+    void anUnknownOfASystemShowsWithWhatItWasSolvedAndEachEquationsResidual() {
+        // by hand: T sin θ = 120 N, T cos θ = 300 N give tan θ = 0.4, θ = 21.80°
+        contains(hover("input D = 120 N\ninput W = 300 N\nseek T, th$0eta from 100 N, 10 deg "
+                + "where T * sin(theta) = D, T * cos(theta) = W\n"),
+            "**theta** = 21.8°", "solved by `seek` together with T", "(Newton)", "`T * sin(theta) = D`: ",
+            "`T * cos(theta) = W`: ");
+    }
+
+    @Test
     void nothingIsShownWhereThereIsNoName() {
         assertNull(hover("x = 1 m $0+ 2 m\n"));
     }
