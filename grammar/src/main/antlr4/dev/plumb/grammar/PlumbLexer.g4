@@ -21,10 +21,14 @@ tokens { NARRATIVE }
     /**
      * Words that end an expression; after a number they are keywords, not units. `so`, `within`
      * and `guess` belong to the solve statement's former spelling, still read so that its error
-     * can show the new one.
+     * can show the new one. `by`, `steps`, `log` and `show` belong to a sweep's head
+     * (`sweep V over 10 .. 40 by 5`, `in 7 log steps`).
      */
     private static final java.util.Set<String> CLAUSE_WORDS =
-        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess");
+        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "by", "steps", "log", "show");
+
+    /** The words of a sweep's head, never units: `in 7 log steps`. */
+    private static final java.util.Set<String> SWEEP_WORDS = java.util.Set.of("by", "steps", "log", "show");
 
     /**
      * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
@@ -102,11 +106,14 @@ tokens { NARRATIVE }
             boolean standsAlone = !isUnitChar(next) && next != '(';
             if (standsAlone) {
                 // `5 in in mm`: the first `in` is inches, the second the keyword.
-                if (CLAUSE_WORDS.contains(wordAt(skipBlanks(after)))) standsAlone = false;
+                if (CLAUSE_WORDS.contains(wordAt(skipBlanks(after))) && !SWEEP_WORDS.contains(word)) standsAlone = false;
             }
             if (standsAlone) {
+                // `40 in 7 steps`: inches are never followed by a number, so `in` is the keyword there.
+                int following = _input.LA(skipBlanks(after));
                 boolean keyword = !word.equals("in") && !word.equals("as")
-                    || isUnitStart(_input.LA(skipBlanks(after))) && skipBlanks(after) > after;
+                    || isUnitStart(following) && skipBlanks(after) > after
+                    || word.equals("in") && following >= '0' && following <= '9';
                 if (keyword) return;
             }
         }
@@ -163,6 +170,11 @@ DOMAIN      : 'domain';
 ACCEPT      : 'accept';
 AT          : 'at';
 TRANSITION  : 'transition';
+SWEEP       : 'sweep';
+OVER        : 'over';
+BY          : 'by';
+STEPS       : 'steps';
+SHOW        : 'show';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

@@ -28,6 +28,7 @@ statement
     | oldSolve
     | accept
     | transition
+    | sweep
     | correlationHead
     | tableHead
     | blockLine
@@ -57,6 +58,14 @@ seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN ex
 accept      : ACCEPT findingCode AT name note?;
 /** Where the boundary layer turns from laminar to turbulent in this calc: `transition Re = 3e5 "why"`. */
 transition  : TRANSITION name ASSIGN NUMBER note?;
+/**
+ * A study that varies one value over a range and tabulates results: `sweep V over 10 m/s .. 40 m/s
+ * by 5 m/s show F_D in kN, Re` (the `show` part usually on an indented line); `in 7 steps` gives
+ * seven values from end to end, `in 7 log steps` spaces them evenly in the logarithm (the word
+ * before `steps` must be `log`, which the engine checks).
+ */
+sweep       : SWEEP varied=name OVER expr DOTDOT expr ( BY expr | IN NUMBER spacing=name? STEPS ) SHOW shown ( COMMA shown )* note?;
+shown       : name ( IN UNIT )?;
 /** A diagnostic code as written, `range.outside`, `math.division-by-zero`. */
 findingCode : name ( DOT name | MINUS name )*;
 /** The solve statement's former spelling: read only to say how it is written now. */
@@ -109,5 +118,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT | TRANSITION
+    | DOMAIN | ACCEPT | AT | TRANSITION | SWEEP | OVER | BY | STEPS | SHOW
     ;

@@ -66,6 +66,13 @@ final class Analyzer {
         for (Statement s : statements) {
             if (s instanceof Statement.Check c) checkRows.put(c, checks.withinBudget(c));
         }
+        Map<Statement.Check, Row.CheckRow> checksInOrder = new LinkedHashMap<>();
+        for (Statement s : statements) {
+            if (s instanceof Statement.Check c) checksInOrder.put(c, (Row.CheckRow) checkRows.get(c));
+        }
+        Map<Statement, Row> studyRows = Studies.run(statements, new StudyRun(plan, scope, evaluated.values(),
+            resolved.uses(), checksInOrder, text, settings, units, budget), declared.own(), scope, reporter, text, units,
+            budget, settings.significantFigures());
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
         UnitNameClash.report(statements, name -> declared.own().containsKey(name)
             ? evaluated.values().get(name) : null, scope, units, reporter);
@@ -75,7 +82,9 @@ final class Analyzer {
             Binding.ValueBinding v = evaluated.values().get(name);
             if (v != null) scope.put(name, v);
         }
-        List<Row> inOrder = rowsInOrder(statements, evaluated.rows(), checkRows);
+        Map<Statement, Row> shown = new java.util.IdentityHashMap<>(evaluated.rows());
+        shown.putAll(studyRows);
+        List<Row> inOrder = rowsInOrder(statements, shown, checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));
         Map<String, String> headers = headers(statements);

@@ -54,6 +54,28 @@ final class EvaluationPass {
         return new Evaluated(done, rows);
     }
 
+    /**
+     * The run again for a study: over {@code base} (the real run's values), with {@code overrides}
+     * bound in place of their definitions (shown as those were) and only the names in {@code which}
+     * evaluated again, in plan order; the rest keep their base values. Solve statements among
+     * them are solved again. Rows are made for what was evaluated again.
+     */
+    Evaluated rerun(Environment base, Map<String, Value> overrides, java.util.Set<String> which) {
+        Environment.Builder values = new Environment.Builder(base);
+        for (String name : plan.order()) {
+            Value given = overrides.get(name);
+            if (given != null) {
+                Binding.ValueBinding was = base.get(name);
+                values.put(name, was == null ? plan.definitions().bare(given) : new Binding.ValueBinding(was.file(),
+                    was.span(), given, was.display(), was.basis(), was.input(), was.origin(), was.note()));
+            } else if (which.contains(name)) {
+                Binding.ValueBinding bound = withinBudget(plan.own().get(name), values.now(), plan.inCycle().contains(name));
+                if (bound != null) values.put(name, bound);
+            }
+        }
+        return new Evaluated(values.build(), rows);
+    }
+
     /** A statement's evaluation, cut short with one finding when it takes more than its budget. */
     private Binding.ValueBinding withinBudget(Statement s, Environment env, boolean inCycle) {
         if (outOfTime) return unknown(s);

@@ -67,6 +67,7 @@ final class ResolutionPass {
             Set<String> params = new HashSet<>();
             List<Expr> exprs = new ArrayList<>();
             collect(s, exprs, params);
+            named(s);
             for (Expr e : exprs) {
                 References.each(e, (n, span) -> {
                     // The unknown a solve statement solves for is used in its own equation: a
@@ -91,13 +92,36 @@ final class ResolutionPass {
                 });
             }
         }
+        // A study names its value before its formulas and its results after: keep the table in source order.
+        references.sort(java.util.Comparator.comparingInt(r -> r.span().start()));
         return new Resolution(uses, references, used, importedUses);
+    }
+
+    /**
+     * The names a study statement names outright (the value a sweep varies, the results it
+     * shows): used and referenced like a name in a formula, never a dependency.
+     */
+    private void named(Statement s) {
+        List<Ident> names = new ArrayList<>();
+        if (s instanceof Statement.Sweep w) {
+            names.add(w.name());
+            w.shown().forEach(x -> names.add(x.name()));
+        }
+        for (Ident n : names) {
+            used.add(n.text());
+            references.add(new Analysis.Reference(n.text(), n.span()));
+            if (own.containsKey(n.text())) continue;
+            Binding b = scope.lookup(n.text());
+            if (b == null) unknownName(n.text(), n.span(), "");
+            else if (b.file() != null) importedUses.computeIfAbsent(b.file(), k -> new HashSet<>()).add(n.text());
+        }
     }
 
     /** The expressions of a statement, and the names that are its own parameters there. */
     private void collect(Statement s, List<Expr> exprs, Set<String> params) {
         if (s instanceof Statement.Definition d) exprs.add(d.expr());
         if (s instanceof Statement.Check c) exprs.addAll(c.operands());
+        if (s instanceof Statement.Sweep) exprs.addAll(dev.plumb.syntax.ExprWalk.of(s));
         if (s instanceof Statement.Function f) {
             exprs.add(f.body());
             f.params().forEach(p -> params.add(p.text()));

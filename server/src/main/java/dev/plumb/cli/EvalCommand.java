@@ -35,6 +35,10 @@ final class EvalCommand implements Callable<Integer> {
         description = "text, json (every value, check and finding) or csv (one row per value); default: ${DEFAULT-VALUE}")
     Format format;
 
+    @picocli.CommandLine.Option(names = "--sweep", paramLabel = "NAME",
+        description = "with --format csv: write the table of the sweep that varies NAME instead of the values")
+    String sweep;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -49,6 +53,10 @@ final class EvalCommand implements Callable<Integer> {
                     file.toString()) + "` for every calc below it");
             return Main.USAGE;
         }
+        if (sweep != null && format != Format.csv) {
+            err.println("plumb: --sweep NAME writes one sweep's table as CSV: add --format csv (text and json show every sweep)");
+            return Main.USAGE;
+        }
         if (!Files.isRegularFile(file)) {
             err.println("plumb: no such file: " + dev.plumb.diagnostics.Printable.line(file.toString()));
             return Main.USAGE;
@@ -60,8 +68,17 @@ final class EvalCommand implements Callable<Integer> {
         if (format != Format.text) {
             // Machine formats are the data alone: no colours, no notice a parser would trip on.
             PrintWriter plain = spec.commandLine().getOut();
-            if (format == Format.json) ValueExport.json(a, checked.diagnostics(), plain);
-            else ValueExport.csv(a, plain);
+            if (format == Format.json) {
+                ValueExport.json(a, checked.diagnostics(), plain);
+            } else if (sweep != null) {
+                if (!ValueExport.sweepCsv(a, sweep, plain)) {
+                    err.println("plumb: " + dev.plumb.diagnostics.Printable.line(file.toString()) + " has no sweep of "
+                        + dev.plumb.diagnostics.Printable.line(sweep) + ": name the value a `sweep` line varies");
+                    return Main.USAGE;
+                }
+            } else {
+                ValueExport.csv(a, plain);
+            }
             plain.flush();
             return TextReport.Tally.of(results).exitCode(false);
         }

@@ -3,6 +3,7 @@ package dev.plumb.cli;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
 import dev.plumb.present.CallText;
+import dev.plumb.present.SweepText;
 import dev.plumb.present.UsedValues;
 import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
@@ -76,6 +77,11 @@ final class EvalReport {
                 String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();
                 out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]" + why));
+            } else if (r instanceof Row.SweepRow w) {
+                out.println(Printable.line("  " + SweepText.title(w)));
+                for (String line : SweepText.table(w, a.settings().significantFigures())) {
+                    out.println(Printable.line("      " + line));
+                }
             }
         }
     }

@@ -3,6 +3,7 @@ package dev.plumb.cli;
 import dev.plumb.present.UsedValues;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
+import dev.plumb.present.SweepText;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
@@ -74,10 +75,94 @@ final class ValueExport {
         }
         root.add("usedValues", used);
         root.add("checks", checks);
+        root.add("sweeps", sweeps(a));
         JsonArray findings = new JsonArray();
         for (Diagnostic d : diagnostics) findings.add(JsonReport.diagnostic(a, d));
         root.add("diagnostics", findings);
         out.println(new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root));
+    }
+
+    /**
+     * Each sweep: the value varied and the results shown, with their units, and per row the
+     * value given and each result, in SI and in the column's unit, each check's verdict and the
+     * definitions outside a correlation's range there.
+     */
+    private static JsonArray sweeps(Analysis a) {
+        int digits = a.settings().significantFigures();
+        JsonArray out = new JsonArray();
+        for (Row r : a.rows()) {
+            if (!(r instanceof Row.SweepRow w)) continue;
+            List<Unit> units = SweepText.units(w);
+            JsonObject o = new JsonObject();
+            o.addProperty("varied", w.varied());
+            o.addProperty("line", a.lines().line(w.span().start()));
+            if (units.get(0) != null) o.addProperty("unit", units.get(0).symbol());
+            JsonArray shown = new JsonArray();
+            for (int i = 0; i < w.columns().size(); i++) {
+                JsonObject c = new JsonObject();
+                c.addProperty("name", w.columns().get(i).name());
+                if (units.get(i + 1) != null) c.addProperty("unit", units.get(i + 1).symbol());
+                shown.add(c);
+            }
+            o.add("shown", shown);
+            JsonArray checks = new JsonArray();
+            w.checks().forEach(checks::add);
+            o.add("checks", checks);
+            o.addProperty("stopped", w.stopped());
+            JsonArray rows = new JsonArray();
+            for (Row.SweepLine l : w.lines()) {
+                JsonObject row = new JsonObject();
+                row.add("given", cell(l.given(), units.get(0), digits));
+                JsonArray results = new JsonArray();
+                for (int i = 0; i < l.results().size(); i++) results.add(cell(l.results().get(i), units.get(i + 1), digits));
+                row.add("results", results);
+                JsonArray verdicts = new JsonArray();
+                l.verdicts().forEach(v -> verdicts.add(v == Row.Verdict.PASSED ? "pass" : v == Row.Verdict.FAILED ? "fail"
+                    : "not evaluated"));
+                row.add("verdicts", verdicts);
+                JsonArray outside = new JsonArray();
+                l.outside().forEach(outside::add);
+                row.add("outsideRange", outside);
+                if (l.trouble() != null) row.addProperty("finding", l.trouble());
+                rows.add(row);
+            }
+            o.add("rows", rows);
+            out.add(o);
+        }
+        return out;
+    }
+
+    /** A value of a sweep's table: SI (absent when unknown) and as shown in the column's unit. */
+    private static JsonObject cell(dev.plumb.analysis.Value v, Unit unit, int digits) {
+        JsonObject o = new JsonObject();
+        if (v.known()) o.addProperty("valueSi", v.si());
+        o.addProperty("shown", SweepText.number(v, unit, digits));
+        return o;
+    }
+
+    /**
+     * The table of the sweep that varies {@code varied}, one row per value given: the numbers in
+     * the header's units, then the checks' marks and the range column as `plumb eval` shows them.
+     * False when the calc has no such sweep.
+     */
+    static boolean sweepCsv(Analysis a, String varied, PrintWriter out) {
+        for (Row r : a.rows()) {
+            if (!(r instanceof Row.SweepRow w) || !w.varied().equals(varied)) continue;
+            List<Unit> units = SweepText.units(w);
+            line(SweepText.header(w), out);
+            for (Row.SweepLine l : w.lines()) line(SweepText.cells(w, l, units, a.settings().significantFigures()), out);
+            return true;
+        }
+        return false;
+    }
+
+    private static void line(List<String> cells, PrintWriter out) {
+        StringBuilder line = new StringBuilder();
+        for (int i = 0; i < cells.size(); i++) {
+            if (i > 0) line.append(',');
+            line.append(quoted(dev.plumb.diagnostics.Printable.line(cells.get(i))));
+        }
+        out.print(line.append("\r\n"));
     }
 
     /** One row per value, RFC 4180 quoting; an unknown value has empty number cells and "?" as shown. */

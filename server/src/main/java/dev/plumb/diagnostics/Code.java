@@ -48,7 +48,11 @@ public enum Code {
     LIMIT_BUDGET("limit.budget", Severity.ERROR),
     LIMIT_MEMORY("limit.memory", Severity.ERROR),
     ACCEPT_INVALID("accept.invalid", Severity.ERROR),
-    ACCEPT_STALE("accept.stale", Severity.WARNING);
+    ACCEPT_STALE("accept.stale", Severity.WARNING),
+    SWEEP_INVALID("sweep.invalid", Severity.ERROR),
+    SWEEP_RANGE("sweep.range", Severity.WARNING),
+    SWEEP_CHECK_FAILED("sweep.check-failed", Severity.WARNING),
+    SWEEP_ROW_FINDINGS("sweep.row-findings", Severity.WARNING);
 
     private final String id;
     private final Severity severity;

@@ -186,6 +186,27 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             note(ctx.note()));
     }
 
+    @Override
+    public Object visitSweep(PlumbParser.SweepContext ctx) {
+        List<PlumbParser.ExprContext> e = ctx.expr();
+        Expr step = ctx.BY() != null ? expr(e.get(2)) : null;
+        Integer count = null;
+        Span countSpan = null;
+        if (ctx.NUMBER() != null) {
+            Token n = ctx.NUMBER().getSymbol();
+            countSpan = span(n);
+            double written = Double.parseDouble(n.getText());
+            // A count is a whole number of values; anything else is the engine's to refuse with its words.
+            count = written == Math.rint(written) && written <= Integer.MAX_VALUE ? (int) written : -1;
+        }
+        List<Statement.Shown> shown = new ArrayList<>();
+        for (PlumbParser.ShownContext s : ctx.shown()) {
+            shown.add(new Statement.Shown(ident(s.name()), s.UNIT() == null ? null : unitText(s.UNIT().getSymbol())));
+        }
+        return new Statement.Sweep(span(ctx), ident(ctx.varied), expr(e.get(0)), expr(e.get(1)), step, count, countSpan,
+            ctx.spacing == null ? null : ident(ctx.spacing), shown, note(ctx.note()));
+    }
+
     /** The former `find … within … so that …`: an error that shows the statement in today's words. */
     @Override
     public Object visitAccept(PlumbParser.AcceptContext ctx) {

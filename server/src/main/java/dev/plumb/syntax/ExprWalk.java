@@ -30,7 +30,7 @@ public final class ExprWalk {
         }
     }
 
-    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation. */
+    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation, a sweep's range. */
     public static List<Expr> of(Statement s) {
         List<Expr> out = new ArrayList<>();
         if (s instanceof Statement.Definition d) out.add(d.expr());
@@ -38,6 +38,9 @@ public final class ExprWalk {
         if (s instanceof Statement.Function f) out.add(f.body());
         if (s instanceof Statement.Seek k) {
             for (Expr e : new Expr[] {k.low(), k.high(), k.start(), k.lhs(), k.rhs()}) if (e != null) out.add(e);
+        }
+        if (s instanceof Statement.Sweep w) {
+            for (Expr e : new Expr[] {w.from(), w.to(), w.step()}) if (e != null) out.add(e);
         }
         return out;
     }

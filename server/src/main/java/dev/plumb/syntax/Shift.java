@@ -127,6 +127,11 @@ final class Shift {
                 ident(t.family()), ident(t.basis()), bounds(t.valid()), expr(t.accuracy()), ident(t.interpolate()),
                 columns, rows, ident(t.flow()), bounds(t.domain()));
         }
+        if (s instanceof Statement.Sweep w) {
+            return new Statement.Sweep(span(w.span()), ident(w.name()), expr(w.from()), expr(w.to()), expr(w.step()),
+                w.count(), span(w.countSpan()), ident(w.spacing()),
+                each(w.shown(), x -> new Statement.Shown(ident(x.name()), unit(x.unit()))), w.note());
+        }
         if (s instanceof Statement.Accept a) {
             return new Statement.Accept(span(a.span()), a.code(), span(a.codeSpan()), ident(a.target()), a.reason());
         }

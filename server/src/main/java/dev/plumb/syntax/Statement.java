@@ -131,6 +131,23 @@ public sealed interface Statement {
     }
 
     /**
+     * {@code sweep NAME over FROM .. TO by STEP show A in UNIT, B} (or {@code in N steps}, {@code in
+     * N log steps}): the calc evaluated again for each value of NAME, with the shown results
+     * tabulated. Exactly one of {@code step} and {@code count} is set; {@code spacing} is the word
+     * before {@code steps} (it must be {@code log}), null when none is written.
+     */
+    record Sweep(Span span, Ident name, Expr from, Expr to, Expr step, Integer count, Span countSpan, Ident spacing,
+                 List<Shown> shown, String note) implements Statement {
+        public Sweep {
+            shown = List.copyOf(shown);
+        }
+    }
+
+    /** A result a study shows, with the unit to show it in (null: its own display unit). */
+    record Shown(Ident name, UnitText unit) {
+    }
+
+    /**
      * A statement with a syntax error. Its name, when it had one, still counts as defined so that
      * later uses do not add "unknown name" noise to the syntax error already reported.
      */
