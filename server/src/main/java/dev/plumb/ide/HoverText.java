@@ -2,6 +2,7 @@ package dev.plumb.ide;
 
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CallText;
+import dev.plumb.present.SweepText;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
 import dev.plumb.analysis.Row;
@@ -32,6 +33,9 @@ public final class HoverText {
 
     private static String markdown(Analysis a, int offset) {
         String name = Occurrences.nameAt(a, offset);
+        Row.SweepRow sweep = sweepAt(a, offset);
+        // Over a sweep, its word or the value it varies shows its table; a result it shows reads as everywhere.
+        if (sweep != null && (name == null || name.equals(sweep.varied()))) return sweepTable(a, sweep);
         if (name == null) return null;
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
@@ -46,6 +50,39 @@ public final class HoverText {
         }
         if (b instanceof Binding.BuiltinFunction f) return "**" + f.signature() + "** — built-in function";
         return null;
+    }
+
+    /** Rows a hover shows of a sweep's table; `plumb eval` and the report show them all. */
+    static final int SWEEP_ROWS_SHOWN = 40;
+
+    private static Row.SweepRow sweepAt(Analysis a, int offset) {
+        for (Row r : a.rows()) {
+            if (r instanceof Row.SweepRow w && offset >= w.span().start() && offset <= w.span().end()) return w;
+        }
+        return null;
+    }
+
+    /** The sweep's table as Markdown, its first rows when it has many. */
+    private static String sweepTable(Analysis a, Row.SweepRow w) {
+        StringBuilder out = new StringBuilder("**" + SweepText.title(w) + "**\n\n");
+        List<String> header = SweepText.header(w);
+        out.append("| ").append(String.join(" | ", header.stream().map(HoverText::cell).toList())).append(" |\n|");
+        out.append(" --- |".repeat(header.size())).append('\n');
+        List<dev.plumb.units.Unit> units = SweepText.units(w);
+        int digits = a.settings().significantFigures();
+        for (int i = 0; i < w.lines().size() && i < SWEEP_ROWS_SHOWN; i++) {
+            List<String> cells = SweepText.cells(w, w.lines().get(i), units, digits);
+            out.append("| ").append(String.join(" | ", cells.stream().map(HoverText::cell).toList())).append(" |\n");
+        }
+        if (w.lines().size() > SWEEP_ROWS_SHOWN) {
+            out.append("\n… and ").append(w.lines().size() - SWEEP_ROWS_SHOWN).append(" more rows (plumb eval shows them all)");
+        }
+        return out.toString().stripTrailing();
+    }
+
+    /** A table cell: a bar would end it. */
+    private static String cell(String text) {
+        return text.replace("|", "\\|");
     }
 
     private static String value(Analysis a, String name, Binding.ValueBinding b) {

@@ -8,7 +8,7 @@ import dev.plumb.syntax.Statement;
 import java.util.ArrayList;
 import java.util.List;
 
-/** The calc's body in its own order: sections, prose, definitions, solved values, functions and checks. */
+/** The calc's body in its own order: sections, prose, definitions, solved values, functions, checks and sweeps. */
 final class CalcBody {
     private CalcBody() {
     }
@@ -59,6 +59,8 @@ final class CalcBody {
                 out.append(function(f));
             } else if (r instanceof Row.CheckRow c) {
                 out.append(check(c));
+            } else if (r instanceof Row.SweepRow w) {
+                out.append(SweepPlot.html(w, a.settings().significantFigures()));
             }
         }
 
