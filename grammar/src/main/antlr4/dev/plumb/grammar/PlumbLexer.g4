@@ -175,6 +175,7 @@ OVER        : 'over';
 BY          : 'by';
 STEPS       : 'steps';
 SHOW        : 'show';
+CASE        : 'case';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

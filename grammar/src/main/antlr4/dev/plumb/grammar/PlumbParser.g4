@@ -29,6 +29,7 @@ statement
     | accept
     | transition
     | sweep
+    | caseDef
     | correlationHead
     | tableHead
     | blockLine
@@ -66,6 +67,9 @@ transition  : TRANSITION name ASSIGN NUMBER note?;
  */
 sweep       : SWEEP varied=name OVER expr DOTDOT expr ( BY expr | IN NUMBER spacing=name? STEPS ) SHOW shown ( COMMA shown )* note?;
 shown       : name ( IN UNIT )?;
+/** A named variation of the calc: `case storm: V = 45 m/s, T = -10 degC` (right sides see the base values). */
+caseDef     : CASE label=name COLON setting ( COMMA setting )* note?;
+setting     : name ASSIGN expr;
 /** A diagnostic code as written, `range.outside`, `math.division-by-zero`. */
 findingCode : name ( DOT name | MINUS name )*;
 /** The solve statement's former spelling: read only to say how it is written now. */
@@ -118,5 +122,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT | TRANSITION | SWEEP | OVER | BY | STEPS | SHOW
+    | DOMAIN | ACCEPT | AT | TRANSITION | SWEEP | OVER | BY | STEPS | SHOW | CASE
     ;

@@ -72,7 +72,7 @@ final class Analyzer {
         }
         Map<Statement, Row> studyRows = Studies.run(statements, new StudyRun(plan, scope, evaluated.values(),
             resolved.uses(), checksInOrder, text, settings, units, budget), declared.own(), scope, reporter, text, units,
-            budget, settings.significantFigures());
+            budget, settings.significantFigures(), file);
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
         UnitNameClash.report(statements, name -> declared.own().containsKey(name)
             ? evaluated.values().get(name) : null, scope, units, reporter);

@@ -98,8 +98,8 @@ final class ResolutionPass {
     }
 
     /**
-     * The names a study statement names outright (the value a sweep varies, the results it
-     * shows): used and referenced like a name in a formula, never a dependency.
+     * The names a study statement names outright (the value a sweep varies and the results it
+     * shows, the values a case sets): used and referenced like a name in a formula, never a dependency.
      */
     private void named(Statement s) {
         List<Ident> names = new ArrayList<>();
@@ -107,6 +107,7 @@ final class ResolutionPass {
             names.add(w.name());
             w.shown().forEach(x -> names.add(x.name()));
         }
+        if (s instanceof Statement.Case c) c.settings().forEach(x -> names.add(x.name()));
         for (Ident n : names) {
             used.add(n.text());
             references.add(new Analysis.Reference(n.text(), n.span()));
@@ -121,7 +122,7 @@ final class ResolutionPass {
     private void collect(Statement s, List<Expr> exprs, Set<String> params) {
         if (s instanceof Statement.Definition d) exprs.add(d.expr());
         if (s instanceof Statement.Check c) exprs.addAll(c.operands());
-        if (s instanceof Statement.Sweep) exprs.addAll(dev.plumb.syntax.ExprWalk.of(s));
+        if (s instanceof Statement.Sweep || s instanceof Statement.Case) exprs.addAll(dev.plumb.syntax.ExprWalk.of(s));
         if (s instanceof Statement.Function f) {
             exprs.add(f.body());
             f.params().forEach(p -> params.add(p.text()));

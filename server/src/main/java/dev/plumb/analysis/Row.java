@@ -132,4 +132,23 @@ public sealed interface Row {
             return verdicts.contains(Verdict.FAILED);
         }
     }
+
+    /**
+     * A case: the calc evaluated again with {@code given} values in place of their definitions.
+     * {@code changed} holds every own value that differs from the base (the given ones first),
+     * each with its base value; {@code checks} are the document's checks judged under the case.
+     * Worded by {@code dev.plumb.present.CaseText}.
+     */
+    record CaseRow(Span span, String name, java.util.List<CaseValue> given, java.util.List<CaseValue> changed,
+                   java.util.List<CheckRow> checks, String note) implements Row {
+        public CaseRow {
+            given = java.util.List.copyOf(given);
+            changed = java.util.List.copyOf(changed);
+            checks = java.util.List.copyOf(checks);
+        }
+    }
+
+    /** A value under a case beside its base value, shown in {@code display} (null: SI). */
+    record CaseValue(String name, Value base, Value value, dev.plumb.units.Unit display) {
+    }
 }

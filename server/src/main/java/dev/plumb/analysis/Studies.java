@@ -8,21 +8,40 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The studies of a document (its sweeps), run after the real run and its checks, each through
- * the one {@link StudyRun}; each study statement's row, by identity.
+ * The studies of a document (its sweeps and cases), run after the real run and its checks, in
+ * source order, each through the one {@link StudyRun}; each study statement's row, by identity.
+ * A study's findings are not a base finding for those after it.
  */
 final class Studies {
     private Studies() {
     }
 
     static Map<Statement, Row> run(List<Statement> statements, StudyRun study, Map<String, Statement> own, Scope scope,
-                                   Reporter reporter, String text, UnitRegistry units, Budget budget, int digits) {
+                                   Reporter reporter, String text, UnitRegistry units, Budget budget, int digits,
+                                   java.nio.file.Path file) {
         Map<Statement, Row> rows = new IdentityHashMap<>();
         SweepRunner sweeps = null;
+        CaseRunner cases = null;
+        List<dev.plumb.diagnostics.Diagnostic> base = reporter.all();
         for (Statement s : statements) {
+            if (s instanceof Statement.Case c) {
+                if (cases == null) {
+                    cases = new CaseRunner(study, own, statements, scope, base, reporter, text, units, budget, digits, file);
+                }
+                try {
+                    budget.nextStatement();
+                    rows.put(s, cases.run(c));
+                } catch (Budget.Exhausted e) {
+                    reporter.report(Code.LIMIT_BUDGET, c.name().span(), "this case was stopped: "
+                        + (e.limit == Budget.Limit.TIME ? "the run's " + Budget.SECONDS + " s are up" : "its values need "
+                        + "more work than any calc does") + "; look for a formula that does repeated work");
+                    rows.put(s, new Row.CaseRow(c.span(), c.name().text(), List.of(), List.of(), List.of(), c.note()));
+                }
+                continue;
+            }
             if (!(s instanceof Statement.Sweep w)) continue;
             if (sweeps == null) {
-                sweeps = new SweepRunner(study, own, scope, reporter.all(), reporter, text, units, budget, digits);
+                sweeps = new SweepRunner(study, own, scope, base, reporter, text, units, budget, digits);
             }
             try {
                 budget.nextStatement();

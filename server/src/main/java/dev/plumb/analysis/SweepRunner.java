@@ -59,7 +59,8 @@ final class SweepRunner {
         List<Column> columns = columns(s, ends);
         List<String> checkSources = new ArrayList<>();
         if (!(own.get(name) instanceof Statement.Definition) || swept == null) {
-            invalid(s.name().span(), refusal(name));
+            // A name defined nowhere was reported where it is written (name.unknown): once is enough.
+            if (own.containsKey(name) || scope.lookup(name) != null) invalid(s.name().span(), refusal(name));
             return empty(s, null, columns, checkSources);
         }
         Values values = values(s, ends, swept);
@@ -149,7 +150,7 @@ final class SweepRunner {
             return name + " is solved by its `seek`, so it cannot be given values: sweep an input the equation uses";
         }
         if (st != null && !(st instanceof Statement.Definition)) return name + " is not a value: sweep an input of this calc";
-        return name + " is not defined in this calc: a sweep varies one of the calc's own values (an input, usually)";
+        return name + " is defined in another file: a sweep varies one of the calc's own values (an input, usually)";
     }
 
     /** The results to show, each in its `in` unit when that fits its dimension, else in the unit it is shown in. */

@@ -4,6 +4,7 @@ import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
 import dev.plumb.present.CallText;
 import dev.plumb.present.SweepText;
+import dev.plumb.present.CaseText;
 import dev.plumb.present.UsedValues;
 import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
@@ -77,6 +78,14 @@ final class EvalReport {
                 String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();
                 out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]" + why));
+            } else if (r instanceof Row.CaseRow k) {
+                int digits = a.settings().significantFigures();
+                out.println(Printable.line("  " + CaseText.title(k, digits)));
+                for (String line : CaseText.lines(k, digits)) out.println(Printable.line("      " + line));
+                for (Row.CheckRow c : k.checks()) {
+                    String mark = c.passed() == null ? style.bad("?") : c.passed() ? style.good("✓") : style.bad("✗ FAIL");
+                    out.println("      " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]"));
+                }
             } else if (r instanceof Row.SweepRow w) {
                 out.println(Printable.line("  " + SweepText.title(w)));
                 for (String line : SweepText.table(w, a.settings().significantFigures())) {

@@ -4,6 +4,7 @@ import dev.plumb.present.UsedValues;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
 import dev.plumb.present.SweepText;
+import dev.plumb.present.CaseText;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
@@ -76,6 +77,7 @@ final class ValueExport {
         root.add("usedValues", used);
         root.add("checks", checks);
         root.add("sweeps", sweeps(a));
+        root.add("cases", cases(a));
         JsonArray findings = new JsonArray();
         for (Diagnostic d : diagnostics) findings.add(JsonReport.diagnostic(a, d));
         root.add("diagnostics", findings);
@@ -130,6 +132,51 @@ final class ValueExport {
             out.add(o);
         }
         return out;
+    }
+
+    /**
+     * Each case: the values it sets, every value it changes with its base value and the ratio,
+     * and the checks judged under it.
+     */
+    private static JsonArray cases(Analysis a) {
+        int digits = a.settings().significantFigures();
+        JsonArray out = new JsonArray();
+        for (Row r : a.rows()) {
+            if (!(r instanceof Row.CaseRow k)) continue;
+            JsonObject o = new JsonObject();
+            o.addProperty("case", k.name());
+            o.addProperty("line", a.lines().line(k.span().start()));
+            if (k.note() != null) o.addProperty("note", k.note());
+            JsonArray given = new JsonArray();
+            k.given().forEach(v -> given.add(caseValue(v, digits)));
+            o.add("given", given);
+            JsonArray changed = new JsonArray();
+            k.changed().forEach(v -> changed.add(caseValue(v, digits)));
+            o.add("changed", changed);
+            JsonArray checks = new JsonArray();
+            for (Row.CheckRow c : k.checks()) {
+                JsonObject x = new JsonObject();
+                x.addProperty("check", c.source());
+                x.addProperty("verdict", CheckText.word(c));
+                x.addProperty("detail", CheckText.detail(c));
+                checks.add(x);
+            }
+            o.add("checks", checks);
+            out.add(o);
+        }
+        return out;
+    }
+
+    private static JsonObject caseValue(Row.CaseValue v, int digits) {
+        JsonObject o = new JsonObject();
+        o.addProperty("name", v.name());
+        if (v.base().known()) o.addProperty("baseSi", v.base().si());
+        if (v.value().known()) o.addProperty("valueSi", v.value().si());
+        o.addProperty("baseShown", ValueText.of(v.base(), v.display(), digits));
+        o.addProperty("shown", ValueText.of(v.value(), v.display(), digits));
+        Double ratio = CaseText.ratioOf(v);
+        if (ratio != null) o.addProperty("ratio", ratio);
+        return o;
     }
 
     /** A value of a sweep's table: SI (absent when unknown) and as shown in the column's unit. */

@@ -52,7 +52,9 @@ public enum Code {
     SWEEP_INVALID("sweep.invalid", Severity.ERROR),
     SWEEP_RANGE("sweep.range", Severity.WARNING),
     SWEEP_CHECK_FAILED("sweep.check-failed", Severity.WARNING),
-    SWEEP_ROW_FINDINGS("sweep.row-findings", Severity.WARNING);
+    SWEEP_ROW_FINDINGS("sweep.row-findings", Severity.WARNING),
+    CASE_INVALID("case.invalid", Severity.ERROR),
+    CASE_NO_CHANGE("case.no-change", Severity.WARNING);
 
     private final String id;
     private final Severity severity;

@@ -3,6 +3,7 @@ package dev.plumb.ide;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CallText;
 import dev.plumb.present.SweepText;
+import dev.plumb.present.CaseText;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
 import dev.plumb.analysis.Row;
@@ -36,6 +37,9 @@ public final class HoverText {
         Row.SweepRow sweep = sweepAt(a, offset);
         // Over a sweep, its word or the value it varies shows its table; a result it shows reads as everywhere.
         if (sweep != null && (name == null || name.equals(sweep.varied()))) return sweepTable(a, sweep);
+        Row.CaseRow variation = caseAt(a, offset);
+        // Over a case's word or its name, the case beside the base; a value it sets reads as everywhere.
+        if (variation != null && name == null) return caseTable(a, variation);
         if (name == null) return null;
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
@@ -60,6 +64,30 @@ public final class HoverText {
             if (r instanceof Row.SweepRow w && offset >= w.span().start() && offset <= w.span().end()) return w;
         }
         return null;
+    }
+
+    private static Row.CaseRow caseAt(Analysis a, int offset) {
+        for (Row r : a.rows()) {
+            if (r instanceof Row.CaseRow c && offset >= c.span().start() && offset <= c.span().end()) return c;
+        }
+        return null;
+    }
+
+    /** A case as Markdown: what it sets, then each value it changes beside the base, and its checks. */
+    private static String caseTable(Analysis a, Row.CaseRow c) {
+        int digits = a.settings().significantFigures();
+        StringBuilder out = new StringBuilder("**" + CaseText.title(c, digits) + "**\n\n| value | base | this case | ratio |\n"
+            + "| --- | --- | --- | --- |\n");
+        for (Row.CaseValue v : c.changed()) {
+            out.append("| ").append(cell(v.name())).append(" | ").append(cell(ValueText.of(v.base(), v.display(), digits)))
+                .append(" | ").append(cell(ValueText.of(v.value(), v.display(), digits))).append(" | ")
+                .append(CaseText.ratio(v, digits)).append(" |\n");
+        }
+        for (Row.CheckRow k : c.checks()) {
+            out.append("\n").append(dev.plumb.present.CheckText.mark(k)).append(" `check ").append(k.source()).append("` — ")
+                .append(dev.plumb.present.CheckText.detail(k));
+        }
+        return out.toString().stripTrailing();
     }
 
     /** The sweep's table as Markdown, its first rows when it has many. */

@@ -207,6 +207,13 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             ctx.spacing == null ? null : ident(ctx.spacing), shown, note(ctx.note()));
     }
 
+    @Override
+    public Object visitCaseDef(PlumbParser.CaseDefContext ctx) {
+        List<Statement.Setting> settings = new ArrayList<>();
+        for (PlumbParser.SettingContext s : ctx.setting()) settings.add(new Statement.Setting(ident(s.name()), expr(s.expr())));
+        return new Statement.Case(span(ctx), ident(ctx.label), settings, note(ctx.note()));
+    }
+
     /** The former `find … within … so that …`: an error that shows the statement in today's words. */
     @Override
     public Object visitAccept(PlumbParser.AcceptContext ctx) {

@@ -30,7 +30,7 @@ public final class ExprWalk {
         }
     }
 
-    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation, a sweep's range. */
+    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation, a sweep's range, a case's values. */
     public static List<Expr> of(Statement s) {
         List<Expr> out = new ArrayList<>();
         if (s instanceof Statement.Definition d) out.add(d.expr());
@@ -42,6 +42,7 @@ public final class ExprWalk {
         if (s instanceof Statement.Sweep w) {
             for (Expr e : new Expr[] {w.from(), w.to(), w.step()}) if (e != null) out.add(e);
         }
+        if (s instanceof Statement.Case c) c.settings().forEach(x -> out.add(x.expr()));
         return out;
     }
 }

@@ -132,6 +132,10 @@ final class Shift {
                 w.count(), span(w.countSpan()), ident(w.spacing()),
                 each(w.shown(), x -> new Statement.Shown(ident(x.name()), unit(x.unit()))), w.note());
         }
+        if (s instanceof Statement.Case c) {
+            return new Statement.Case(span(c.span()), ident(c.name()),
+                each(c.settings(), x -> new Statement.Setting(ident(x.name()), expr(x.expr()))), c.note());
+        }
         if (s instanceof Statement.Accept a) {
             return new Statement.Accept(span(a.span()), a.code(), span(a.codeSpan()), ident(a.target()), a.reason());
         }

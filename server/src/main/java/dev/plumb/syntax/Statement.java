@@ -148,6 +148,20 @@ public sealed interface Statement {
     }
 
     /**
+     * {@code case NAME: A = EXPR, B = EXPR ["note"]}: a named variation of the calc, evaluated
+     * again with these values in place of their definitions; the right sides see the base values.
+     */
+    record Case(Span span, Ident name, List<Setting> settings, String note) implements Statement {
+        public Case {
+            settings = List.copyOf(settings);
+        }
+    }
+
+    /** One value a case sets: {@code V = 45 m/s}. */
+    record Setting(Ident name, Expr expr) {
+    }
+
+    /**
      * A statement with a syntax error. Its name, when it had one, still counts as defined so that
      * later uses do not add "unknown name" noise to the syntax error already reported.
      */

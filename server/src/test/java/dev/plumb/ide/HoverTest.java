@@ -48,6 +48,13 @@ class HoverTest {
     }
 
     @Test
+    void aCaseShowsItsValuesBesideTheBaseWithTheRatio() {
+        // F = 0.6 kg/m · V²: 240 N → 960 N when V doubles, ×4.
+        String calc = "input V = 20 m/s\nF = 0.6 kg/m * V^2 in N\nca$0se doubled: V = 2 * V\n";
+        contains(hover(calc), "case doubled: V = 40 m/s", "| F | 240 N | 960 N | ×4 |", "| V | 20 m/s | 40 m/s | ×2 |");
+    }
+
+    @Test
     void anUnknownValueSaysItWasNotComputed() {
         contains(hover("x = 1 m + 1 s\ny = x$0 * 2\n"), "not computed");
     }
