@@ -38,6 +38,8 @@ tokens { NARRATIVE }
     private int seekHead = 0;
     /** Whether no token but blanks and comments has been read on the current line yet. */
     private boolean lineStart = true;
+    /** Whether the current statement is an `input`: there `+-` is a tolerance (`31 m/s +- 2 m/s`), not `+ -`. */
+    private boolean inputLine = false;
 
     @Override
     public Token nextToken() {
@@ -46,9 +48,13 @@ tokens { NARRATIVE }
         if (type == NEWLINE) {
             // An indented line may continue the statement: the head carries on across it.
             boolean continues = t.getText().endsWith(" ") || t.getText().endsWith("\t");
-            if (!continues) seekHead = 0;
+            if (!continues) {
+                seekHead = 0;
+                inputLine = false;
+            }
             lineStart = true;
         } else if (t.getChannel() == Token.DEFAULT_CHANNEL && type != COMMENT) {
+            if (type == INPUT && lineStart) inputLine = true;
             if (type == SEEK && lineStart) seekHead = 1;
             else if (seekHead == 1 && (type == IDENT || type >= TITLE && type <= INTERPOLATE)) seekHead = 2;
             else seekHead = 0;
@@ -187,6 +193,7 @@ IDENT  : [\p{L}_] [\p{L}\p{Nd}_]*;
 STRING              : '"' ( '\\' ~[\r\n] | ~["\\\r\n] )* '"';
 UNTERMINATED_STRING : '"' ( '\\' ~[\r\n] | ~["\\\r\n] )*;
 
+PLUSMINUS : '±' | '+-' {inputLine}?;
 PLUS    : '+';
 MINUS   : '-' | '−';
 STAR    : '*' | '·' | '×' | '⋅';

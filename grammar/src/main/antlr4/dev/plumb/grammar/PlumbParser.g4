@@ -39,7 +39,9 @@ header      : key=( TITLE | AUTHOR | REVIEWER | REVISION ) STRING;
 narrative   : NARRATIVE;
 section     : SECTION STRING;
 useFile     : USE STRING;
-input       : INPUT name ASSIGN expr tail;
+input       : INPUT name ASSIGN expr tolerance? tail;
+/** How far an input may lie from its value: `± 2 m/s`, `+- 2 m/s`, `± 10 %` (a percentage of the value). */
+tolerance   : PLUSMINUS expr;
 definition  : name ASSIGN value tail;
 functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN value note?;
 /**

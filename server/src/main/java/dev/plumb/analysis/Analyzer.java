@@ -70,9 +70,11 @@ final class Analyzer {
         for (Statement s : statements) {
             if (s instanceof Statement.Check c) checksInOrder.put(c, (Row.CheckRow) checkRows.get(c));
         }
-        Map<Statement, Row> studyRows = Studies.run(statements, new StudyRun(plan, scope, evaluated.values(),
-            resolved.uses(), checksInOrder, text, settings, units, budget), declared.own(), scope, reporter, text, units,
+        StudyRun study = new StudyRun(plan, scope, evaluated.values(), resolved.uses(), checksInOrder, text, settings, units,
+            budget);
+        Map<Statement, Row> studyRows = Studies.run(statements, study, declared.own(), scope, reporter, text, units,
             budget, settings.significantFigures(), file);
+        Map<String, Spread> spreads = Studies.spreads(statements, study, plan, scope, reporter, text, units, budget);
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
         UnitNameClash.report(statements, name -> declared.own().containsKey(name)
             ? evaluated.values().get(name) : null, scope, units, reporter);
@@ -84,6 +86,8 @@ final class Analyzer {
         }
         Map<Statement, Row> shown = new java.util.IdentityHashMap<>(evaluated.rows());
         shown.putAll(studyRows);
+        shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && spreads.containsKey(v.name())
+            && declared.own().get(v.name()) == st ? v.withSpread(spreads.get(v.name())) : row);
         List<Row> inOrder = rowsInOrder(statements, shown, checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));

@@ -76,6 +76,11 @@ final class EvaluationPass {
         return new Evaluated(values.build(), rows);
     }
 
+    /** Whether the run's time ran out during this pass (what was left is unknown for that reason alone). */
+    boolean outOfTime() {
+        return outOfTime;
+    }
+
     /** A statement's evaluation, cut short with one finding when it takes more than its budget. */
     private Binding.ValueBinding withinBudget(Statement s, Environment env, boolean inCycle) {
         if (outOfTime) return unknown(s);

@@ -120,7 +120,10 @@ final class ResolutionPass {
 
     /** The expressions of a statement, and the names that are its own parameters there. */
     private void collect(Statement s, List<Expr> exprs, Set<String> params) {
-        if (s instanceof Statement.Definition d) exprs.add(d.expr());
+        if (s instanceof Statement.Definition d) {
+            exprs.add(d.expr());
+            if (d.tolerance() != null) exprs.add(d.tolerance().amount());
+        }
         if (s instanceof Statement.Check c) exprs.addAll(c.operands());
         if (s instanceof Statement.Sweep || s instanceof Statement.Case) exprs.addAll(dev.plumb.syntax.ExprWalk.of(s));
         if (s instanceof Statement.Function f) {

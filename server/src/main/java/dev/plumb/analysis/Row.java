@@ -16,11 +16,25 @@ public sealed interface Row {
      * A defined value. {@code display} is the unit it is shown in (null when unknown: the layers
      * that show values then use SI), and {@code statement} the statement that defines it (a
      * definition, a solve statement, or a broken line), whose spans say where its formula and its
-     * `in` unit are written. The engine does not word it: the layers that show things do.
+     * `in` unit are written; {@code spread} how far it may lie from its value (null when no
+     * tolerance or stated accuracy reaches it). The engine does not word it: the layers that show
+     * things do.
      */
     record ValueRow(Span span, String name, boolean input, Value value, String basis, String note,
-                    Origin origin, Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement)
+                    Origin origin, Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement,
+                    Spread spread)
         implements Row {
+
+        /** A value with no spread (none of the sources of one reaches it). */
+        public ValueRow(Span span, String name, boolean input, Value value, String basis, String note, Origin origin,
+                        Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement) {
+            this(span, name, input, value, basis, note, origin, solution, display, statement, null);
+        }
+
+        /** This row with a spread. */
+        ValueRow withSpread(Spread s) {
+            return new ValueRow(span, name, input, value, basis, note, origin, solution, display, statement, s);
+        }
 
         /** The formula as written, for a definition; null for a solved value or a broken line. */
         public dev.plumb.syntax.Expr formula() {

@@ -56,4 +56,18 @@ final class Studies {
         }
         return rows;
     }
+
+    /** Every own value's spread from the tolerances and stated accuracies (none when there are none), within the budget. */
+    static Map<String, Spread> spreads(List<Statement> statements, StudyRun study, Plan plan, Scope scope, Reporter reporter,
+                                       String text, UnitRegistry units, Budget budget) {
+        try {
+            budget.nextStatement();
+            return new Propagation(study, plan, scope, reporter, text, units, budget).run(statements);
+        } catch (Budget.Exhausted e) {
+            reporter.report(Code.LIMIT_BUDGET, new dev.plumb.diagnostics.Span(0, 0), "the tolerances were not carried to "
+                + "the values: " + (e.limit == Budget.Limit.TIME ? "the run's " + Budget.SECONDS + " s are up"
+                : "that needs more work than any calc does") + ", so no value shows a ±");
+            return Map.of();
+        }
+    }
 }

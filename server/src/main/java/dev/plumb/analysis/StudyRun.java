@@ -26,10 +26,10 @@ final class StudyRun {
      * One run: the values (over the real run's), the check rows in document order, and the
      * findings of what was evaluated again.
      */
-    record Outcome(Environment values, List<Row.CheckRow> checks, List<Diagnostic> findings) {
+    record Outcome(Environment values, List<Row.CheckRow> checks, List<Diagnostic> findings, boolean outOfTime) {
         /** Whether the run's budget cut this run short (its values may be unknown for that reason alone). */
         boolean stopped() {
-            return findings.stream().anyMatch(d -> d.code() == Code.LIMIT_BUDGET);
+            return outOfTime || findings.stream().anyMatch(d -> d.code() == Code.LIMIT_BUDGET);
         }
     }
 
@@ -90,7 +90,7 @@ final class StudyRun {
             boolean reads = checkReads.get(entry.getKey()).stream().anyMatch(n -> again.contains(n) || given.containsKey(n));
             rows.add(reads ? runner.withinBudget(entry.getKey()) : entry.getValue());
         }
-        return new Outcome(values, rows, keep ? reporter.all() : List.of());
+        return new Outcome(values, rows, keep ? reporter.all() : List.of(), pass.outOfTime());
     }
 
     /** Every own name that depends, directly or not, on one of {@code given} (not those themselves). */

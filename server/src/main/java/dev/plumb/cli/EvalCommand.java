@@ -39,6 +39,10 @@ final class EvalCommand implements Callable<Integer> {
         description = "with --format csv: write the table of the sweep that varies NAME instead of the values")
     String sweep;
 
+    @picocli.CommandLine.Option(names = "--sensitivity", paramLabel = "NAME",
+        description = "list under NAME each tolerance's and stated accuracy's share of its variance, largest first")
+    String sensitivity;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -82,7 +86,7 @@ final class EvalCommand implements Callable<Integer> {
             plain.flush();
             return TextReport.Tally.of(results).exitCode(false);
         }
-        EvalReport.write(a, out, style, steps);
+        EvalReport.write(a, out, style, steps, sensitivity);
         if (!checked.diagnostics().isEmpty()) {
             out.println();
             out.println(style.bold("Findings"));

@@ -23,6 +23,11 @@ final class EvalReport {
     }
 
     static void write(Analysis a, PrintWriter out, Style style, boolean steps) {
+        write(a, out, style, steps, null);
+    }
+
+    /** @param sensitivity the value whose sources' shares of its variance to list under it, or null */
+    static void write(Analysis a, PrintWriter out, Style style, boolean steps, String sensitivity) {
         // The calc's own text is neutralised before colours are added (NeutralWriter keeps those).
         String title = Printable.line(a.headers().getOrDefault("title", Location.path(a.file())));
         out.println(style.bold(title));
@@ -36,7 +41,7 @@ final class EvalReport {
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v) {
                 nameWidth = Math.max(nameWidth, width(v.name()));
-                valueWidth = Math.max(valueWidth, width(ValueText.of(a, v)));
+                valueWidth = Math.max(valueWidth, width(ValueText.of(a, v) + ValueText.spread(v)));
             }
         }
         for (Used u : used) {
@@ -69,8 +74,11 @@ final class EvalReport {
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
-                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v), valueWidth) + basis + solved(v)
-                    + note).stripTrailing());
+                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v) + ValueText.spread(v),
+                    valueWidth) + basis + solved(v) + note).stripTrailing());
+                if (v.spread() != null && v.name().equals(sensitivity)) {
+                    out.println(Printable.line("      shares of the variance: " + ValueText.shares(v.spread())));
+                }
                 if (steps && v.solution() != null) writeSteps(out, v.solution(), v);
             } else if (r instanceof Row.FunctionRow f) {
                 out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));

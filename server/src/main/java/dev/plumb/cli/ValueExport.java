@@ -46,6 +46,7 @@ final class ValueExport {
                 if (display != null) o.addProperty("unit", display.symbol());
                 if (v.note() != null) o.addProperty("note", v.note());
                 if (v.origin() != null) o.addProperty("correlation", v.origin().correlation());
+                if (v.spread() != null) o.add("spread", spread(v));
                 values.add(o);
             } else if (r instanceof Row.CheckRow c) {
                 JsonObject o = new JsonObject();
@@ -132,6 +133,25 @@ final class ValueExport {
             out.add(o);
         }
         return out;
+    }
+
+    /** A value's spread: in SI, as shown, relative, and each source's share of the variance, largest first. */
+    private static JsonObject spread(Row.ValueRow v) {
+        JsonObject o = new JsonObject();
+        o.addProperty("si", v.spread().si());
+        o.addProperty("shown", ValueText.spread(v).strip());
+        if (v.value().si() != 0) o.addProperty("relative", v.spread().si() / Math.abs(v.value().si()));
+        JsonArray shares = new JsonArray();
+        for (dev.plumb.analysis.Spread.Share s : v.spread().shares()) {
+            JsonObject x = new JsonObject();
+            x.addProperty("source", s.source());
+            x.addProperty("kind", s.kind() == dev.plumb.analysis.Spread.Kind.TOLERANCE ? "tolerance" : "accuracy");
+            x.addProperty("si", Math.abs(s.si()));
+            x.addProperty("share", v.spread().fraction(s));
+            shares.add(x);
+        }
+        o.add("shares", shares);
+        return o;
     }
 
     /**

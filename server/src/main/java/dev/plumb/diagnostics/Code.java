@@ -54,7 +54,9 @@ public enum Code {
     SWEEP_CHECK_FAILED("sweep.check-failed", Severity.WARNING),
     SWEEP_ROW_FINDINGS("sweep.row-findings", Severity.WARNING),
     CASE_INVALID("case.invalid", Severity.ERROR),
-    CASE_NO_CHANGE("case.no-change", Severity.WARNING);
+    CASE_NO_CHANGE("case.no-change", Severity.WARNING),
+    TOLERANCE_INVALID("tolerance.invalid", Severity.ERROR),
+    TOLERANCE_NOT_PROPAGATED("tolerance.not-propagated", Severity.WARNING);
 
     private final String id;
     private final Severity severity;

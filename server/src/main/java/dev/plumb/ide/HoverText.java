@@ -134,6 +134,10 @@ public final class HoverText {
                 out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
             }
         }
+        if (row != null && row.spread() != null) {
+            out.append("\n\n").append(ValueText.spread(row).strip()).append(" to first order; shares of the variance: ")
+                .append(ValueText.shares(row.spread()));
+        }
         if (row != null && row.solution() != null) {
             out.append("\n\nsolved by `seek` in ").append(row.solution().iterations()).append(" iterations");
         }

@@ -26,7 +26,9 @@ public final class InlayValues {
             if (r.span().end() < from || r.span().end() > to) continue;
             if (r instanceof Row.ValueRow v && !v.input()) {
                 String solved = v.solution() == null ? "" : "  (solved, " + v.solution().iterations() + " iterations)";
-                out.add(new InlayValue(v.span().end(), "= " + ValueText.of(a, v) + solved, v.name()));
+                // The short form of a spread: the relative one, or the absolute one where a relative one says nothing.
+                String spread = ValueText.relative(v).isEmpty() ? ValueText.spread(v) : " " + ValueText.relative(v);
+                out.add(new InlayValue(v.span().end(), "= " + ValueText.of(a, v) + spread + solved, v.name()));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "? not evaluated" : CheckText.mark(c) + " " + CheckText.detail(c);
                 out.add(new InlayValue(c.span().end(), mark, "check"));

@@ -38,4 +38,30 @@ public final class ValueText {
         return QuantityFormat.format(v.si(), unit == null ? DisplayUnits.defaultFor(v.dimension()) : unit, sig,
             v.difference());
     }
+
+    /**
+     * " ± 0.31 kN (±11 %)": a value's spread in its display unit, to two significant figures (an
+     * uncertainty is quoted to at most two: JCGM 100:2008, 7.2.6), and relative to the value; ""
+     * when it has none. A spread is a difference: on a scale with an offset it reads without it.
+     */
+    public static String spread(Row.ValueRow row) {
+        if (row.spread() == null || !row.value().known()) return "";
+        Value d = new Value(row.spread().si(), row.value().dimension(), Value.Temperature.DIFFERENCE);
+        return " ± " + of(d, row.display(), 2) + (relative(row).isEmpty() ? "" : " (" + relative(row) + ")");
+    }
+
+    /** "±11 %": the spread relative to the value, the short form; "" without a spread or for a value of zero or on a scale. */
+    public static String relative(Row.ValueRow row) {
+        if (row.spread() == null || !row.value().known() || row.value().si() == 0 || row.value().point()) return "";
+        return "±" + QuantityFormat.number(100 * row.spread().si() / Math.abs(row.value().si()), 2) + " %";
+    }
+
+    /** "V 78 %, accuracy of cd_x (Cd) 22 %": each source's share of the value's variance, largest first. */
+    public static String shares(dev.plumb.analysis.Spread s) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        for (dev.plumb.analysis.Spread.Share sh : s.shares()) {
+            out.add(sh.source() + " " + QuantityFormat.number(100 * s.fraction(sh), 2) + " %");
+        }
+        return String.join(", ", out);
+    }
 }

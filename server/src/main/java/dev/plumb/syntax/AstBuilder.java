@@ -97,7 +97,10 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     @Override
     public Object visitInput(PlumbParser.InputContext ctx) {
-        return definition(ctx, true, ctx.name(), expr(ctx.expr()), ctx.tail());
+        Statement.Definition d = (Statement.Definition) definition(ctx, true, ctx.name(), expr(ctx.expr()), ctx.tail());
+        if (ctx.tolerance() == null) return d;
+        Statement.Tolerance t = new Statement.Tolerance(span(ctx.tolerance()), expr(ctx.tolerance().expr()));
+        return new Statement.Definition(d.span(), true, d.name(), d.expr(), d.displayUnit(), d.basis(), d.note(), t);
     }
 
     @Override

@@ -33,7 +33,10 @@ public final class ExprWalk {
     /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation, a sweep's range, a case's values. */
     public static List<Expr> of(Statement s) {
         List<Expr> out = new ArrayList<>();
-        if (s instanceof Statement.Definition d) out.add(d.expr());
+        if (s instanceof Statement.Definition d) {
+            out.add(d.expr());
+            if (d.tolerance() != null) out.add(d.tolerance().amount());
+        }
         if (s instanceof Statement.Check c) out.addAll(c.operands());
         if (s instanceof Statement.Function f) out.add(f.body());
         if (s instanceof Statement.Seek k) {

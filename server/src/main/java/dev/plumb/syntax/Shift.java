@@ -98,7 +98,8 @@ final class Shift {
         if (s instanceof Statement.Use u) return new Statement.Use(span(u.span()), u.path(), span(u.pathSpan()));
         if (s instanceof Statement.Definition d) {
             return new Statement.Definition(span(d.span()), d.input(), ident(d.name()), expr(d.expr()),
-                unit(d.displayUnit()), ident(d.basis()), d.note());
+                unit(d.displayUnit()), ident(d.basis()), d.note(), d.tolerance() == null ? null
+                    : new Statement.Tolerance(span(d.tolerance().span()), expr(d.tolerance().amount())));
         }
         if (s instanceof Statement.Function f) {
             return new Statement.Function(span(f.span()), ident(f.name()), idents(f.params()), expr(f.body()), f.note());

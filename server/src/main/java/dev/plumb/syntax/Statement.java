@@ -21,9 +21,20 @@ public sealed interface Statement {
     record Use(Span span, String path, Span pathSpan) implements Statement {
     }
 
-    /** {@code [input] NAME = EXPR [in UNIT] [as BASIS] ["note"]}. */
+    /**
+     * {@code [input] NAME = EXPR [± AMOUNT] [in UNIT] [as BASIS] ["note"]}; {@code tolerance} is null
+     * when none is written (only an input may have one).
+     */
     record Definition(Span span, boolean input, Ident name, Expr expr, UnitText displayUnit,
-                      Ident basis, String note) implements Statement {
+                      Ident basis, String note, Tolerance tolerance) implements Statement {
+        /** A definition without a tolerance. */
+        public Definition(Span span, boolean input, Ident name, Expr expr, UnitText displayUnit, Ident basis, String note) {
+            this(span, input, name, expr, displayUnit, basis, note, null);
+        }
+    }
+
+    /** {@code ± AMOUNT} after an input's value: {@code span} covers the sign and the amount. */
+    record Tolerance(Span span, Expr amount) {
     }
 
     /** {@code NAME(P1, P2) = EXPR ["note"]}. */
