@@ -42,7 +42,7 @@ PLUMB_JAR lsp' works as well."
   '("input" "check" "seek" "from" "where" "use" "section" "title" "author"
     "reviewer" "revision" "correlation" "table" "end" "when" "otherwise" "source" "family"
     "basis" "valid" "domain" "regime" "accuracy" "interpolate" "accept" "at" "transition" "in" "as"
-    "sweep" "over" "by" "steps" "log" "show" "case")
+    "sweep" "over" "by" "steps" "log" "show" "case" "with" "spread")
   "Statement and clause words of the Plumb language.")
 
 (defvar plumb-mode-font-lock-keywords

@@ -25,7 +25,7 @@ tokens { NARRATIVE }
      * (`sweep V over 10 .. 40 by 5`, `in 7 log steps`).
      */
     private static final java.util.Set<String> CLAUSE_WORDS =
-        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "by", "steps", "log", "show");
+        java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "by", "steps", "log", "show", "with");
 
     /** The words of a sweep's head, never units: `in 7 log steps`. */
     private static final java.util.Set<String> SWEEP_WORDS = java.util.Set.of("by", "steps", "log", "show");
@@ -182,6 +182,8 @@ BY          : 'by';
 STEPS       : 'steps';
 SHOW        : 'show';
 CASE        : 'case';
+WITH        : 'with';
+SPREAD      : 'spread';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';

@@ -52,7 +52,8 @@ functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN value note?;
 value       : expr ( WHEN condition ( ( OTHERWISE | ASSIGN ) expr WHEN condition )*
                      ( OTHERWISE expr | ASSIGN expr OTHERWISE )? )?;
 condition   : expr ( comparator expr )+;
-check       : CHECK expr ( comparator expr )+ note?;
+/** `with spread`: the check must hold at the sides' bounds (each value moved by its spread the unfavourable way). */
+check       : CHECK expr ( comparator expr )+ ( WITH SPREAD )? note?;
 seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
 /**
  * A reviewer accepts one finding: its code, the value whose statement it is on, and why. The
@@ -124,5 +125,5 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT | TRANSITION | SWEEP | OVER | BY | STEPS | SHOW | CASE
+    | DOMAIN | ACCEPT | AT | TRANSITION | SWEEP | OVER | BY | STEPS | SHOW | CASE | WITH | SPREAD
     ;

@@ -74,7 +74,8 @@ final class Analyzer {
             budget);
         Map<Statement, Row> studyRows = Studies.run(statements, study, declared.own(), scope, reporter, text, units,
             budget, settings.significantFigures(), file);
-        Map<String, Spread> spreads = Studies.spreads(statements, study, plan, scope, reporter, text, units, budget);
+        Map<String, Spread> spreads = Studies.spreads(statements, study, plan, scope, reporter, text, units, budget, settings,
+            checkRows);
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
         UnitNameClash.report(statements, name -> declared.own().containsKey(name)
             ? evaluated.values().get(name) : null, scope, units, reporter);

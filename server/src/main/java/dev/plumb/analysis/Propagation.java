@@ -27,6 +27,11 @@ final class Propagation {
     private record Source(String name, String label, Spread.Kind kind, Value nominal, double u) {
     }
 
+    /** One source's two runs, kept for the sides of checks `with spread`. */
+    private record Runs(Source source, double h, StudyRun.Outcome up, StudyRun.Outcome down) {
+    }
+
+    private final List<Runs> runs = new ArrayList<>();
     private final StudyRun study;
     private final Map<String, Statement> own;
     private final List<String> order;
@@ -60,6 +65,7 @@ final class Propagation {
             StudyRun.Outcome down = study.run(Map.of(s.name(), shifted(s.nominal(), -h)), false);
             // Values the budget left unknown say nothing about the formulas: stop, and say so once.
             if (up.stopped() || down.stopped()) throw new Budget.Exhausted(Budget.Limit.TIME);
+            runs.add(new Runs(s, h, up, down));
             for (String name : order) {
                 Binding.ValueBinding base = study.base().get(name);
                 if (base == null || !base.value().known()) continue;
@@ -148,5 +154,33 @@ final class Propagation {
 
     private dev.plumb.diagnostics.Span nameSpan(String name) {
         return DeclarationPass.definedName(own.get(name)).span();
+    }
+
+    /**
+     * The spread of an expression (a side of a check {@code with spread}) from the runs made by
+     * {@link #run}, the same way as a value's; null when it cannot be computed on either side of a
+     * source. Zero when no source reaches it (or there is none).
+     */
+    Double spreadOf(Expr e) {
+        double sum = 0;
+        Evaluator base = new Evaluator(scope, study.base(), Map.of(), Reporter.discarding(), text, units, budget);
+        Value v0 = base.eval(e);
+        if (!v0.known()) return null;
+        for (Runs r : runs) {
+            Double fu = side(e, r.up());
+            Double fd = side(e, r.down());
+            double slope;
+            if (fu != null && fd != null) slope = (fu - fd) / (2 * r.h());
+            else if (fu != null) slope = (fu - v0.si()) / r.h();
+            else if (fd != null) slope = (v0.si() - fd) / r.h();
+            else return null;
+            sum += slope * r.source().u() * slope * r.source().u();
+        }
+        return Math.sqrt(sum);
+    }
+
+    private Double side(Expr e, StudyRun.Outcome o) {
+        Value v = new Evaluator(scope, o.values(), Map.of(), Reporter.discarding(), text, units, budget).eval(e);
+        return v.known() && Double.isFinite(v.si()) ? v.si() : null;
     }
 }

@@ -67,14 +67,23 @@ public sealed interface Row {
      * A check. {@code source} is its comparison as written (shortened); {@code values} the value of
      * each side, in order, with the {@code comparators} between them, to be shown in {@code unit}
      * to {@code digits} significant figures (enough that a failing pair does not read the same).
-     * Values and unit are empty/null when the check was not judged.
+     * Values and unit are empty/null when the check was not judged. For a check {@code with spread},
+     * {@code spreads} holds each side's spread in SI (empty otherwise).
      */
     record CheckRow(Span span, String source, Verdict verdict, java.util.List<Value> values,
                     java.util.List<dev.plumb.syntax.Comparator> comparators, dev.plumb.units.Unit unit, int digits,
-                    String note) implements Row {
+                    String note, java.util.List<Double> spreads) implements Row {
         public CheckRow {
             values = java.util.List.copyOf(values);
             comparators = java.util.List.copyOf(comparators);
+            spreads = java.util.List.copyOf(spreads);
+        }
+
+        /** A check judged on its sides' values alone. */
+        public CheckRow(Span span, String source, Verdict verdict, java.util.List<Value> values,
+                        java.util.List<dev.plumb.syntax.Comparator> comparators, dev.plumb.units.Unit unit, int digits,
+                        String note) {
+            this(span, source, verdict, values, comparators, unit, digits, note, java.util.List.of());
         }
 
         /** A check that was not judged, for the given reason. */
@@ -84,13 +93,16 @@ public sealed interface Row {
 
         /** True passed, false failed, null not evaluated. */
         public Boolean passed() {
-            return verdict == Verdict.PASSED ? Boolean.TRUE : verdict == Verdict.FAILED ? Boolean.FALSE : null;
+            return verdict == Verdict.PASSED ? Boolean.TRUE
+                : verdict == Verdict.FAILED || verdict == Verdict.FAILS_AT_BOUND ? Boolean.FALSE : null;
         }
     }
 
-    /** A check's outcome; every verdict but the first two means it was not evaluated, and why. */
+    /** A check's outcome; every verdict but the first three means it was not evaluated, and why. */
     enum Verdict {
         PASSED, FAILED,
+        /** Holds for the values but not at their bounds (a check `with spread`): a failure of its own kind. */
+        FAILS_AT_BOUND,
         /** Stopped by the run's budget. */
         STOPPED,
         /** A value it needs is unknown. */
@@ -143,7 +155,7 @@ public sealed interface Row {
 
         /** Whether a check failed here. */
         public boolean anyFails() {
-            return verdicts.contains(Verdict.FAILED);
+            return verdicts.contains(Verdict.FAILED) || verdicts.contains(Verdict.FAILS_AT_BOUND);
         }
     }
 

@@ -57,13 +57,31 @@ final class Studies {
         return rows;
     }
 
-    /** Every own value's spread from the tolerances and stated accuracies (none when there are none), within the budget. */
+    /**
+     * Every own value's spread from the tolerances and stated accuracies (none when there are none),
+     * within the budget; the checks {@code with spread} are judged at their bounds, their rows in
+     * {@code checkRows} replaced.
+     */
     static Map<String, Spread> spreads(List<Statement> statements, StudyRun study, Plan plan, Scope scope, Reporter reporter,
-                                       String text, UnitRegistry units, Budget budget) {
+                                       String text, UnitRegistry units, Budget budget, Settings settings,
+                                       Map<Statement, Row> checkRows) {
         try {
             budget.nextStatement();
-            return new Propagation(study, plan, scope, reporter, text, units, budget).run(statements);
+            Propagation propagation = new Propagation(study, plan, scope, reporter, text, units, budget);
+            Map<String, Spread> out = propagation.run(statements);
+            for (Statement s : statements) {
+                if (s instanceof Statement.Check c && c.withSpread() && checkRows.get(c) instanceof Row.CheckRow row) {
+                    checkRows.put(c, MarginCheck.judge(c, row, propagation, reporter, text, settings));
+                }
+            }
+            return out;
         } catch (Budget.Exhausted e) {
+            // A check asked to hold with spread cannot be judged without it: never on the values alone in silence.
+            for (Statement s : statements) {
+                if (s instanceof Statement.Check c && c.withSpread() && checkRows.get(c) instanceof Row.CheckRow row) {
+                    checkRows.put(c, Row.CheckRow.unjudged(c.span(), row.source(), Row.Verdict.STOPPED, c.note()));
+                }
+            }
             reporter.report(Code.LIMIT_BUDGET, new dev.plumb.diagnostics.Span(0, 0), "the tolerances were not carried to "
                 + "the values: " + (e.limit == Budget.Limit.TIME ? "the run's " + Budget.SECONDS + " s are up"
                 : "that needs more work than any calc does") + ", so no value shows a ±");

@@ -83,7 +83,8 @@ final class EvalReport {
             } else if (r instanceof Row.FunctionRow f) {
                 out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));
             } else if (r instanceof Row.CheckRow c) {
-                String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
+                String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass")
+                    : c.verdict() == Row.Verdict.FAILS_AT_BOUND ? style.bad("✗ FAIL at its bound") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();
                 out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]" + why));
             } else if (r instanceof Row.CaseRow k) {

@@ -56,7 +56,8 @@ public enum Code {
     CASE_INVALID("case.invalid", Severity.ERROR),
     CASE_NO_CHANGE("case.no-change", Severity.WARNING),
     TOLERANCE_INVALID("tolerance.invalid", Severity.ERROR),
-    TOLERANCE_NOT_PROPAGATED("tolerance.not-propagated", Severity.WARNING);
+    TOLERANCE_NOT_PROPAGATED("tolerance.not-propagated", Severity.WARNING),
+    CHECK_FAILS_AT_BOUND("check.fails-at-bound", Severity.ERROR);
 
     private final String id;
     private final Severity severity;

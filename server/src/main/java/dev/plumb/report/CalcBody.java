@@ -117,8 +117,9 @@ final class CalcBody {
         }
 
         private String check(Row.CheckRow c) {
-            String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.verdict() == Row.Verdict.FAILED ? "fail" : "unjudged";
+            String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.passed() == Boolean.FALSE ? "fail" : "unjudged";
             String words = c.verdict() == Row.Verdict.PASSED ? "passes" : c.verdict() == Row.Verdict.FAILED ? "FAILS"
+                : c.verdict() == Row.Verdict.FAILS_AT_BOUND ? "FAILS AT ITS BOUND"
                 : "NOT EVALUATED";
             Statement s = statements.get(c.span());
             String comparison = s instanceof Statement.Check check

@@ -152,7 +152,7 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     @Override
     public Object visitCheck(PlumbParser.CheckContext ctx) {
         Statement.Bound chain = bound(ctx, ctx.expr(), ctx.comparator());
-        return new Statement.Check(span(ctx), chain.operands(), chain.comparators(), note(ctx.note()));
+        return new Statement.Check(span(ctx), chain.operands(), chain.comparators(), note(ctx.note()), ctx.WITH() != null);
     }
 
     private Statement.Bound bound(ParserRuleContext ctx, List<PlumbParser.ExprContext> exprs,

@@ -105,7 +105,7 @@ final class Shift {
             return new Statement.Function(span(f.span()), ident(f.name()), idents(f.params()), expr(f.body()), f.note());
         }
         if (s instanceof Statement.Check c) {
-            return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note());
+            return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note(), c.withSpread());
         }
         if (s instanceof Statement.Transition t) {
             return new Statement.Transition(span(t.span()), ident(t.quantity()), t.value(), span(t.valueSpan()), t.note());

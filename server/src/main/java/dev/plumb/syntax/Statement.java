@@ -44,11 +44,20 @@ public sealed interface Statement {
         }
     }
 
-    /** {@code check A op B [op C] ["note"]}: operands.size() == comparators.size() + 1. */
-    record Check(Span span, List<Expr> operands, List<Comparator> comparators, String note) implements Statement {
+    /**
+     * {@code check A op B [op C] [with spread] ["note"]}: operands.size() == comparators.size() + 1;
+     * {@code withSpread} asks that it hold at the sides' bounds, their spreads counted against it.
+     */
+    record Check(Span span, List<Expr> operands, List<Comparator> comparators, String note, boolean withSpread)
+        implements Statement {
         public Check {
             operands = List.copyOf(operands);
             comparators = List.copyOf(comparators);
+        }
+
+        /** A check on the values alone. */
+        public Check(Span span, List<Expr> operands, List<Comparator> comparators, String note) {
+            this(span, operands, comparators, note, false);
         }
     }
 
