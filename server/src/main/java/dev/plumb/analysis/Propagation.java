@@ -52,9 +52,12 @@ final class Propagation {
         this.budget = budget;
     }
 
+    /** The sources found by {@link #run}. */
+    private List<Source> sources = List.of();
+
     /** Each own value's spread, by name; empty when the document has no tolerance and no stated accuracy. */
     Map<String, Spread> run(List<Statement> statements) {
-        List<Source> sources = sources(statements);
+        sources = sources(statements);
         Map<String, Spread> out = new LinkedHashMap<>();
         if (sources.isEmpty()) return out;
         Map<String, List<Spread.Share>> shares = new LinkedHashMap<>();
@@ -182,5 +185,57 @@ final class Propagation {
     private Double side(Expr e, StudyRun.Outcome o) {
         Value v = new Evaluator(scope, o.values(), Map.of(), Reporter.discarding(), text, units, budget).eval(e);
         return v.known() && Double.isFinite(v.si()) ? v.si() : null;
+    }
+
+    /**
+     * A Monte Carlo estimate for each value that has a spread: {@code n} draws of every source
+     * from a normal distribution whose standard deviation is its tolerance (Commons Math's
+     * Well19937c generator from {@code seed}, so a run gives the same figures every time), the
+     * calc evaluated again for each draw. A value that cannot be computed in some draws counts
+     * them as failed ({@code tolerance.samples-failed}); when the run's time runs out, no estimate
+     * is given and {@code limit.budget} says how far it came.
+     */
+    Map<String, Spread> sample(Map<String, Spread> spreads, int n, long seed) {
+        if (n == 0 || sources.isEmpty() || spreads.isEmpty()) return spreads;
+        org.apache.commons.math3.random.RandomGenerator random = new org.apache.commons.math3.random.Well19937c(seed);
+        Map<String, double[]> moments = new LinkedHashMap<>();   // count, mean, M2 (Welford), failed
+        spreads.keySet().forEach(name -> moments.put(name, new double[4]));
+        for (int i = 0; i < n; i++) {
+            Map<String, Double> offsets = new LinkedHashMap<>();
+            for (Source s : sources) offsets.merge(s.name(), s.u() * random.nextGaussian(), Double::sum);
+            Map<String, Value> given = new LinkedHashMap<>();
+            for (Source s : sources) given.putIfAbsent(s.name(), shifted(s.nominal(), offsets.get(s.name())));
+            StudyRun.Outcome o = study.run(given, false);
+            if (o.stopped()) {
+                reporter.report(Code.LIMIT_BUDGET, nameSpan(spreads.keySet().iterator().next()), "the Monte Carlo estimate "
+                    + "was stopped after " + i + " of " + n + " samples: the run's " + Budget.SECONDS + " s are up; ask for "
+                    + "fewer samples (the first-order spreads are shown)");
+                return spreads;
+            }
+            for (var e : moments.entrySet()) {
+                Double v = known(o, e.getKey());
+                double[] m = e.getValue();
+                if (v == null) {
+                    m[3]++;
+                    continue;
+                }
+                m[0]++;
+                double delta = v - m[1];
+                m[1] += delta / m[0];
+                m[2] += delta * (v - m[1]);
+            }
+        }
+        Map<String, Spread> out = new LinkedHashMap<>();
+        for (var e : spreads.entrySet()) {
+            double[] m = moments.get(e.getKey());
+            double sd = m[0] > 1 ? Math.sqrt(m[2] / (m[0] - 1)) : Double.NaN;
+            out.put(e.getKey(), e.getValue().withSampled(new Spread.Sampled(m[1], sd, n, (int) m[3], seed)));
+            if (m[3] > 0) {
+                reporter.report(Code.TOLERANCE_SAMPLES_FAILED, nameSpan(e.getKey()), e.getKey() + " could not be computed "
+                    + "in " + (long) m[3] + " of " + n + " Monte Carlo samples (a draw fell outside a formula's domain or a "
+                    + "solve's bracket): its estimate is over the other " + (long) m[0] + ", and says nothing of those draws");
+            }
+        }
+        return out;
     }
 }

@@ -16,7 +16,11 @@ import java.util.List;
  * @param si the combined spread in SI (never negative)
  * @param shares each source's contribution, largest first
  */
-public record Spread(double si, List<Share> shares) {
+public record Spread(double si, List<Share> shares, Sampled sampled) {
+    public Spread(double si, List<Share> shares) {
+        this(si, shares, null);
+    }
+
     public Spread {
         List<Share> sorted = new ArrayList<>(shares);
         sorted.sort(Comparator.comparingDouble((Share s) -> -Math.abs(s.si())));
@@ -31,6 +35,20 @@ public record Spread(double si, List<Share> shares) {
      * value it gives), {@code si} is the derivative times the source's tolerance, in SI.
      */
     public record Share(String source, Kind kind, double si) {
+    }
+
+    /**
+     * A Monte Carlo estimate of the same spread: the inputs drawn from normal distributions whose
+     * standard deviations are their tolerances (a correlation's accuracy likewise, on its value),
+     * the calc evaluated for each draw; the mean and standard deviation of the value over the
+     * {@code samples - failed} draws where it could be computed.
+     */
+    public record Sampled(double mean, double sd, int samples, int failed, long seed) {
+    }
+
+    /** This spread with a Monte Carlo estimate beside it. */
+    Spread withSampled(Sampled s) {
+        return new Spread(si, shares, s);
     }
 
     /** The part of the value's variance a share makes up (0 to 1): its square over the sum of squares. */

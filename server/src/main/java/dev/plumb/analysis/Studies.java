@@ -68,7 +68,7 @@ final class Studies {
         try {
             budget.nextStatement();
             Propagation propagation = new Propagation(study, plan, scope, reporter, text, units, budget);
-            Map<String, Spread> out = propagation.run(statements);
+            Map<String, Spread> out = propagation.sample(propagation.run(statements), settings.samples(), settings.seed());
             for (Statement s : statements) {
                 if (s instanceof Statement.Check c && c.withSpread() && checkRows.get(c) instanceof Row.CheckRow row) {
                     checkRows.put(c, MarginCheck.judge(c, row, propagation, reporter, text, settings));

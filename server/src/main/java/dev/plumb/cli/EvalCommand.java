@@ -43,6 +43,14 @@ final class EvalCommand implements Callable<Integer> {
         description = "list under NAME each tolerance's and stated accuracy's share of its variance, largest first")
     String sensitivity;
 
+    @picocli.CommandLine.Option(names = "--monte-carlo", paramLabel = "N",
+        description = "also estimate every spread from N Monte Carlo samples of the tolerances (at most 1000000)")
+    int samples;
+
+    @picocli.CommandLine.Option(names = "--seed", paramLabel = "SEED", defaultValue = "20261202",
+        description = "the Monte Carlo samples' random seed (default: ${DEFAULT-VALUE}, the same samples every run)")
+    long seed;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -65,7 +73,11 @@ final class EvalCommand implements Callable<Integer> {
             err.println("plumb: no such file: " + dev.plumb.diagnostics.Printable.line(file.toString()));
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(common.sources(), common.settings());
+        if (samples < 0 || samples > dev.plumb.analysis.Settings.MAX_SAMPLES) {
+            err.println("plumb: --monte-carlo takes 0 to " + dev.plumb.analysis.Settings.MAX_SAMPLES + " samples, not " + samples);
+            return Main.USAGE;
+        }
+        Workspace workspace = new Workspace(common.sources(), common.settings().withSamples(samples, seed));
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();

@@ -151,6 +151,16 @@ final class ValueExport {
             shares.add(x);
         }
         o.add("shares", shares);
+        dev.plumb.analysis.Spread.Sampled m = v.spread().sampled();
+        if (m != null) {
+            JsonObject mc = new JsonObject();
+            if (Double.isFinite(m.mean())) mc.addProperty("meanSi", m.mean());
+            if (Double.isFinite(m.sd())) mc.addProperty("sdSi", m.sd());
+            mc.addProperty("samples", m.samples());
+            mc.addProperty("failed", m.failed());
+            mc.addProperty("seed", m.seed());
+            o.add("monteCarlo", mc);
+        }
         return o;
     }
 

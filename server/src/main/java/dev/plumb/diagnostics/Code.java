@@ -57,7 +57,8 @@ public enum Code {
     CASE_NO_CHANGE("case.no-change", Severity.WARNING),
     TOLERANCE_INVALID("tolerance.invalid", Severity.ERROR),
     TOLERANCE_NOT_PROPAGATED("tolerance.not-propagated", Severity.WARNING),
-    CHECK_FAILS_AT_BOUND("check.fails-at-bound", Severity.ERROR);
+    CHECK_FAILS_AT_BOUND("check.fails-at-bound", Severity.ERROR),
+    TOLERANCE_SAMPLES_FAILED("tolerance.samples-failed", Severity.WARNING);
 
     private final String id;
     private final Severity severity;

@@ -50,6 +50,20 @@ public final class ValueText {
         return " ± " + of(d, row.display(), 2) + (relative(row).isEmpty() ? "" : " (" + relative(row) + ")");
     }
 
+    /**
+     * "Monte Carlo: 2.83 kN ± 0.33 kN (mean ± standard deviation, 10000 samples, seed 20261202)";
+     * "" without one.
+     */
+    public static String sampled(Row.ValueRow row) {
+        if (row.spread() == null || row.spread().sampled() == null) return "";
+        dev.plumb.analysis.Spread.Sampled s = row.spread().sampled();
+        Value mean = new Value(s.mean(), row.value().dimension(), row.value().temperature());
+        Value sd = new Value(s.sd(), row.value().dimension(), Value.Temperature.DIFFERENCE);
+        String failed = s.failed() == 0 ? "" : ", " + s.failed() + " failed";
+        return "Monte Carlo: " + of(mean, row.display(), 3) + " ± " + of(sd, row.display(), 2) + " (mean ± standard "
+            + "deviation, " + s.samples() + " samples" + failed + ", seed " + s.seed() + ")";
+    }
+
     /** "±11 %": the spread relative to the value, the short form; "" without a spread or for a value of zero or on a scale. */
     public static String relative(Row.ValueRow row) {
         if (row.spread() == null || !row.value().known() || row.value().si() == 0 || row.value().point()) return "";

@@ -11,7 +11,8 @@ import java.util.function.Supplier;
 /**
  * Prints how long the studies take on a generated 100-definition calc (a drag calc of our own
  * shape: inputs, a correlation call, a chain of derived values, a check): the calc alone, with a
- * 1,000-row sweep, and with tolerances carried to every value, in process after warm-up, as the
+ * 1,000-row sweep, with a tolerance carried to every value, and with a 10,000-sample Monte Carlo
+ * estimate of it, in process after warm-up, as the
  * language server sees them. The study's own cost is the difference to the calc alone. Run:
  * {@code mvn -B -q -pl server test-compile exec:java -Dexec.classpathScope=test
  * -Dexec.mainClass=dev.plumb.bench.StudyBenchmark}. Figures only: nothing here asserts a time.
@@ -44,12 +45,19 @@ public final class StudyBenchmark {
         double alone = report("100-definition calc alone", () -> analyse(base));
         double swept = report("the same with a 1,000-row sweep", () -> analyse(sweep));
         double spread = report("the same with V ± 1 m/s carried to every value", () -> analyse(toleranced));
-        System.out.printf("the sweep's own cost: %.1f ms (%.1f µs a row); the tolerance's: %.1f ms%n", swept - alone,
-            (swept - alone) * 1000 / 1000, spread - alone);
+        double sampled = report("the same with a 10,000-sample Monte Carlo", () -> analyse(toleranced,
+            Settings.DEFAULT.withSamples(10_000, Settings.DEFAULT_SEED)));
+        System.out.printf("the sweep's own cost: %.1f ms (%.1f µs a row); the tolerance's: %.1f ms; the Monte Carlo's: "
+            + "%.0f ms (%.1f µs a sample)%n", swept - alone, (swept - alone) * 1000 / 1000, spread - alone, sampled - spread,
+            (sampled - spread) * 1000 / 10_000);
     }
 
     private static Analysis analyse(String text) {
-        return new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("bench.plumb").toAbsolutePath(), text);
+        return analyse(text, Settings.DEFAULT);
+    }
+
+    private static Analysis analyse(String text, Settings settings) {
+        return new Workspace(new FileSources(), settings).analyzeText(Path.of("bench.plumb").toAbsolutePath(), text);
     }
 
     private static double report(String what, Supplier<Analysis> run) {
