@@ -30,7 +30,7 @@ final class EvaluationPass {
     private final Budget budget;
     /** Set once the run's time is up: what is left is not evaluated (one finding said so). */
     private boolean outOfTime;
-    private final Map<Statement, Row> rows = new IdentityHashMap<>();
+    private final Map<Statement, Row> rows;
 
     EvaluationPass(Plan plan, Scope scope, String text, Reporter reporter, UnitRegistry units, Budget budget) {
         this.plan = plan;
@@ -39,6 +39,8 @@ final class EvaluationPass {
         this.reporter = reporter;
         this.units = units;
         this.budget = budget;
+        // Sized for every statement at once: a study makes a pass per row.
+        this.rows = new IdentityHashMap<>(plan.own().size());
     }
 
     /** @param duplicates statements defining a name a second time: evaluated for their findings, bound to nothing */

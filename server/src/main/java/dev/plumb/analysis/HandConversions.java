@@ -124,6 +124,9 @@ final class HandConversions {
      * least three significant digits unless it is the exact factor (3.6 and 12, not 2.2).
      */
     static Factor match(String numberText, Dimension kind, boolean divide) {
+        // Most products are of a kind no factor has: answered without reading the number.
+        List<Factor> ofKind = BY_KIND.get(kind);
+        if (ofKind == null) return null;
         BigDecimal x;
         try {
             x = new BigDecimal(numberText);
@@ -132,14 +135,24 @@ final class HandConversions {
         }
         if (x.signum() <= 0) return null;
         BigDecimal halfUnit = BigDecimal.valueOf(5, x.scale() + 1);
-        for (Factor f : FACTORS) {
-            if (!f.kind().equals(kind) || (f.divideOnly() && !divide)) continue;
+        for (Factor f : ofKind) {
+            if (f.divideOnly() && !divide) continue;
             boolean same = f.exact() && x.compareTo(f.value()) == 0;
             boolean rounded = x.stripTrailingZeros().precision() >= 3
                 && x.subtract(f.value()).abs().compareTo(halfUnit) <= 0;
             if (same || rounded) return f;
         }
         return null;
+    }
+
+    /** The factors by the kind of value they convert, in the order of {@link #FACTORS}; read-only. */
+    private static final java.util.Map<Dimension, List<Factor>> BY_KIND = byKind();
+
+    private static java.util.Map<Dimension, List<Factor>> byKind() {
+        java.util.Map<Dimension, List<Factor>> out = new java.util.HashMap<>();
+        for (Factor f : FACTORS) out.computeIfAbsent(f.kind(), k -> new java.util.ArrayList<>()).add(f);
+        out.replaceAll((k, v) -> List.copyOf(v));
+        return java.util.Map.copyOf(out);
     }
 
     private static Factor whole(String value, String words, String times, String over, Dimension kind) {
