@@ -89,6 +89,10 @@ final class Analyzer {
         shown.putAll(studyRows);
         shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && spreads.containsKey(v.name())
             && declared.own().get(v.name()) == st ? v.withSpread(spreads.get(v.name())) : row);
+        Map<String, ModelForm> modelForms = ModelForms.of(statements, declared.own(), evaluated.values(), scope, text, units,
+            budget);
+        shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && modelForms.containsKey(v.name())
+            && declared.own().get(v.name()) == st ? v.withModelForm(modelForms.get(v.name())) : row);
         List<Row> inOrder = rowsInOrder(statements, shown, checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));

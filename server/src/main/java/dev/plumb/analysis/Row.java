@@ -17,23 +17,29 @@ public sealed interface Row {
      * that show values then use SI), and {@code statement} the statement that defines it (a
      * definition, a solve statement, or a broken line), whose spans say where its formula and its
      * `in` unit are written; {@code spread} how far it may lie from its value (null when no
-     * tolerance or stated accuracy reaches it). The engine does not word it: the layers that show
+     * tolerance or stated accuracy reaches it); {@code modelForm} the values the other valid
+     * entries of its correlation's family give (null when there are none). The engine does not word it: the layers that show
      * things do.
      */
     record ValueRow(Span span, String name, boolean input, Value value, String basis, String note,
                     Origin origin, Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement,
-                    Spread spread)
+                    Spread spread, ModelForm modelForm)
         implements Row {
 
         /** A value with no spread (none of the sources of one reaches it). */
         public ValueRow(Span span, String name, boolean input, Value value, String basis, String note, Origin origin,
                         Solution solution, dev.plumb.units.Unit display, dev.plumb.syntax.Statement statement) {
-            this(span, name, input, value, basis, note, origin, solution, display, statement, null);
+            this(span, name, input, value, basis, note, origin, solution, display, statement, null, null);
         }
 
         /** This row with a spread. */
         ValueRow withSpread(Spread s) {
-            return new ValueRow(span, name, input, value, basis, note, origin, solution, display, statement, s);
+            return new ValueRow(span, name, input, value, basis, note, origin, solution, display, statement, s, modelForm);
+        }
+
+        /** This row with the model-form range of its correlation's family. */
+        ValueRow withModelForm(ModelForm m) {
+            return new ValueRow(span, name, input, value, basis, note, origin, solution, display, statement, spread, m);
         }
 
         /** The formula as written, for a definition; null for a solved value or a broken line. */

@@ -76,6 +76,7 @@ final class EvalReport {
                 String basis = tag(v) + used(a, v);
                 out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v) + ValueText.spread(v),
                     valueWidth) + basis + solved(v) + note).stripTrailing());
+                if (v.modelForm() != null) out.println(Printable.line("      " + ValueText.modelForm(v)));
                 if (v.spread() != null && v.spread().sampled() != null) {
                     out.println(Printable.line("      " + ValueText.sampled(v)));
                 }

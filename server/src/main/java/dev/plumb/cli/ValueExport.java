@@ -47,6 +47,20 @@ final class ValueExport {
                 if (v.note() != null) o.addProperty("note", v.note());
                 if (v.origin() != null) o.addProperty("correlation", v.origin().correlation());
                 if (v.spread() != null) o.add("spread", spread(v));
+                if (v.modelForm() != null) {
+                    JsonObject m = new JsonObject();
+                    m.addProperty("lowSi", v.modelForm().low());
+                    m.addProperty("highSi", v.modelForm().high());
+                    JsonArray entries = new JsonArray();
+                    for (dev.plumb.analysis.ModelForm.Entry e : v.modelForm().entries()) {
+                        JsonObject x = new JsonObject();
+                        x.addProperty("name", e.name());
+                        x.addProperty("valueSi", e.si());
+                        entries.add(x);
+                    }
+                    m.add("entries", entries);
+                    o.add("modelForm", m);
+                }
                 values.add(o);
             } else if (r instanceof Row.CheckRow c) {
                 JsonObject o = new JsonObject();

@@ -138,6 +138,7 @@ public final class HoverText {
             out.append("\n\n").append(ValueText.spread(row).strip()).append(" to first order; shares of the variance: ")
                 .append(ValueText.shares(row.spread()));
         }
+        if (row != null && row.modelForm() != null) out.append("\n\n").append(ValueText.modelForm(row));
         if (row != null && row.solution() != null) {
             out.append("\n\nsolved by `seek` in ").append(row.solution().iterations()).append(" iterations");
         }

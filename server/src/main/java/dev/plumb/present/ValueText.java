@@ -64,6 +64,22 @@ public final class ValueText {
             + "deviation, " + s.samples() + " samples" + failed + ", seed " + s.seed() + ")";
     }
 
+    /**
+     * "model form: 0.39 .. 0.47 over 3 valid entries of the family (cd_a 0.42, cd_b 0.39, cd_c 0.47)":
+     * how much the choice of formula matters here; "" without one.
+     */
+    public static String modelForm(Row.ValueRow row) {
+        dev.plumb.analysis.ModelForm m = row.modelForm();
+        if (m == null) return "";
+        java.util.List<String> each = new java.util.ArrayList<>();
+        for (dev.plumb.analysis.ModelForm.Entry e : m.entries()) {
+            each.add(e.name() + " " + of(Value.of(e.si(), row.value().dimension()), row.display(), 3));
+        }
+        return "model form: " + of(Value.of(m.low(), row.value().dimension()), row.display(), 3) + " .. "
+            + of(Value.of(m.high(), row.value().dimension()), row.display(), 3) + " over " + m.entries().size()
+            + " valid entries of the family (" + String.join(", ", each) + ")";
+    }
+
     /** "±11 %": the spread relative to the value, the short form; "" without a spread or for a value of zero or on a scale. */
     public static String relative(Row.ValueRow row) {
         if (row.spread() == null || !row.value().known() || row.value().si() == 0 || row.value().point()) return "";
