@@ -256,9 +256,9 @@ final class ValueExport {
         out.print(line.append("\r\n"));
     }
 
-    /** One row per value, RFC 4180 quoting; an unknown value has empty number cells and "?" as shown. */
+    /** One row per value, RFC 4180 quoting (the spread last, empty for a value without one); an unknown value has empty number cells and "?" as shown. */
     static void csv(Analysis a, PrintWriter out) {
-        out.print("name,line,input,value_si,si_unit,shown,unit,dimension,note\r\n");
+        out.print("name,line,input,value_si,si_unit,shown,unit,dimension,note,spread_si,spread\r\n");
         for (Row r : a.rows()) {
             if (!(r instanceof Row.ValueRow v)) continue;
             boolean known = v.value().known();
@@ -266,7 +266,8 @@ final class ValueExport {
                 v.name(), String.valueOf(a.lines().line(v.span().start())), String.valueOf(v.input()),
                 known ? String.valueOf(v.value().si()) : "", known ? DisplayUnits.defaultFor(v.value().dimension()).symbol() : "",
                 ValueText.of(a, v), v.display() == null ? "" : v.display().symbol(), known ? v.value().dimension().describe() : "",
-                v.note() == null ? "" : v.note()};
+                v.note() == null ? "" : v.note(), v.spread() == null ? "" : String.valueOf(v.spread().si()),
+                ValueText.spread(v).strip()};
             StringBuilder line = new StringBuilder();
             for (int i = 0; i < cells.length; i++) {
                 if (i > 0) line.append(',');
