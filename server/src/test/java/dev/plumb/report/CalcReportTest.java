@@ -213,4 +213,18 @@ class CalcReportTest {
         assertEquals(2, d.select("g.point.fails").size());
         assertEquals(2, d.select("circle.point.inside").size());
     }
+
+    @Test
+    void aValueShowsItsSpreadAndACaseItsRatios() {
+        // F = 0.6 kg/m · V²: 240 N ± 24 N at V = 20 ± 1 m/s (2 · 5 %); doubled V, four times F.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("t.plumb"), """
+            input V = 20 m/s ± 1 m/s
+            F = 0.6 kg/m * V^2 in N
+            case doubled: V = 2 * V
+            """);
+        Document page = report(a);
+        assertEquals("F = 240 N ± 24 N (±10 %) to first order; shares of the variance: V 100 %",
+            page.selectFirst("div.definition#" + page.select("div.definition").last().id() + " p.spread").text());
+        assertEquals(List.of("F", "240 N", "960 N", "×4"), page.select("div.case table.case-table tr").get(2).select("td").eachText());
+    }
 }
