@@ -201,6 +201,11 @@ final class SweepRunner {
         if (unit == null) unit = swept.display() != null ? swept.display() : DisplayUnits.defaultFor(from.dimension());
         double a = from.si();
         double b = to.si();
+        if (a == b) {
+            invalid(range, "the sweep's ends are the same value, " + Shown.value(from, unit, digits) + ": give two different "
+                + "ends, FROM .. TO");
+            return null;
+        }
         List<Double> xs = new ArrayList<>();
         if (step != null) {
             if (!step.dimension().equals(from.dimension())) {
@@ -214,7 +219,7 @@ final class SweepRunner {
                 return null;
             }
             double h = step.si();
-            if (h == 0 || Math.signum(h) != Math.signum(b - a) && a != b) {
+            if (h == 0 || Math.signum(h) != Math.signum(b - a)) {
                 invalid(s.step().span(), h == 0 ? "a step of zero never reaches the end: give a step such as "
                     + "a tenth of the range" : "the step goes away from the end: from " + Shown.value(from, unit, digits)
                     + " to " + Shown.value(to, unit, digits) + " it must be " + (b > a ? "positive" : "negative"));
