@@ -118,7 +118,7 @@ public final class HoverText {
         StringBuilder out = new StringBuilder("**" + name + "**");
         if (!v.known()) return out.append(" — not computed (see the problems reported)").toString();
         Row.ValueRow row = rowOf(a, name, b);
-        out.append(" = ").append(row != null ? ValueText.of(a, row) : QuantityFormat.format(v.si(),
+        out.append(" = ").append(row != null ? ValueText.of(a, row) + ValueText.spread(row) : QuantityFormat.format(v.si(),
             b.display() != null ? b.display() : DisplayUnits.defaultFor(v.dimension()), 4));
         out.append("\n\n").append(v.dimension().isDimensionless() ? "a dimensionless number"
             : v.dimension().describe() + "; in SI " + QuantityFormat.format(v.si(), DisplayUnits.defaultFor(v.dimension()), 6));
@@ -135,8 +135,8 @@ public final class HoverText {
             }
         }
         if (row != null && row.spread() != null) {
-            out.append("\n\n").append(ValueText.spread(row).strip()).append(" to first order; shares of the variance: ")
-                .append(ValueText.shares(row.spread()));
+            out.append("\n\nspread to first order; shares of its variance: ").append(ValueText.shares(row.spread()));
+            if (row.spread().sampled() != null) out.append("\n\n").append(ValueText.sampled(row));
         }
         if (row != null && row.modelForm() != null) out.append("\n\n").append(ValueText.modelForm(row));
         if (row != null && row.solution() != null) {

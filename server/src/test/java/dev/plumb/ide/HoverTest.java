@@ -55,6 +55,13 @@ class HoverTest {
     }
 
     @Test
+    void aValueShowsItsSpreadAndTheSharesOfItsSources() {
+        // F = Cd · 0.6 kg/m · V²: (uF/F)² = (2 · 1/20)² + 0.05² → ±11 %; shares 0.01/0.0125 and 0.0025/0.0125.
+        contains(hover("input V = 20 m/s ± 1 m/s\ninput Cd = 1 ± 5 %\nF$0 = Cd * 0.6 kg/m * V^2 in N\n"),
+            "**F** = 240 N ± 27 N (±11 %)", "shares of its variance: V 80 %, Cd 20 %");
+    }
+
+    @Test
     void anUnknownValueSaysItWasNotComputed() {
         contains(hover("x = 1 m + 1 s\ny = x$0 * 2\n"), "not computed");
     }
