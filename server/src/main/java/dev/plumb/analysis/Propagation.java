@@ -134,8 +134,9 @@ final class Propagation {
         if (percent) return Math.abs(nominal.si()) * t.si();
         if (!t.dimension().equals(nominal.dimension())) {
             reporter.report(Code.UNIT_MISMATCH, amount.span(), "the tolerance is " + t.dimension().describe() + ", but "
-                + name + " is " + nominal.dimension().describe() + ": give it in a unit of " + name
-                + (nominal.dimensionless() ? "" : "") + ", or as a percentage of the value (`± 10 %`)");
+                + name + " is " + nominal.dimension().describe() + (nominal.dimensionless()
+                    ? ": give it as a plain number, or as a percentage of the value (`± 10 %`)"
+                    : ": give it in a unit of " + name + ", or as a percentage of the value (`± 10 %`)"));
             return null;
         }
         if (nominal.dimension().equals(Dimension.TEMPERATURE) && t.point()) {

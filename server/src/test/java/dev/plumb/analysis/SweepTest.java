@@ -178,4 +178,22 @@ class SweepTest {
         assertEquals(101325 / (287.05 * 273.15), s.lines().get(0).results().get(0).si(), 1e-9);
         assertEquals("°C", s.unit().symbol());
     }
+
+    @Test
+    void aSpacingOtherThanLogIsASyntaxErrorThatSaysSo() {
+        Fixture.assertOneFinding("input V = 2 m/s\nF = V * 1 kg/s\nsweep V over 1 m/s .. 3 m/s in 3 lin steps show F\n",
+            Code.SYNTAX_ERROR, dev.plumb.diagnostics.Severity.ERROR, "'lin' is neither");
+    }
+
+    @Test
+    void theWordsOfASweepStayNamesElsewhere() {
+        Analysis a = Fixture.analyze("""
+            over = 2
+            by = 3
+            steps = 4
+            show = 5
+            total = over * by * steps * show
+            """);
+        assertEquals("120", Fixture.shown(a, "total"));
+    }
 }
