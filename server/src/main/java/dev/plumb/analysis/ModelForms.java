@@ -31,19 +31,32 @@ final class ModelForms {
             if (!(callee instanceof Binding.CorrelationBinding || callee instanceof Binding.TableBinding)) continue;
             Binding.ValueBinding here = base.get(d.name().text());
             if (here == null || !here.value().known()) continue;
-            List<Value> args = new ArrayList<>();
-            for (Expr a : call.args()) args.add(quiet.eval(a));
-            if (args.stream().anyMatch(v -> !v.known())) continue;
-            List<ModelForm.Entry> entries = new ArrayList<>();
-            entries.add(new ModelForm.Entry(call.callee().text(), here.value().si()));
-            for (String other : advice.alternatives(callee, args).names()) {
-                Value v = quiet.eval(new Expr.Call(call.span(), new Ident(other, call.callee().span()), call.args()));
-                if (v.known() && Double.isFinite(v.si()) && v.dimension().equals(here.value().dimension())) {
-                    entries.add(new ModelForm.Entry(other, v.si()));
-                }
+            try {
+                budget.nextStatement();
+                ModelForm m = of(call, callee, here, quiet, advice);
+                if (m != null) out.put(d.name().text(), m);
+            } catch (Budget.Exhausted e) {
+                // Only an extra look: a value whose alternatives cost more than a statement may shows none.
+                continue;
             }
-            if (entries.size() > 1) out.put(d.name().text(), ModelForm.of(entries));
         }
         return out;
+    }
+
+    /** The model form at one call: the entry called and each valid alternative there; null with fewer than two. */
+    private static ModelForm of(Expr.Call call, Binding callee, Binding.ValueBinding here, Evaluator quiet,
+                                RangeAdvice advice) {
+        List<Value> args = new ArrayList<>();
+        for (Expr a : call.args()) args.add(quiet.eval(a));
+        if (args.stream().anyMatch(v -> !v.known())) return null;
+        List<ModelForm.Entry> entries = new ArrayList<>();
+        entries.add(new ModelForm.Entry(call.callee().text(), here.value().si()));
+        for (String other : advice.alternatives(callee, args).names()) {
+            Value v = quiet.eval(new Expr.Call(call.span(), new Ident(other, call.callee().span()), call.args()));
+            if (v.known() && Double.isFinite(v.si()) && v.dimension().equals(here.value().dimension())) {
+                entries.add(new ModelForm.Entry(other, v.si()));
+            }
+        }
+        return entries.size() > 1 ? ModelForm.of(entries) : null;
     }
 }
