@@ -41,7 +41,8 @@ PLUMB_JAR lsp' works as well."
 (defconst plumb-mode--keywords
   '("input" "check" "seek" "from" "where" "use" "section" "title" "author"
     "reviewer" "revision" "correlation" "table" "end" "when" "otherwise" "source" "family"
-    "basis" "valid" "domain" "regime" "accuracy" "interpolate" "accept" "at" "transition" "in" "as")
+    "basis" "valid" "domain" "regime" "accuracy" "interpolate" "accept" "at" "transition" "in" "as"
+    "sweep" "over" "by" "steps" "log" "show" "case" "with" "spread")
   "Statement and clause words of the Plumb language.")
 
 (defvar plumb-mode-font-lock-keywords

@@ -21,11 +21,16 @@ tokens { NARRATIVE }
     /**
      * Words that end an expression; after a number they are keywords, not units. `so`, `within`
      * and `guess` belong to the solve statement's former spelling, still read so that its error
-     * can show the new one; `over`, `rates`, `until`, `every` and `draw` are the motion statement's.
+     * can show the new one; `over`, `rates`, `until`, `every` and `draw` are the motion statement's;
+     * `by`, `steps`, `log` and `show` belong to a sweep's head (`sweep V over 10 .. 40 by 5`,
+     * `in 7 log steps`), `with` to a check held with its spread.
      */
     private static final java.util.Set<String> CLAUSE_WORDS =
         java.util.Set.of("in", "as", "when", "otherwise", "where", "so", "within", "guess", "over", "rates", "until",
-            "every", "draw");
+            "every", "draw", "by", "steps", "log", "show", "with");
+
+    /** The words of a sweep's head, never units: `in 7 log steps`. */
+    private static final java.util.Set<String> SWEEP_WORDS = java.util.Set.of("by", "steps", "log", "show");
 
     /**
      * Where the current line stands in a solve statement's head `seek NAME in`: 0 elsewhere, 1
@@ -36,6 +41,8 @@ tokens { NARRATIVE }
     private int seekHead = 0;
     /** Whether no token but blanks and comments has been read on the current line yet. */
     private boolean lineStart = true;
+    /** Whether the current statement is an `input`: there `+-` is a tolerance (`31 m/s +- 2 m/s`), not `+ -`. */
+    private boolean inputLine = false;
 
     @Override
     public Token nextToken() {
@@ -44,9 +51,13 @@ tokens { NARRATIVE }
         if (type == NEWLINE) {
             // An indented line may continue the statement: the head carries on across it.
             boolean continues = t.getText().endsWith(" ") || t.getText().endsWith("\t");
-            if (!continues) seekHead = 0;
+            if (!continues) {
+                seekHead = 0;
+                inputLine = false;
+            }
             lineStart = true;
         } else if (t.getChannel() == Token.DEFAULT_CHANNEL && type != COMMENT) {
+            if (type == INPUT && lineStart) inputLine = true;
             if (type == SEEK && lineStart) seekHead = 1;
             else if (seekHead == 1 && (type == IDENT || type >= TITLE && type <= INTERPOLATE)) seekHead = 2;
             else if (seekHead == 2 && type == COMMA) seekHead = 1;   // `seek U, a in …`: another unknown
@@ -105,11 +116,14 @@ tokens { NARRATIVE }
             boolean standsAlone = !isUnitChar(next) && next != '(';
             if (standsAlone) {
                 // `5 in in mm`: the first `in` is inches, the second the keyword.
-                if (CLAUSE_WORDS.contains(wordAt(skipBlanks(after)))) standsAlone = false;
+                if (CLAUSE_WORDS.contains(wordAt(skipBlanks(after))) && !SWEEP_WORDS.contains(word)) standsAlone = false;
             }
             if (standsAlone) {
+                // `40 in 7 steps`: inches are never followed by a number, so `in` is the keyword there.
+                int following = _input.LA(skipBlanks(after));
                 boolean keyword = !word.equals("in") && !word.equals("as")
-                    || isUnitStart(_input.LA(skipBlanks(after))) && skipBlanks(after) > after;
+                    || isUnitStart(following) && skipBlanks(after) > after
+                    || word.equals("in") && following >= '0' && following <= '9';
                 if (keyword) return;
             }
         }
@@ -172,6 +186,13 @@ RATES       : 'rates';
 UNTIL       : 'until';
 EVERY       : 'every';
 DRAW        : 'draw';
+SWEEP       : 'sweep';
+BY          : 'by';
+STEPS       : 'steps';
+SHOW        : 'show';
+CASE        : 'case';
+WITH        : 'with';
+SPREAD      : 'spread';
 INTERPOLATE : 'interpolate';
 IN          : 'in' { unitAfterKeyword(); };
 AS          : 'as';
@@ -183,6 +204,7 @@ IDENT  : [\p{L}_] [\p{L}\p{Nd}_]*;
 STRING              : '"' ( '\\' ~[\r\n] | ~["\\\r\n] )* '"';
 UNTERMINATED_STRING : '"' ( '\\' ~[\r\n] | ~["\\\r\n] )*;
 
+PLUSMINUS : '±' | '+-' {inputLine}?;
 PLUS    : '+';
 MINUS   : '-' | '−';
 STAR    : '*' | '·' | '×' | '⋅';

@@ -30,6 +30,8 @@ statement
     | oldSolve
     | accept
     | transition
+    | sweep
+    | caseDef
     | correlationHead
     | tableHead
     | blockLine
@@ -39,7 +41,9 @@ header      : key=( TITLE | AUTHOR | REVIEWER | REVISION ) STRING;
 narrative   : NARRATIVE;
 section     : SECTION STRING;
 useFile     : USE STRING;
-input       : INPUT name ASSIGN expr tail;
+input       : INPUT name ASSIGN expr tolerance? tail;
+/** How far an input may lie from its value: `± 2 m/s`, `+- 2 m/s`, `± 10 %` (a percentage of the value). */
+tolerance   : PLUSMINUS expr;
 definition  : name ASSIGN value tail;
 functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN value note?;
 /**
@@ -50,7 +54,8 @@ functionDef : name LPAREN ( name ( COMMA name )* )? RPAREN ASSIGN value note?;
 value       : expr ( WHEN condition ( ( OTHERWISE | ASSIGN ) expr WHEN condition )*
                      ( OTHERWISE expr | ASSIGN expr OTHERWISE )? )?;
 condition   : expr ( comparator expr )+;
-check       : CHECK expr ( comparator expr )+ note?;
+/** `with spread`: the check must hold at the sides' bounds (each value moved by its spread the unfavourable way). */
+check       : CHECK expr ( comparator expr )+ ( WITH SPREAD )? note?;
 seek        : SEEK name ( IN expr DOTDOT expr | FROM expr ) WHERE expr ASSIGN expr tail;
 /**
  * Several unknowns at once: `seek U, a from 2 m/s, 10 deg where D = T_x, L = W - T_y`, or a
@@ -76,6 +81,17 @@ equation    : expr ASSIGN expr;
 accept      : ACCEPT findingCode AT name note?;
 /** Where the boundary layer turns from laminar to turbulent in this calc: `transition Re = 3e5 "why"`. */
 transition  : TRANSITION name ASSIGN NUMBER note?;
+/**
+ * A study that varies one value over a range and tabulates results: `sweep V over 10 m/s .. 40 m/s
+ * by 5 m/s show F_D in kN, Re` (the `show` part usually on an indented line); `in 7 steps` gives
+ * seven values from end to end, `in 7 log steps` spaces them evenly in the logarithm (the word
+ * before `steps` must be `log`, which the engine checks).
+ */
+sweep       : SWEEP varied=name OVER expr DOTDOT expr ( BY expr | IN NUMBER spacing=name? STEPS ) SHOW shown ( COMMA shown )* note?;
+shown       : name ( IN UNIT )?;
+/** A named variation of the calc: `case storm: V = 45 m/s, T = -10 degC` (right sides see the base values). */
+caseDef     : CASE label=name COLON setting ( COMMA setting )* note?;
+setting     : name ASSIGN expr;
 /** A diagnostic code as written, `range.outside`, `math.division-by-zero`. */
 findingCode : name ( DOT name | MINUS name )*;
 /** The solve statement's former spelling: read only to say how it is written now. */
@@ -128,5 +144,6 @@ name
     : IDENT | TITLE | AUTHOR | REVIEWER | REVISION | SECTION | INPUT | CHECK | USE | SEEK | FROM | WHERE | FIND
     | WITHIN | GUESS | SO | THAT | CORRELATION | TABLE | END | WHEN | OTHERWISE
     | SOURCE | FAMILY | BASIS | VALID | REGIME | ACCURACY | INTERPOLATE
-    | DOMAIN | ACCEPT | AT | TRANSITION | EVOLVE | OVER | RATES | UNTIL | EVERY | DRAW
+    | DOMAIN | ACCEPT | AT | TRANSITION | EVOLVE | OVER | RATES | UNTIL | EVERY | DRAW | SWEEP | BY | STEPS | SHOW
+    | CASE | WITH | SPREAD
     ;

@@ -71,6 +71,16 @@ final class Analyzer {
         for (Statement s : statements) {
             if (s instanceof Statement.Check c) checkRows.put(c, checks.withinBudget(c));
         }
+        Map<Statement.Check, Row.CheckRow> checksInOrder = new LinkedHashMap<>();
+        for (Statement s : statements) {
+            if (s instanceof Statement.Check c) checksInOrder.put(c, (Row.CheckRow) checkRows.get(c));
+        }
+        StudyRun study = new StudyRun(plan, scope, evaluated.values(), resolved.uses(), checksInOrder, text, settings, units,
+            budget);
+        Map<Statement, Row> studyRows = Studies.run(statements, study, declared.own(), scope, reporter, text, units,
+            budget, settings.significantFigures(), file);
+        Map<String, Spread> spreads = Studies.spreads(statements, study, plan, scope, reporter, text, units, budget, settings,
+            checkRows);
         UnusedInputs.report(resolved.used(), statements, declared.all(), text, reporter);
         UnitNameClash.report(statements, name -> declared.own().containsKey(name)
             ? evaluated.values().get(name) : null, scope, units, reporter);
@@ -80,7 +90,15 @@ final class Analyzer {
             Binding.ValueBinding v = evaluated.values().get(name);
             if (v != null) scope.put(name, v);
         }
-        List<Row> inOrder = rowsInOrder(statements, evaluated.rows(), checkRows);
+        Map<Statement, Row> shown = new java.util.IdentityHashMap<>(evaluated.rows());
+        shown.putAll(studyRows);
+        shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && spreads.containsKey(v.name())
+            && declared.own().get(v.name()) == st ? v.withSpread(spreads.get(v.name())) : row);
+        Map<String, ModelForm> modelForms = ModelForms.of(statements, declared.own(), evaluated.values(), scope, text, units,
+            budget);
+        shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && modelForms.containsKey(v.name())
+            && declared.own().get(v.name()) == st ? v.withModelForm(modelForms.get(v.name())) : row);
+        List<Row> inOrder = rowsInOrder(statements, shown, checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));
         Map<String, String> headers = headers(statements);

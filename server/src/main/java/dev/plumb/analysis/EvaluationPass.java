@@ -33,7 +33,7 @@ final class EvaluationPass {
     private final Budget budget;
     /** Set once the run's time is up: what is left is not evaluated (one finding said so). */
     private boolean outOfTime;
-    private final Map<Statement, Row> rows = new IdentityHashMap<>();
+    private final Map<Statement, Row> rows;
     /** The run before this one, when its values may be taken over (else {@link ReusableValues#NONE}). */
     private ReusableValues earlier = ReusableValues.NONE;
     /** For each own name, the own names its statement uses. */
@@ -49,6 +49,8 @@ final class EvaluationPass {
         this.reporter = reporter;
         this.units = units;
         this.budget = budget;
+        // Sized for every statement at once: a study makes a pass per row.
+        this.rows = new IdentityHashMap<>(plan.own().size());
     }
 
     /**
@@ -121,6 +123,33 @@ final class EvaluationPass {
         rows.put(d, new Row.ValueRow(d.span(), d.name().text(), d.input(), bound.value(), bound.basis(), d.note(),
             bound.origin(), null, bound.display(), d));
         return bound;
+    }
+
+    /**
+     * The run again for a study: over {@code base} (the real run's values), with {@code overrides}
+     * bound in place of their definitions (shown as those were) and only the names in {@code which}
+     * evaluated again, in plan order; the rest keep their base values. Solve statements among
+     * them are solved again. Rows are made for what was evaluated again.
+     */
+    Evaluated rerun(Environment base, Map<String, Value> overrides, java.util.Set<String> which) {
+        Environment.Builder values = new Environment.Builder(base);
+        for (String name : plan.order()) {
+            Value given = overrides.get(name);
+            if (given != null) {
+                Binding.ValueBinding was = base.get(name);
+                values.put(name, was == null ? plan.definitions().bare(given) : new Binding.ValueBinding(was.file(),
+                    was.span(), given, was.display(), was.basis(), was.input(), was.origin(), was.note()));
+            } else if (which.contains(name)) {
+                Binding.ValueBinding bound = withinBudget(plan.own().get(name), values.now(), plan.inCycle().contains(name));
+                if (bound != null) values.put(name, bound);
+            }
+        }
+        return new Evaluated(values.build(), rows, Map.of(), 0);
+    }
+
+    /** Whether the run's time ran out during this pass (what was left is unknown for that reason alone). */
+    boolean outOfTime() {
+        return outOfTime;
     }
 
     /** A statement's evaluation, cut short with one finding when it takes more than its budget. */

@@ -74,9 +74,6 @@ final class HandConversions {
         near("16.01846", "1 lb/ft³ = 16.02 kg/m³", "kg/m^3", "lb/ft^3", DENSITY),
         near("0.06242796", "1 kg/m³ = 0.06243 lb/ft³", "lb/ft^3", "kg/m^3", DENSITY));
 
-    /** The factors' values as doubles, in the order of {@link #FACTORS}, for {@link #nearAny}. */
-    private static final List<Double> APPROX = FACTORS.stream().map(f -> f.value().doubleValue()).toList();
-
     private final Reporter reporter;
     private final String text;
     private final BiFunction<Expr, Value, String> operand;
@@ -127,7 +124,9 @@ final class HandConversions {
      * least three significant digits unless it is the exact factor (3.6 and 12, not 2.2).
      */
     static Factor match(String numberText, Dimension kind, boolean divide) {
-        if (!nearAny(numberText, kind)) return null;
+        // Most products are of a kind no factor has: answered without reading the number.
+        List<Factor> ofKind = BY_KIND.get(kind);
+        if (ofKind == null || !nearAny(numberText, ofKind)) return null;
         BigDecimal x;
         try {
             x = new BigDecimal(numberText);
@@ -136,8 +135,8 @@ final class HandConversions {
         }
         if (x.signum() <= 0) return null;
         BigDecimal halfUnit = BigDecimal.valueOf(5, x.scale() + 1);
-        for (Factor f : FACTORS) {
-            if (!f.kind().equals(kind) || (f.divideOnly() && !divide)) continue;
+        for (Factor f : ofKind) {
+            if (f.divideOnly() && !divide) continue;
             boolean same = f.exact() && x.compareTo(f.value()) == 0;
             boolean rounded = x.stripTrailingZeros().precision() >= 3
                 && x.subtract(f.value()).abs().compareTo(halfUnit) <= 0;
@@ -147,22 +146,32 @@ final class HandConversions {
     }
 
     /**
-     * A cheap first look, since nearly every product in a calc is no conversion: the rule above
+     * A cheap second look, since nearly every product in a calc is no conversion: the rule above
      * admits a number within half a unit of its third significant digit (0.5 %) of a factor of
      * its kind, so one more than 1 % from all of them matches none.
      */
-    private static boolean nearAny(String numberText, Dimension kind) {
+    private static boolean nearAny(String numberText, List<Factor> ofKind) {
         double x;
         try {
             x = Double.parseDouble(numberText);
         } catch (NumberFormatException e) {
             return true;
         }
-        for (int i = 0; i < FACTORS.size(); i++) {
-            double f = APPROX.get(i);
-            if (Math.abs(x - f) <= 0.01 * f && FACTORS.get(i).kind().equals(kind)) return true;
+        for (Factor f : ofKind) {
+            double v = f.value().doubleValue();
+            if (Math.abs(x - v) <= 0.01 * v) return true;
         }
         return false;
+    }
+
+    /** The factors by the kind of value they convert, in the order of {@link #FACTORS}; read-only. */
+    private static final java.util.Map<Dimension, List<Factor>> BY_KIND = byKind();
+
+    private static java.util.Map<Dimension, List<Factor>> byKind() {
+        java.util.Map<Dimension, List<Factor>> out = new java.util.HashMap<>();
+        for (Factor f : FACTORS) out.computeIfAbsent(f.kind(), k -> new java.util.ArrayList<>()).add(f);
+        out.replaceAll((k, v) -> List.copyOf(v));
+        return java.util.Map.copyOf(out);
     }
 
     private static Factor whole(String value, String words, String times, String over, Dimension kind) {

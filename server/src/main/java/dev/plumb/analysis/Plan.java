@@ -10,8 +10,10 @@ import java.util.Set;
 /**
  * A document compiled for evaluation, immutable: its own definitions in dependency order, those
  * that lie on a circle, and for each solve statement the definitions re-evaluated with every
- * trial value. {@link #evaluate} is the one way to evaluate definitions: the real run, a
- * solver's trials (and later sweeps, cases and samples) all go through it.
+ * trial value. {@link #evaluate} is the one way to evaluate definitions: the real run and a
+ * solver's trials go through it; the studies (sweeps, cases, the tolerances' runs and Monte Carlo
+ * samples) go through {@link StudyRun}, whose {@link EvaluationPass#rerun} evaluates each
+ * definition with the same {@link Definitions} and solves each solve statement again.
  *
  * @param order every own name, each after what it uses (circles broken where Plumb had to)
  * @param inCycle the names on a circle of definitions: their values are unknown

@@ -67,6 +67,7 @@ final class ResolutionPass {
             Set<String> params = new HashSet<>();
             List<Expr> exprs = new ArrayList<>();
             collect(s, exprs, params);
+            named(s);
             for (Expr e : exprs) {
                 References.each(e, (n, span) -> {
                     // The unknown a solve statement solves for is used in its own equation: a
@@ -112,13 +113,40 @@ final class ResolutionPass {
             // A motion's states take their values from its time's statement, which integrates it.
             if (s instanceof Statement.Evolve k && k.index() > 0 && own.get(nameOf(s)) == s) deps.add(Motions.leader(k));
         }
+        // A study names its value before its formulas and its results after: keep the table in source order.
+        references.sort(java.util.Comparator.comparingInt(r -> r.span().start()));
         return new Resolution(uses, references, used, importedUses);
+    }
+
+    /**
+     * The names a study statement names outright (the value a sweep varies and the results it
+     * shows, the values a case sets): used and referenced like a name in a formula, never a dependency.
+     */
+    private void named(Statement s) {
+        List<Ident> names = new ArrayList<>();
+        if (s instanceof Statement.Sweep w) {
+            names.add(w.name());
+            w.shown().forEach(x -> names.add(x.name()));
+        }
+        if (s instanceof Statement.Case c) c.settings().forEach(x -> names.add(x.name()));
+        for (Ident n : names) {
+            used.add(n.text());
+            references.add(new Analysis.Reference(n.text(), n.span()));
+            if (own.containsKey(n.text())) continue;
+            Binding b = scope.lookup(n.text());
+            if (b == null) unknownName(n.text(), n.span(), "");
+            else if (b.file() != null) importedUses.computeIfAbsent(b.file(), k -> new HashSet<>()).add(n.text());
+        }
     }
 
     /** The expressions of a statement, and the names that are its own parameters there. */
     private void collect(Statement s, List<Expr> exprs, Set<String> params) {
-        if (s instanceof Statement.Definition d) exprs.add(d.expr());
+        if (s instanceof Statement.Definition d) {
+            exprs.add(d.expr());
+            if (d.tolerance() != null) exprs.add(d.tolerance().amount());
+        }
         if (s instanceof Statement.Check c) exprs.addAll(c.operands());
+        if (s instanceof Statement.Sweep || s instanceof Statement.Case) exprs.addAll(dev.plumb.syntax.ExprWalk.of(s));
         if (s instanceof Statement.Function f) {
             exprs.add(f.body());
             f.params().forEach(p -> params.add(p.text()));

@@ -40,6 +40,22 @@ final class EvalCommand implements Callable<Integer> {
             + "instead of the values")
     String trajectory;
 
+    @picocli.CommandLine.Option(names = "--sweep", paramLabel = "NAME",
+        description = "with --format csv: write the table of the sweep that varies NAME instead of the values")
+    String sweep;
+
+    @picocli.CommandLine.Option(names = "--sensitivity", paramLabel = "NAME",
+        description = "list under NAME each tolerance's and stated accuracy's share of its variance, largest first")
+    String sensitivity;
+
+    @picocli.CommandLine.Option(names = "--monte-carlo", paramLabel = "N",
+        description = "also estimate every spread from N Monte Carlo samples of the tolerances (at most 1000000)")
+    int samples;
+
+    @picocli.CommandLine.Option(names = "--seed", paramLabel = "SEED", defaultValue = "20261202",
+        description = "the Monte Carlo samples' random seed (default: ${DEFAULT-VALUE}, the same samples every run)")
+    long seed;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -54,6 +70,10 @@ final class EvalCommand implements Callable<Integer> {
                     file.toString()) + "` for every calc below it");
             return Main.USAGE;
         }
+        if (sweep != null && format != Format.csv) {
+            err.println("plumb: --sweep NAME writes one sweep's table as CSV: add --format csv (text and json show every sweep)");
+            return Main.USAGE;
+        }
         if (!Files.isRegularFile(file)) {
             err.println("plumb: no such file: " + dev.plumb.diagnostics.Printable.line(file.toString()));
             return Main.USAGE;
@@ -63,7 +83,15 @@ final class EvalCommand implements Callable<Integer> {
                 + "motion's table already");
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(common.sources(), common.settings());
+        if (trajectory != null && sweep != null) {
+            err.println("plumb: --trajectory and --sweep each choose the one table --format csv writes: give one of them");
+            return Main.USAGE;
+        }
+        if (samples < 0 || samples > dev.plumb.analysis.Settings.MAX_SAMPLES) {
+            err.println("plumb: --monte-carlo takes 0 to " + dev.plumb.analysis.Settings.MAX_SAMPLES + " samples, not " + samples);
+            return Main.USAGE;
+        }
+        Workspace workspace = new Workspace(common.sources(), common.settings().withSamples(samples, seed));
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();
@@ -82,13 +110,19 @@ final class EvalCommand implements Callable<Integer> {
                     return Main.USAGE;
                 }
                 ValueExport.csvTrajectory(t, plain);
+            } else if (sweep != null) {
+                if (!ValueExport.sweepCsv(a, sweep, plain)) {
+                    err.println("plumb: " + dev.plumb.diagnostics.Printable.line(file.toString()) + " has no sweep of "
+                        + dev.plumb.diagnostics.Printable.line(sweep) + ": name the value a `sweep` line varies");
+                    return Main.USAGE;
+                }
             } else {
                 ValueExport.csv(a, plain);
             }
             plain.flush();
             return TextReport.Tally.of(results).exitCode(false);
         }
-        EvalReport.write(a, out, style, steps);
+        EvalReport.write(a, out, style, steps, sensitivity);
         if (!checked.diagnostics().isEmpty()) {
             out.println();
             out.println(style.bold("Findings"));

@@ -3,6 +3,8 @@ package dev.plumb.cli;
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CheckText;
 import dev.plumb.present.CallText;
+import dev.plumb.present.SweepText;
+import dev.plumb.present.CaseText;
 import dev.plumb.present.UsedValues;
 import dev.plumb.diagnostics.Printable;
 import dev.plumb.analysis.Analysis;
@@ -27,6 +29,11 @@ final class EvalReport {
     }
 
     static void write(Analysis a, PrintWriter out, Style style, boolean steps) {
+        write(a, out, style, steps, null);
+    }
+
+    /** @param sensitivity the value whose sources' shares of its variance to list under it, or null */
+    static void write(Analysis a, PrintWriter out, Style style, boolean steps, String sensitivity) {
         // The calc's own text is neutralised before colours are added (NeutralWriter keeps those).
         String title = Printable.line(a.headers().getOrDefault("title", Location.path(a.file())));
         out.println(style.bold(title));
@@ -40,7 +47,7 @@ final class EvalReport {
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v) {
                 nameWidth = Math.max(nameWidth, width(v.name()));
-                valueWidth = Math.max(valueWidth, width(ValueText.of(a, v)));
+                valueWidth = Math.max(valueWidth, width(ValueText.of(a, v) + ValueText.spread(v)));
             }
         }
         for (Used u : used) {
@@ -73,8 +80,15 @@ final class EvalReport {
             } else if (r instanceof Row.ValueRow v) {
                 String note = v.note() == null ? "" : "  " + v.note();
                 String basis = tag(v) + used(a, v);
-                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v), valueWidth) + basis + solved(v)
-                    + evolved(a, v) + note).stripTrailing());
+                out.println(Printable.line("  " + pad(v.name(), nameWidth) + " = " + pad(ValueText.of(a, v) + ValueText.spread(v),
+                    valueWidth) + basis + solved(v) + evolved(a, v) + note).stripTrailing());
+                if (v.modelForm() != null) out.println(Printable.line("      " + ValueText.modelForm(v)));
+                if (v.spread() != null && v.spread().sampled() != null) {
+                    out.println(Printable.line("      " + ValueText.sampled(v)));
+                }
+                if (v.spread() != null && v.name().equals(sensitivity)) {
+                    out.println(Printable.line("      shares of the variance: " + ValueText.shares(v.spread())));
+                }
                 if (steps && v.solution() != null) writeSteps(out, v.solution(), v);
                 if (v.statement() instanceof Statement.Evolve k && k.index() == 0 && a.trajectory(v.name()) != null) {
                     writeTrajectory(out, a.trajectory(v.name()), a.settings().significantFigures());
@@ -82,9 +96,23 @@ final class EvalReport {
             } else if (r instanceof Row.FunctionRow f) {
                 out.println(Printable.line("  " + f.signature() + "  (" + f.kind().word() + ")" + (f.note() == null ? "" : "  " + f.note())));
             } else if (r instanceof Row.CheckRow c) {
-                String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass") : style.bad("✗ FAIL");
+                String mark = c.passed() == null ? style.bad("? not evaluated") : c.passed() ? style.good("✓ pass")
+                    : c.verdict() == Row.Verdict.FAILS_AT_BOUND ? style.bad("✗ FAIL at its bound") : style.bad("✗ FAIL");
                 String why = c.note() == null ? "" : "  " + c.note();
                 out.println("  " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]" + why));
+            } else if (r instanceof Row.CaseRow k) {
+                int digits = a.settings().significantFigures();
+                out.println(Printable.line("  " + CaseText.title(k, digits)));
+                for (String line : CaseText.lines(k, digits)) out.println(Printable.line("      " + line));
+                for (Row.CheckRow c : k.checks()) {
+                    String mark = c.passed() == null ? style.bad("?") : c.passed() ? style.good("✓") : style.bad("✗ FAIL");
+                    out.println("      " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]"));
+                }
+            } else if (r instanceof Row.SweepRow w) {
+                out.println(Printable.line("  " + SweepText.title(w)));
+                for (String line : SweepText.table(w, a.settings().significantFigures())) {
+                    out.println(Printable.line("      " + line));
+                }
             }
         }
     }

@@ -56,7 +56,17 @@ public enum Code {
     LIMIT_BUDGET("limit.budget", Severity.ERROR),
     LIMIT_MEMORY("limit.memory", Severity.ERROR),
     ACCEPT_INVALID("accept.invalid", Severity.ERROR),
-    ACCEPT_STALE("accept.stale", Severity.WARNING);
+    ACCEPT_STALE("accept.stale", Severity.WARNING),
+    SWEEP_INVALID("sweep.invalid", Severity.ERROR),
+    SWEEP_RANGE("sweep.range", Severity.WARNING),
+    SWEEP_CHECK_FAILED("sweep.check-failed", Severity.WARNING),
+    SWEEP_ROW_FINDINGS("sweep.row-findings", Severity.WARNING),
+    CASE_INVALID("case.invalid", Severity.ERROR),
+    CASE_NO_CHANGE("case.no-change", Severity.WARNING),
+    TOLERANCE_INVALID("tolerance.invalid", Severity.ERROR),
+    TOLERANCE_NOT_PROPAGATED("tolerance.not-propagated", Severity.WARNING),
+    CHECK_FAILS_AT_BOUND("check.fails-at-bound", Severity.ERROR),
+    TOLERANCE_SAMPLES_FAILED("tolerance.samples-failed", Severity.WARNING);
 
     private final String id;
     private final Severity severity;

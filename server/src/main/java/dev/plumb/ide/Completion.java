@@ -16,7 +16,7 @@ import java.util.TreeSet;
 public final class Completion {
     public static final int LIMIT = 200;
     private static final List<String> STATEMENT_WORDS = List.of("input", "check", "section", "use", "seek", "correlation",
-        "table", "title", "author", "reviewer", "revision", "accept", "transition");
+        "table", "title", "author", "reviewer", "revision", "accept", "transition", "sweep", "case");
     /** The words `as` takes, with what each says. */
     private static final List<String[]> TAGS = List.of(
         new String[] {"frontal", "area: projected on a plane normal to the flow"},

@@ -2,6 +2,8 @@ package dev.plumb.ide;
 
 import dev.plumb.present.ValueText;
 import dev.plumb.present.CallText;
+import dev.plumb.present.SweepText;
+import dev.plumb.present.CaseText;
 import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Binding;
 import dev.plumb.analysis.Row;
@@ -32,6 +34,12 @@ public final class HoverText {
 
     private static String markdown(Analysis a, int offset) {
         String name = Occurrences.nameAt(a, offset);
+        Row.SweepRow sweep = sweepAt(a, offset);
+        // Over a sweep, its word or the value it varies shows its table; a result it shows reads as everywhere.
+        if (sweep != null && (name == null || name.equals(sweep.varied()))) return sweepTable(a, sweep);
+        Row.CaseRow variation = caseAt(a, offset);
+        // Over a case's word or its name, the case beside the base; a value it sets reads as everywhere.
+        if (variation != null && name == null) return caseTable(a, variation);
         if (name == null) return null;
         Binding b = a.scope().lookup(name);
         if (b instanceof Binding.ValueBinding v) return value(a, name, v);
@@ -48,12 +56,69 @@ public final class HoverText {
         return null;
     }
 
+    /** Rows a hover shows of a sweep's table; `plumb eval` and the report show them all. */
+    static final int SWEEP_ROWS_SHOWN = 40;
+
+    private static Row.SweepRow sweepAt(Analysis a, int offset) {
+        for (Row r : a.rows()) {
+            if (r instanceof Row.SweepRow w && offset >= w.span().start() && offset <= w.span().end()) return w;
+        }
+        return null;
+    }
+
+    private static Row.CaseRow caseAt(Analysis a, int offset) {
+        for (Row r : a.rows()) {
+            if (r instanceof Row.CaseRow c && offset >= c.span().start() && offset <= c.span().end()) return c;
+        }
+        return null;
+    }
+
+    /** A case as Markdown: what it sets, then each value it changes beside the base, and its checks. */
+    private static String caseTable(Analysis a, Row.CaseRow c) {
+        int digits = a.settings().significantFigures();
+        StringBuilder out = new StringBuilder("**" + CaseText.title(c, digits) + "**\n\n| value | base | this case | ratio |\n"
+            + "| --- | --- | --- | --- |\n");
+        for (Row.CaseValue v : c.changed()) {
+            out.append("| ").append(cell(v.name())).append(" | ").append(cell(ValueText.of(v.base(), v.display(), digits)))
+                .append(" | ").append(cell(ValueText.of(v.value(), v.display(), digits))).append(" | ")
+                .append(CaseText.ratio(v, digits)).append(" |\n");
+        }
+        for (Row.CheckRow k : c.checks()) {
+            out.append("\n").append(dev.plumb.present.CheckText.mark(k)).append(" `check ").append(k.source()).append("` — ")
+                .append(dev.plumb.present.CheckText.detail(k));
+        }
+        return out.toString().stripTrailing();
+    }
+
+    /** The sweep's table as Markdown, its first rows when it has many. */
+    private static String sweepTable(Analysis a, Row.SweepRow w) {
+        StringBuilder out = new StringBuilder("**" + SweepText.title(w) + "**\n\n");
+        List<String> header = SweepText.header(w);
+        out.append("| ").append(String.join(" | ", header.stream().map(HoverText::cell).toList())).append(" |\n|");
+        out.append(" --- |".repeat(header.size())).append('\n');
+        List<dev.plumb.units.Unit> units = SweepText.units(w);
+        int digits = a.settings().significantFigures();
+        for (int i = 0; i < w.lines().size() && i < SWEEP_ROWS_SHOWN; i++) {
+            List<String> cells = SweepText.cells(w, w.lines().get(i), units, digits);
+            out.append("| ").append(String.join(" | ", cells.stream().map(HoverText::cell).toList())).append(" |\n");
+        }
+        if (w.lines().size() > SWEEP_ROWS_SHOWN) {
+            out.append("\n… and ").append(w.lines().size() - SWEEP_ROWS_SHOWN).append(" more rows (plumb eval shows them all)");
+        }
+        return out.toString().stripTrailing();
+    }
+
+    /** A table cell: a bar would end it. */
+    private static String cell(String text) {
+        return text.replace("|", "\\|");
+    }
+
     private static String value(Analysis a, String name, Binding.ValueBinding b) {
         Value v = b.value();
         StringBuilder out = new StringBuilder("**" + name + "**");
         if (!v.known()) return out.append(" — not computed (see the problems reported)").toString();
         Row.ValueRow row = rowOf(a, name, b);
-        out.append(" = ").append(row != null ? ValueText.of(a, row) : QuantityFormat.format(v.si(),
+        out.append(" = ").append(row != null ? ValueText.of(a, row) + ValueText.spread(row) : QuantityFormat.format(v.si(),
             b.display() != null ? b.display() : DisplayUnits.defaultFor(v.dimension()), 4));
         out.append("\n\n").append(v.dimension().isDimensionless() ? "a dimensionless number"
             : v.dimension().describe() + "; in SI " + QuantityFormat.format(v.si(), DisplayUnits.defaultFor(v.dimension()), 6));
@@ -69,6 +134,11 @@ public final class HoverText {
                 out.append(", ±").append(QuantityFormat.number(b.origin().accuracy() * 100, 3)).append(" %");
             }
         }
+        if (row != null && row.spread() != null) {
+            out.append("\n\nspread to first order; shares of its variance: ").append(ValueText.shares(row.spread()));
+            if (row.spread().sampled() != null) out.append("\n\n").append(ValueText.sampled(row));
+        }
+        if (row != null && row.modelForm() != null) out.append("\n\n").append(ValueText.modelForm(row));
         if (row != null && row.statement() instanceof dev.plumb.syntax.Statement.Evolve k && a.trajectory(row.name()) != null) {
             dev.plumb.analysis.Trajectory t = a.trajectory(row.name());
             out.append("\n\n").append(dev.plumb.present.TrajectoryText.summary(t));

@@ -28,7 +28,9 @@ public final class InlayValues {
                 String solved = v.solution() == null ? "" : "  (solved, " + v.solution().iterations() + " iterations)";
                 // The unknowns of one several-unknown solve share its line: each says whose value it is.
                 String lead = v.statement() instanceof dev.plumb.syntax.Statement.SeekSystem ? v.name() + " = " : "= ";
-                out.add(new InlayValue(v.span().end(), lead + ValueText.of(a, v) + solved, v.name()));
+                // The short form of a spread: the relative one, or the absolute one where a relative one says nothing.
+                String spread = ValueText.relative(v).isEmpty() ? ValueText.spread(v) : " " + ValueText.relative(v);
+                out.add(new InlayValue(v.span().end(), lead + ValueText.of(a, v) + spread + solved, v.name()));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "? not evaluated" : CheckText.mark(c) + " " + CheckText.detail(c);
                 out.add(new InlayValue(c.span().end(), mark, "check"));

@@ -4,11 +4,13 @@ import dev.plumb.analysis.Analysis;
 import dev.plumb.analysis.Row;
 import dev.plumb.diagnostics.Span;
 import dev.plumb.present.CheckText;
+import dev.plumb.present.CaseText;
+import dev.plumb.present.ValueText;
 import dev.plumb.syntax.Statement;
 import java.util.ArrayList;
 import java.util.List;
 
-/** The calc's body in its own order: sections, prose, definitions, solved values, functions and checks. */
+/** The calc's body in its own order: sections, prose, definitions, solved values, functions, checks, cases and sweeps. */
 final class CalcBody {
     private CalcBody() {
     }
@@ -59,6 +61,10 @@ final class CalcBody {
                 out.append(function(f));
             } else if (r instanceof Row.CheckRow c) {
                 out.append(check(c));
+            } else if (r instanceof Row.CaseRow k) {
+                out.append(variation(k));
+            } else if (r instanceof Row.SweepRow w) {
+                out.append(SweepPlot.html(w, a.settings().significantFigures()));
             }
         }
 
@@ -90,9 +96,30 @@ final class CalcBody {
             return Html.element("div", "function", head + note);
         }
 
+        /** A case: what it sets, each value it changes beside the base with the ratio, and its checks. */
+        private String variation(Row.CaseRow k) {
+            int digits = a.settings().significantFigures();
+            StringBuilder rows = new StringBuilder("<tr><th>Value</th><th>Base</th><th>This case</th><th>Ratio</th></tr>");
+            for (Row.CaseValue v : k.changed()) {
+                rows.append("<tr>").append(Html.element("td", null, Html.text(v.name())))
+                    .append(Html.element("td", null, Html.text(ValueText.of(v.base(), v.display(), digits))))
+                    .append(Html.element("td", null, Html.text(ValueText.of(v.value(), v.display(), digits))))
+                    .append(Html.element("td", null, Html.text(CaseText.ratio(v, digits)))).append("</tr>");
+            }
+            StringBuilder checks = new StringBuilder();
+            for (Row.CheckRow c : k.checks()) {
+                String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.verdict() == Row.Verdict.FAILED ? "fail" : "unjudged";
+                checks.append(Html.element("p", "case-check " + kind, Html.text(CheckText.mark(c) + " check " + c.source()
+                    + " — " + CheckText.detail(c))));
+            }
+            return Html.element("div", "case", Html.element("p", "case-title", Html.text(CaseText.title(k, digits)))
+                + Html.element("table", "case-table", rows.toString()) + checks);
+        }
+
         private String check(Row.CheckRow c) {
-            String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.verdict() == Row.Verdict.FAILED ? "fail" : "unjudged";
+            String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.passed() == Boolean.FALSE ? "fail" : "unjudged";
             String words = c.verdict() == Row.Verdict.PASSED ? "passes" : c.verdict() == Row.Verdict.FAILED ? "FAILS"
+                : c.verdict() == Row.Verdict.FAILS_AT_BOUND ? "FAILS AT ITS BOUND"
                 : "NOT EVALUATED";
             Statement s = statements.get(c.span());
             String comparison = s instanceof Statement.Check check

@@ -119,20 +119,20 @@ final class CurvePlot {
             + "\" height=\"" + fmt(h) + "\" fill=\"url(#hatch)\" stroke=\"#b8b8b8\" stroke-width=\"0.6\"/>";
     }
 
-    private static String line(double x1, double y1, double x2, double y2) {
+    static String line(double x1, double y1, double x2, double y2) {
         return "<line x1=\"" + fmt(x1) + "\" y1=\"" + fmt(y1) + "\" x2=\"" + fmt(x2) + "\" y2=\"" + fmt(y2)
             + "\" stroke=\"#1b1b1b\" stroke-width=\"0.8\"/>";
     }
 
-    private static String text(double x, double y, String anchor, String words) {
+    static String text(double x, double y, String anchor, String words) {
         return "<text x=\"" + fmt(x) + "\" y=\"" + fmt(y) + "\" text-anchor=\"" + anchor + "\">" + Html.text(words) + "</text>";
     }
 
-    private static String number(double v) {
+    static String number(double v) {
         return QuantityFormat.number(v, 3);
     }
 
-    private static String fmt(double v) {
+    static String fmt(double v) {
         return String.format(Locale.ROOT, "%.1f", v);
     }
 

@@ -56,6 +56,13 @@ final class Definitions {
         if (!v.value().known()) {
             out.append(Html.element("p", "unknown", "Not computed: the findings below say why."));
         }
+        // How far it may lie from its value, and how much the choice of formula matters: apart from the formula.
+        if (v.spread() != null) {
+            out.append(Html.element("p", "spread", Html.text(v.name() + " = " + ValueText.of(a, v) + ValueText.spread(v) + " to first order; shares of "
+                + "the variance: " + ValueText.shares(v.spread()) + (v.spread().sampled() == null ? ""
+                : ". " + ValueText.sampled(v)))));
+        }
+        if (v.modelForm() != null) out.append(Html.element("p", "model-form", Html.text(ValueText.modelForm(v))));
         if (change != null) out.append(Html.element("p", "changed-from", ChangesBlock.mark(change)));
         out.append(meta(a, v, references));
         return out.append("</div>").toString();

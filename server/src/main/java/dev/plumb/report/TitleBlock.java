@@ -48,7 +48,7 @@ final class TitleBlock {
         for (Row r : a.rows()) {
             if (!(r instanceof Row.CheckRow c)) continue;
             if (c.verdict() == Row.Verdict.PASSED) passed++;
-            else if (c.verdict() == Row.Verdict.FAILED) failed++;
+            else if (c.passed() == Boolean.FALSE) failed++;
             else unjudged++;
         }
         int errors = 0;

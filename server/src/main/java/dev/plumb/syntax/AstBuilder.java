@@ -100,7 +100,10 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     @Override
     public Object visitInput(PlumbParser.InputContext ctx) {
-        return definition(ctx, true, ctx.name(), expr(ctx.expr()), ctx.tail());
+        Statement.Definition d = (Statement.Definition) definition(ctx, true, ctx.name(), expr(ctx.expr()), ctx.tail());
+        if (ctx.tolerance() == null) return d;
+        Statement.Tolerance t = new Statement.Tolerance(span(ctx.tolerance()), expr(ctx.tolerance().expr()));
+        return new Statement.Definition(d.span(), true, d.name(), d.expr(), d.displayUnit(), d.basis(), d.note(), t);
     }
 
     @Override
@@ -152,7 +155,7 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
     @Override
     public Object visitCheck(PlumbParser.CheckContext ctx) {
         Statement.Bound chain = bound(ctx, ctx.expr(), ctx.comparator());
-        return new Statement.Check(span(ctx), chain.operands(), chain.comparators(), note(ctx.note()));
+        return new Statement.Check(span(ctx), chain.operands(), chain.comparators(), note(ctx.note()), ctx.WITH() != null);
     }
 
     private Statement.Bound bound(ParserRuleContext ctx, List<PlumbParser.ExprContext> exprs,
@@ -245,6 +248,34 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
         Token n = ctx.NUMBER().getSymbol();
         return new Statement.Transition(span(ctx), ident(ctx.name()), Double.parseDouble(n.getText()), span(n),
             note(ctx.note()));
+    }
+
+    @Override
+    public Object visitSweep(PlumbParser.SweepContext ctx) {
+        List<PlumbParser.ExprContext> e = ctx.expr();
+        Expr step = ctx.BY() != null ? expr(e.get(2)) : null;
+        Integer count = null;
+        Span countSpan = null;
+        if (ctx.NUMBER() != null) {
+            Token n = ctx.NUMBER().getSymbol();
+            countSpan = span(n);
+            double written = Double.parseDouble(n.getText());
+            // A count is a whole number of values; anything else is the engine's to refuse with its words.
+            count = written == Math.rint(written) && written <= Integer.MAX_VALUE ? (int) written : -1;
+        }
+        List<Statement.Shown> shown = new ArrayList<>();
+        for (PlumbParser.ShownContext s : ctx.shown()) {
+            shown.add(new Statement.Shown(ident(s.name()), s.UNIT() == null ? null : unitText(s.UNIT().getSymbol())));
+        }
+        return new Statement.Sweep(span(ctx), ident(ctx.varied), expr(e.get(0)), expr(e.get(1)), step, count, countSpan,
+            ctx.spacing == null ? null : ident(ctx.spacing), shown, note(ctx.note()));
+    }
+
+    @Override
+    public Object visitCaseDef(PlumbParser.CaseDefContext ctx) {
+        List<Statement.Setting> settings = new ArrayList<>();
+        for (PlumbParser.SettingContext s : ctx.setting()) settings.add(new Statement.Setting(ident(s.name()), expr(s.expr())));
+        return new Statement.Case(span(ctx), ident(ctx.label), settings, note(ctx.note()));
     }
 
     /** The former `find … within … so that …`: an error that shows the statement in today's words. */

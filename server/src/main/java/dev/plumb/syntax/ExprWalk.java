@@ -30,10 +30,13 @@ public final class ExprWalk {
         }
     }
 
-    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation. */
+    /** The formulas a statement writes: a definition's, a check's sides, a function's body, a solve's ends and equation, a sweep's range, a case's values. */
     public static List<Expr> of(Statement s) {
         List<Expr> out = new ArrayList<>();
-        if (s instanceof Statement.Definition d) out.add(d.expr());
+        if (s instanceof Statement.Definition d) {
+            out.add(d.expr());
+            if (d.tolerance() != null) out.add(d.tolerance().amount());
+        }
         if (s instanceof Statement.Check c) out.addAll(c.operands());
         if (s instanceof Statement.Function f) out.add(f.body());
         if (s instanceof Statement.Seek k) {
@@ -61,6 +64,10 @@ public final class ExprWalk {
                 out.add(e.rhs());
             }
         }
+        if (s instanceof Statement.Sweep w) {
+            for (Expr e : new Expr[] {w.from(), w.to(), w.step()}) if (e != null) out.add(e);
+        }
+        if (s instanceof Statement.Case c) c.settings().forEach(x -> out.add(x.expr()));
         return out;
     }
 }

@@ -108,6 +108,15 @@ final class LineRecovery extends DefaultErrorStrategy {
                 + previous.getText() + "*m`, not `" + previous.getText() + ".m`)";
         }
         if (t.getType() == PlumbLexer.ERROR_CHAR) return unexpectedCharacter(t);
+        if (t.getType() == PlumbLexer.UNIT && parser.getInputStream().LT(2) != null
+            && parser.getInputStream().LT(2).getType() == PlumbLexer.STEPS) {
+            return "a sweep's steps are even (`in 7 steps`) or even in the logarithm (`in 7 log steps`); '" + t.getText()
+                + "' is neither";
+        }
+        if (t.getType() == PlumbLexer.PLUSMINUS) {
+            return "a tolerance (±) goes only after an input's value, once: write `input NAME = VALUE ± AMOUNT`; a "
+                + "computed value gets its ± from the inputs it uses";
+        }
         if (previous != null && previous.getType() == PlumbLexer.UNIT && TokenWords.isNameToken(t.getType())) {
             return "a unit has no spaces inside: write `" + previous.getText() + "*" + t.getText()
                 + "` for a compound unit, or `" + previous.getText() + " * " + t.getText() + "` to multiply by a value named "

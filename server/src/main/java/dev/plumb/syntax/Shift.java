@@ -98,13 +98,14 @@ final class Shift {
         if (s instanceof Statement.Use u) return new Statement.Use(span(u.span()), u.path(), span(u.pathSpan()));
         if (s instanceof Statement.Definition d) {
             return new Statement.Definition(span(d.span()), d.input(), ident(d.name()), expr(d.expr()),
-                unit(d.displayUnit()), ident(d.basis()), d.note());
+                unit(d.displayUnit()), ident(d.basis()), d.note(), d.tolerance() == null ? null
+                    : new Statement.Tolerance(span(d.tolerance().span()), expr(d.tolerance().amount())));
         }
         if (s instanceof Statement.Function f) {
             return new Statement.Function(span(f.span()), ident(f.name()), idents(f.params()), expr(f.body()), f.note());
         }
         if (s instanceof Statement.Check c) {
-            return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note());
+            return new Statement.Check(span(c.span()), exprs(c.operands()), c.comparators(), c.note(), c.withSpread());
         }
         if (s instanceof Statement.Transition t) {
             return new Statement.Transition(span(t.span()), ident(t.quantity()), t.value(), span(t.valueSpan()), t.note());
@@ -140,6 +141,15 @@ final class Shift {
             return new Statement.Table(span(t.span()), ident(t.name()), param(t.param()), t.title(), t.source(),
                 ident(t.family()), ident(t.basis()), bounds(t.valid()), expr(t.accuracy()), ident(t.interpolate()),
                 columns, rows, ident(t.flow()), bounds(t.domain()));
+        }
+        if (s instanceof Statement.Sweep w) {
+            return new Statement.Sweep(span(w.span()), ident(w.name()), expr(w.from()), expr(w.to()), expr(w.step()),
+                w.count(), span(w.countSpan()), ident(w.spacing()),
+                each(w.shown(), x -> new Statement.Shown(ident(x.name()), unit(x.unit()))), w.note());
+        }
+        if (s instanceof Statement.Case c) {
+            return new Statement.Case(span(c.span()), ident(c.name()),
+                each(c.settings(), x -> new Statement.Setting(ident(x.name()), expr(x.expr()))), c.note());
         }
         if (s instanceof Statement.Accept a) {
             return new Statement.Accept(span(a.span()), a.code(), span(a.codeSpan()), ident(a.target()), a.reason());

@@ -21,9 +21,20 @@ public sealed interface Statement {
     record Use(Span span, String path, Span pathSpan) implements Statement {
     }
 
-    /** {@code [input] NAME = EXPR [in UNIT] [as BASIS] ["note"]}. */
+    /**
+     * {@code [input] NAME = EXPR [± AMOUNT] [in UNIT] [as BASIS] ["note"]}; {@code tolerance} is null
+     * when none is written (only an input may have one).
+     */
     record Definition(Span span, boolean input, Ident name, Expr expr, UnitText displayUnit,
-                      Ident basis, String note) implements Statement {
+                      Ident basis, String note, Tolerance tolerance) implements Statement {
+        /** A definition without a tolerance. */
+        public Definition(Span span, boolean input, Ident name, Expr expr, UnitText displayUnit, Ident basis, String note) {
+            this(span, input, name, expr, displayUnit, basis, note, null);
+        }
+    }
+
+    /** {@code ± AMOUNT} after an input's value: {@code span} covers the sign and the amount. */
+    record Tolerance(Span span, Expr amount) {
     }
 
     /** {@code NAME(P1, P2) = EXPR ["note"]}. */
@@ -33,11 +44,20 @@ public sealed interface Statement {
         }
     }
 
-    /** {@code check A op B [op C] ["note"]}: operands.size() == comparators.size() + 1. */
-    record Check(Span span, List<Expr> operands, List<Comparator> comparators, String note) implements Statement {
+    /**
+     * {@code check A op B [op C] [with spread] ["note"]}: operands.size() == comparators.size() + 1;
+     * {@code withSpread} asks that it hold at the sides' bounds, their spreads counted against it.
+     */
+    record Check(Span span, List<Expr> operands, List<Comparator> comparators, String note, boolean withSpread)
+        implements Statement {
         public Check {
             operands = List.copyOf(operands);
             comparators = List.copyOf(comparators);
+        }
+
+        /** A check on the values alone. */
+        public Check(Span span, List<Expr> operands, List<Comparator> comparators, String note) {
+            this(span, operands, comparators, note, false);
         }
     }
 
@@ -195,6 +215,37 @@ public sealed interface Statement {
      * otherwise). {@code quantity} is the word written before `=` (it must be Re).
      */
     record Transition(Span span, Ident quantity, double value, Span valueSpan, String note) implements Statement {
+    }
+
+    /**
+     * {@code sweep NAME over FROM .. TO by STEP show A in UNIT, B} (or {@code in N steps}, {@code in
+     * N log steps}): the calc evaluated again for each value of NAME, with the shown results
+     * tabulated. Exactly one of {@code step} and {@code count} is set; {@code spacing} is the word
+     * before {@code steps} (it must be {@code log}), null when none is written.
+     */
+    record Sweep(Span span, Ident name, Expr from, Expr to, Expr step, Integer count, Span countSpan, Ident spacing,
+                 List<Shown> shown, String note) implements Statement {
+        public Sweep {
+            shown = List.copyOf(shown);
+        }
+    }
+
+    /** A result a study shows, with the unit to show it in (null: its own display unit). */
+    record Shown(Ident name, UnitText unit) {
+    }
+
+    /**
+     * {@code case NAME: A = EXPR, B = EXPR ["note"]}: a named variation of the calc, evaluated
+     * again with these values in place of their definitions; the right sides see the base values.
+     */
+    record Case(Span span, Ident name, List<Setting> settings, String note) implements Statement {
+        public Case {
+            settings = List.copyOf(settings);
+        }
+    }
+
+    /** One value a case sets: {@code V = 45 m/s}. */
+    record Setting(Ident name, Expr expr) {
     }
 
     /**

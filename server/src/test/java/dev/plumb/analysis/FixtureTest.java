@@ -88,9 +88,11 @@ class FixtureTest {
     @Test
     void everyCodeOfASingleDocumentHasAFixtureFileNamedAfterIt() {
         // syntax.nesting is generated in SyntaxDiagnosticsTest; files and `use` are in UseTest;
-        // limit.memory needs an exhausted heap, planted in OutOfMemoryTest.
+        // limit.memory needs an exhausted heap, planted in OutOfMemoryTest; tolerance.samples-failed
+        // a run with Monte Carlo samples, in MonteCarloTest.
         Set<Code> elsewhere = Set.of(Code.SYNTAX_NESTING, Code.FILE_NOT_TEXT, Code.FILE_UNREADABLE, Code.USE_NOT_FOUND, Code.USE_CYCLE,
-            Code.USE_OUTSIDE_WORKSPACE, Code.USE_HAS_ERRORS, Code.LIMIT_MEMORY);
+            Code.USE_OUTSIDE_WORKSPACE, Code.USE_HAS_ERRORS, Code.LIMIT_MEMORY,
+            Code.TOLERANCE_SAMPLES_FAILED);
         for (Code code : Code.values()) {
             if (elsewhere.contains(code)) continue;
             List<Fixture.Expected> annotated = Fixture.annotations(Fixture.resource(code.id() + ".plumb"));

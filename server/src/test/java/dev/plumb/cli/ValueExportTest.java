@@ -85,10 +85,10 @@ class ValueExportTest {
         Path calc = Cli.write(dir, "panel.plumb", CALC);
         Cli run = Cli.run("eval", "--format", "csv", calc.toString());
         List<String> rows = run.out().lines().toList();
-        assertEquals("name,line,input,value_si,si_unit,shown,unit,dimension,note", rows.get(0));
+        assertEquals("name,line,input,value_si,si_unit,shown,unit,dimension,note,spread_si,spread", rows.get(0));
         assertEquals(5, rows.size(), run.out());
         // RFC 4180: a cell with a comma or a quote is quoted, its quotes doubled.
-        assertTrue(rows.get(1).endsWith(",\"panel width, drawing \"\"S-01\"\", rev B\""), rows.get(1));
+        assertTrue(rows.get(1).endsWith(",\"panel width, drawing \"\"S-01\"\", rev B\",,"), rows.get(1));
         assertTrue(rows.get(4).startsWith("x,4,false,,,?,"), rows.get(4));
     }
 

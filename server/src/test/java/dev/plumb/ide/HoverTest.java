@@ -37,6 +37,31 @@ class HoverTest {
     }
 
     @Test
+    void aSweepShowsItsTableAndAResultItShowsReadsAsAValue() {
+        // F = 0.6 kg/m · V²: 60 N at 10 m/s, 960 N at 40 m/s (0.96 kN).
+        String calc = "input V = 20 m/s\nF = 0.6 kg/m * V^2 in N\ncheck F <= 400 N\nsw$0eep V over 10 m/s .. 40 m/s by 10 m/s\n"
+            + "    show F in kN\n";
+        contains(hover(calc), "sweep V: 4 rows", "| V [m/s] | F [kN] | checks |", "| 10 | 0.06 | ✓ |",
+            "| 40 | 0.96 | ✗ F <= 400 N |");
+        contains(hover(calc.replace("sw$0eep V", "sweep V$0")), "| V [m/s] |");
+        contains(hover(calc.replace("sw$0eep", "sweep").replace("show F", "show F$0")), "**F** = 240 N");
+    }
+
+    @Test
+    void aCaseShowsItsValuesBesideTheBaseWithTheRatio() {
+        // F = 0.6 kg/m · V²: 240 N → 960 N when V doubles, ×4.
+        String calc = "input V = 20 m/s\nF = 0.6 kg/m * V^2 in N\nca$0se doubled: V = 2 * V\n";
+        contains(hover(calc), "case doubled: V = 40 m/s", "| F | 240 N | 960 N | ×4 |", "| V | 20 m/s | 40 m/s | ×2 |");
+    }
+
+    @Test
+    void aValueShowsItsSpreadAndTheSharesOfItsSources() {
+        // F = Cd · 0.6 kg/m · V²: (uF/F)² = (2 · 1/20)² + 0.05² → ±11 %; shares 0.01/0.0125 and 0.0025/0.0125.
+        contains(hover("input V = 20 m/s ± 1 m/s\ninput Cd = 1 ± 5 %\nF$0 = Cd * 0.6 kg/m * V^2 in N\n"),
+            "**F** = 240 N ± 27 N (±11 %)", "shares of its variance: V 80 %, Cd 20 %");
+    }
+
+    @Test
     void anUnknownValueSaysItWasNotComputed() {
         contains(hover("x = 1 m + 1 s\ny = x$0 * 2\n"), "not computed");
     }

@@ -188,4 +188,43 @@ class CalcReportTest {
         assertTrue(page.text().contains("<script>alert(1)</script>"), "shown as text");
         assertFalse(html.contains("\u202E"), "a direction override is shown as an escape, not obeyed");
     }
+
+    @Test
+    void aSweepIsTabledAndPlottedWithItsFailingAndOutOfRangeRowsMarked() {
+        // Re = V·0.4 m / 1.5e-5 m²/s: 1.3e5 .. 5.3e6 in log steps; the laminar Blasius entry is valid
+        // to 3e6 and laminar to Re_crit 5e5, so rows 3–5 are outside. D = ½ρV²Cf·S: 0.0036, 0.014, 0.052, 0.21, 0.83 N, so a check of 0.1 N fails at rows 4 and 5.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("sw.plumb"), """
+            input V = 5 m/s
+            input L = 0.4 m
+            input nu = 1.5e-5 m^2/s
+            Re = V * L / nu
+            Cf = cf_plate_blasius_avg(Re)
+            D = 0.5 * 1.2 kg/m^3 * V^2 * Cf * 0.06 m^2
+            check D <= 0.1 N
+            sweep V over 5 m/s .. 200 m/s in 5 log steps
+                show D, Cf
+            """);
+        Document page = report(a);
+        assertEquals(1, page.select("div.sweep table.sweep-table").size());
+        assertEquals(6, page.select("div.sweep table.sweep-table tr").size(), "a header and five rows");
+        assertEquals(2, page.select("div.sweep svg.sweep-plot").size(), "one plot per shown result");
+        Element d = page.select("div.sweep svg.sweep-plot").get(0);
+        assertEquals(3, d.select("circle.point.outside").size());
+        assertEquals(2, d.select("g.point.fails").size());
+        assertEquals(2, d.select("circle.point.inside").size());
+    }
+
+    @Test
+    void aValueShowsItsSpreadAndACaseItsRatios() {
+        // F = 0.6 kg/m · V²: 240 N ± 24 N at V = 20 ± 1 m/s (2 · 5 %); doubled V, four times F.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("t.plumb"), """
+            input V = 20 m/s ± 1 m/s
+            F = 0.6 kg/m * V^2 in N
+            case doubled: V = 2 * V
+            """);
+        Document page = report(a);
+        assertEquals("F = 240 N ± 24 N (±10 %) to first order; shares of the variance: V 100 %",
+            page.selectFirst("div.definition#" + page.select("div.definition").last().id() + " p.spread").text());
+        assertEquals(List.of("F", "240 N", "960 N", "×4"), page.select("div.case table.case-table tr").get(2).select("td").eachText());
+    }
 }
