@@ -37,7 +37,11 @@ if defined PLUMB_CODE_PAGE chcp 65001 >nul
 
 rem A 1 GB heap holds any calc the 2 MiB size limit lets through. JVM warnings go to stderr, away
 rem from `plumb lsp`'s protocol stream. JAVA_OPTS comes last, so a user's own options win.
-"%PLUMB_JAVA%" -Xmx1g -Dfile.encoding=UTF-8 -Dstdout.encoding=UTF-8 -Dstderr.encoding=UTF-8 -Dsun.stdout.encoding=UTF-8 -Dsun.stderr.encoding=UTF-8 -Xlog:disable -Xlog:all=warning:stderr %JAVA_OPTS% -jar "%PLUMB_ROOT%\lib\plumb.jar" %*
+rem Every command but `plumb lsp` is over in seconds: Java's quick compiler alone and its simple
+rem collector need about a third less CPU there; the editor's server keeps Java's defaults.
+set "PLUMB_QUICK=-XX:TieredStopAtLevel=1 -XX:+UseSerialGC"
+if /i "%~1"=="lsp" set "PLUMB_QUICK="
+"%PLUMB_JAVA%" -Xmx1g -Dfile.encoding=UTF-8 -Dstdout.encoding=UTF-8 -Dstderr.encoding=UTF-8 -Dsun.stdout.encoding=UTF-8 -Dsun.stderr.encoding=UTF-8 -Xlog:disable -Xlog:all=warning:stderr %PLUMB_QUICK% %JAVA_OPTS% -jar "%PLUMB_ROOT%\lib\plumb.jar" %*
 set "PLUMB_EXIT=%ERRORLEVEL%"
 if defined PLUMB_CODE_PAGE chcp %PLUMB_CODE_PAGE% >nul
 exit /b %PLUMB_EXIT%

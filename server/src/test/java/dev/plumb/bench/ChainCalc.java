@@ -43,7 +43,12 @@ public final class ChainCalc {
 
     /** The cell as a script run on its own: imports pint, makes the registry, prints the last speed. */
     public static String pythonScript(int definitions) {
+        return "import pint\nu = pint.UnitRegistry()\n" + pythonCell(definitions) + "print(" + lastSpeed(definitions) + ")\n";
+    }
+
+    /** The name of the last speed of a chain of {@code definitions} definitions. */
+    public static String lastSpeed(int definitions) {
         int n = definitions % 10 == 0 ? definitions - 1 : definitions;
-        return "import pint\nu = pint.UnitRegistry()\n" + pythonCell(definitions) + "print(V_" + (n - n / 10) + ")\n";
+        return "V_" + (n - n / 10);
     }
 }
