@@ -37,8 +37,9 @@ final class Definitions {
         Value v = evaluator.eval(d.expr());
         if (inCycle) v = Value.UNKNOWN;
         Unit display = displayUnit(d, v, evaluator, reporter);
-        Tagged tagged = tagged(d.name(), d.basis(), v, reporter);
         Origin origin = BlockChecks.origin(d.expr(), scope, units);
+        if (d.basis() == null) return new Binding.ValueBinding(file, d.name().span(), v, display, null, d.input(), origin, d.note());
+        Tagged tagged = tagged(d.name(), d.basis(), v, reporter);
         return new Binding.ValueBinding(file, d.name().span(), tagged.value(), display, tagged.tag(), d.input(), origin, d.note());
     }
 

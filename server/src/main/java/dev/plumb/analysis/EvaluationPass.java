@@ -33,7 +33,8 @@ final class EvaluationPass {
     private final Budget budget;
     /** Set once the run's time is up: what is left is not evaluated (one finding said so). */
     private boolean outOfTime;
-    private final Map<Statement, Row> rows;
+    /** The rows made; a study's re-run makes none (see {@link #rerun}). */
+    private Map<Statement, Row> rows;
     /** The run before this one, when its values may be taken over (else {@link ReusableValues#NONE}). */
     private ReusableValues earlier = ReusableValues.NONE;
     /** For each own name, the own names its statement uses. */
@@ -49,8 +50,7 @@ final class EvaluationPass {
         this.reporter = reporter;
         this.units = units;
         this.budget = budget;
-        // Sized for every statement at once: a study makes a pass per row.
-        this.rows = new IdentityHashMap<>(plan.own().size());
+        this.rows = new IdentityHashMap<>();
     }
 
     /**
@@ -67,6 +67,8 @@ final class EvaluationPass {
 
     /** @param duplicates statements defining a name a second time: evaluated for their findings, bound to nothing */
     Evaluated run(Iterable<Statement> duplicates) {
+        // Sized for every statement at once (a re-run for a study keeps no rows and skips this).
+        rows = new IdentityHashMap<>(plan.own().size() * 2);
         Environment.Builder values = new Environment.Builder(scope);
         Map<String, ReusableValues.Entry> reusable = new java.util.HashMap<>();
         // The own names whose values (or, for a function or a table, whose statements) are as in the earlier run.
@@ -129,9 +131,21 @@ final class EvaluationPass {
      * The run again for a study: over {@code base} (the real run's values), with {@code overrides}
      * bound in place of their definitions (shown as those were) and only the names in {@code which}
      * evaluated again, in plan order; the rest keep their base values. Solve statements among
-     * them are solved again. Rows are made for what was evaluated again.
+     * them are solved again. No rows are kept: a study reads the values (a sweep of a thousand
+     * rows would otherwise file a thousand rows of every statement only to drop them).
      */
     Evaluated rerun(Environment base, Map<String, Value> overrides, java.util.Set<String> which) {
+        rows = new java.util.AbstractMap<>() {
+            @Override
+            public Row put(Statement key, Row value) {
+                return null;
+            }
+
+            @Override
+            public java.util.Set<Map.Entry<Statement, Row>> entrySet() {
+                return java.util.Set.of();
+            }
+        };
         Environment.Builder values = new Environment.Builder(base);
         for (String name : plan.order()) {
             Value given = overrides.get(name);

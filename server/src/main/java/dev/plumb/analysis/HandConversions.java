@@ -99,6 +99,9 @@ final class HandConversions {
 
     private void judge(Expr.Quantity literal, Expr other, Value value, boolean divide) {
         if (!value.known() || value.dimensionless() || plainNumber(other) != null) return;
+        // The number as already read: most products are no conversion, and are told so without reading its digits again.
+        List<Factor> ofKind = BY_KIND.get(value.dimension());
+        if (ofKind == null || !nearAny(literal.number(), ofKind)) return;
         Factor f = match(literal.numberText(), value.dimension(), divide);
         if (f == null) return;
         String n = literal.numberText();
@@ -151,17 +154,27 @@ final class HandConversions {
      * its kind, so one more than 1 % from all of them matches none.
      */
     private static boolean nearAny(String numberText, List<Factor> ofKind) {
-        double x;
         try {
-            x = Double.parseDouble(numberText);
+            return nearAny(Double.parseDouble(numberText), ofKind);
         } catch (NumberFormatException e) {
             return true;
         }
-        for (Factor f : ofKind) {
-            double v = f.value().doubleValue();
+    }
+
+    private static boolean nearAny(double x, List<Factor> ofKind) {
+        for (double v : VALUES.get(ofKind.get(0).kind())) {
             if (Math.abs(x - v) <= 0.01 * v) return true;
         }
         return false;
+    }
+
+    /** The values of {@link #BY_KIND}'s factors as doubles, kind by kind, for {@link #nearAny}. */
+    private static final java.util.Map<Dimension, List<Double>> VALUES = values();
+
+    private static java.util.Map<Dimension, List<Double>> values() {
+        java.util.Map<Dimension, List<Double>> out = new java.util.HashMap<>();
+        byKind().forEach((kind, factors) -> out.put(kind, factors.stream().map(f -> f.value().doubleValue()).toList()));
+        return java.util.Map.copyOf(out);
     }
 
     /** The factors by the kind of value they convert, in the order of {@link #FACTORS}; read-only. */

@@ -69,6 +69,9 @@ public final class Dimension {
 
     public Dimension times(Dimension o) {
         if (outOfRange || o.outOfRange) return OUT_OF_RANGE;
+        // Most products in a calc scale by a plain number: nothing to add up.
+        if (o.isDimensionless()) return this;
+        if (isDimensionless()) return o;
         long[] e = new long[BASE_COUNT];
         for (int i = 0; i < BASE_COUNT; i++) {
             e[i] = (long) exponents[i] + o.exponents[i];
@@ -78,6 +81,7 @@ public final class Dimension {
 
     public Dimension divide(Dimension o) {
         if (outOfRange || o.outOfRange) return OUT_OF_RANGE;
+        if (o.isDimensionless()) return this;
         long[] e = new long[BASE_COUNT];
         for (int i = 0; i < BASE_COUNT; i++) {
             e[i] = (long) exponents[i] - o.exponents[i];
