@@ -39,7 +39,7 @@ class IncrementalEvaluationTest {
     @Test
     void editsThenReuseEqualAFreshAnalysis() throws IOException {
         List<Path> calcs = new ArrayList<>();
-        Path root = repositoryRoot();
+        Path root = dev.plumb.RepoRoot.get();
         try (Stream<Path> s = Stream.concat(Files.walk(root.resolve("samples")),
             Files.walk(root.resolve("server/src/test/resources/diagnostics")))) {
             s.filter(p -> p.toString().endsWith(".plumb")).sorted().forEach(calcs::add);
@@ -141,12 +141,5 @@ class IncrementalEvaluationTest {
         List<int[]> out = new ArrayList<>();
         while (m.find()) out.add(new int[] {m.start(), m.end()});
         return out;
-    }
-
-    private static Path repositoryRoot() {
-        for (Path p = Path.of("").toAbsolutePath(); p != null; p = p.getParent()) {
-            if (Files.isDirectory(p.resolve("samples")) && Files.isDirectory(p.resolve("grammar"))) return p;
-        }
-        throw new IllegalStateException("run inside the repository");
     }
 }

@@ -8,7 +8,6 @@ import java.io.IOException;
 import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.function.Supplier;
@@ -29,7 +28,7 @@ public final class CheckBenchmark {
     }
 
     public static void main(String[] args) throws Exception {
-        Path root = findRoot();
+        Path root = dev.plumb.RepoRoot.get();
         List<Path> samples;
         try (Stream<Path> walk = Files.walk(root.resolve("samples"))) {
             samples = walk.filter(p -> p.toString().endsWith(".plumb")).sorted().toList();
@@ -91,14 +90,5 @@ public final class CheckBenchmark {
         }
         Arrays.sort(ms);
         System.out.printf("%-52s median %8.0f ms   min %8.0f ms   (%d runs)%n", what, ms[n / 2], ms[0], n);
-    }
-
-    private static Path findRoot() {
-        List<Path> tried = new ArrayList<>();
-        for (Path p = Path.of("").toAbsolutePath(); p != null; p = p.getParent()) {
-            if (Files.isDirectory(p.resolve("samples")) && Files.isDirectory(p.resolve("grammar"))) return p;
-            tried.add(p);
-        }
-        throw new IllegalStateException("run from inside the repository; tried " + tried);
     }
 }

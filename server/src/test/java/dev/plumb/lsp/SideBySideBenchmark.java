@@ -9,7 +9,6 @@ import dev.plumb.bench.ChainCalc;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
@@ -84,7 +83,7 @@ public final class SideBySideBenchmark {
         }
         TestClient.close(client);
 
-        Path jar = findRoot().resolve("server/target/plumb.jar");
+        Path jar = dev.plumb.RepoRoot.get().resolve("server/target/plumb.jar");
         Path small = work.resolve("small.plumb");
         Files.writeString(small, ChainCalc.plumb(16));
         Path script = work.resolve("small.py");
@@ -201,14 +200,5 @@ public final class SideBySideBenchmark {
     private static String pintVersion() throws IOException, InterruptedException {
         return "pint " + run(List.of(PYTHON, "-c", "import pint; print(pint.__version__)")).trim() + " on "
             + run(List.of(PYTHON, "--version")).trim();
-    }
-
-    private static Path findRoot() {
-        List<Path> tried = new ArrayList<>();
-        for (Path p = Path.of("").toAbsolutePath(); p != null; p = p.getParent()) {
-            if (Files.isDirectory(p.resolve("samples")) && Files.isDirectory(p.resolve("grammar"))) return p;
-            tried.add(p);
-        }
-        throw new IllegalStateException("run from inside the repository; tried " + tried);
     }
 }
