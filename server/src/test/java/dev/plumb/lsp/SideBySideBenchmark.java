@@ -9,6 +9,7 @@ import dev.plumb.bench.ChainCalc;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
@@ -91,18 +92,27 @@ public final class SideBySideBenchmark {
         if (Files.exists(jar)) {
             Figure plain = fresh(List.of("java", "-jar", jar.toString(), "check", small.toString()), 7);
             Figure py = pint ? fresh(List.of(PYTHON, script.toString()), 7) : null;
-            row("check of one 20-line calc, fresh process", plain, py);
+            row("check of one 20-line calc, fresh process (java -jar)", plain, py);
+            // As bin/plumb runs a check: the quick compiler, the simple collector, a class-data archive
+            // made by the first run.
             Path archive = work.resolve("plumb.jsa");
-            run(List.of("java", "-XX:ArchiveClassesAtExit=" + archive, "-jar", jar.toString(), "check", small.toString()));
-            if (Files.exists(archive)) {
-                row("same, with the launcher's class-data archive", fresh(List.of("java", "-XX:SharedArchiveFile=" + archive,
-                    "-Xshare:auto", "-jar", jar.toString(), "check", small.toString()), 7), py);
-            }
+            List<String> launcher = new ArrayList<>(List.of("java", "-XX:TieredStopAtLevel=1", "-XX:+UseSerialGC"));
+            List<String> first = new ArrayList<>(launcher);
+            first.addAll(List.of("-XX:ArchiveClassesAtExit=" + archive, "-jar", jar.toString(), "check", small.toString()));
+            run(first);
+            if (Files.exists(archive)) launcher.addAll(List.of("-XX:SharedArchiveFile=" + archive, "-Xshare:auto"));
+            launcher.addAll(List.of("-jar", jar.toString(), "check"));
+            List<String> checkSmall = new ArrayList<>(launcher);
+            checkSmall.add(small.toString());
+            row("same, as the launcher runs it", fresh(checkSmall, 7), py);
             Path many = work.resolve("many");
             Files.createDirectories(many);
             for (int i = 0; i < 1_000; i++) Files.writeString(many.resolve("calc" + i + ".plumb"), ChainCalc.plumb(45));
-            row("check of 1,000 calcs of 49 lines, fresh process", fresh(List.of("java", "-jar", jar.toString(), "check",
-                many.toString()), 5), null);
+            row("check of 1,000 calcs of 49 lines, fresh process (java -jar)", fresh(List.of("java", "-jar", jar.toString(),
+                "check", many.toString()), 5), null);
+            List<String> checkMany = new ArrayList<>(launcher);
+            checkMany.add(many.toString());
+            row("same, as the launcher runs it", fresh(checkMany, 5), null);
             List<Path> files;
             try (var s = Files.list(many)) {
                 files = s.sorted().toList();
@@ -115,7 +125,7 @@ public final class SideBySideBenchmark {
                 Batch.check(new Workspace(new FileSources(), Settings.DEFAULT), files, cores);
                 if (i >= 0) ms[i] = (System.nanoTime() - t0) / 1e6 / files.size();
             }
-            row("same, in one warm process: per calc", Figure.of(ms), null);
+            row("1,000 calcs of 49 lines in one warm process: per calc", Figure.of(ms), null);
         } else {
             System.out.println("(no server/target/plumb.jar: build it to also time fresh processes)");
         }
