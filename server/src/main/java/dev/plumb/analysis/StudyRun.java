@@ -46,6 +46,8 @@ final class StudyRun {
     private final Map<Statement.Check, Row.CheckRow> checks;
     /** The names each check reads. */
     private final Map<Statement.Check, Set<String>> checkReads = new HashMap<>();
+    private final Map<String, Set<String>> uses;
+    private boolean prepared;
     /** What each set of given names makes evaluate again (a sweep asks the same set for every row). */
     private final Map<Set<String>, Set<String>> downstream = new HashMap<>();
 
@@ -59,6 +61,16 @@ final class StudyRun {
         this.settings = settings;
         this.units = units;
         this.budget = budget;
+        this.uses = uses;
+    }
+
+    /**
+     * Made at the first run, not before: most calcs study nothing, and the reverse graph of a long
+     * one costs an editor's keystroke a good part of its time.
+     */
+    private void prepare() {
+        if (prepared) return;
+        prepared = true;
         // The same adjustment the planner made: a solve statement depends on what its equation's definitions use.
         Map<String, Set<String>> adjusted = new HashMap<>(uses);
         SeekDependents.adjust(plan.own(), adjusted);
@@ -80,6 +92,7 @@ final class StudyRun {
      * names; {@code keep} false discards the findings (an outcome then has none).
      */
     Outcome run(Map<String, Value> given, boolean keep) {
+        prepare();
         Reporter reporter = keep ? new Reporter() : Reporter.discarding();
         Set<String> again = downstream.computeIfAbsent(Set.copyOf(given.keySet()), this::dependents);
         EvaluationPass pass = new EvaluationPass(plan, scope, text, reporter, units, budget);
