@@ -31,6 +31,11 @@ public final class InlayValues {
                 // The short form of a spread: the relative one, or the absolute one where a relative one says nothing.
                 String spread = ValueText.relative(v).isEmpty() ? ValueText.spread(v) : " " + ValueText.relative(v);
                 out.add(new InlayValue(v.span().end(), lead + ValueText.of(a, v) + spread + solved, v.name()));
+            } else if (r instanceof Row.SweepRow w) {
+                out.add(new InlayValue(w.span().end(), "= " + dev.plumb.present.SweepText.summary(w), w.varied()));
+            } else if (r instanceof Row.CaseRow k) {
+                out.add(new InlayValue(k.span().end(), "→ " + dev.plumb.present.CaseText.summary(k,
+                    a.settings().significantFigures()), k.name()));
             } else if (r instanceof Row.CheckRow c) {
                 String mark = c.passed() == null ? "? not evaluated" : CheckText.mark(c) + " " + CheckText.detail(c);
                 out.add(new InlayValue(c.span().end(), mark, "check"));

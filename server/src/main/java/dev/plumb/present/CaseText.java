@@ -41,6 +41,27 @@ public final class CaseText {
         return b.si() / a.si();
     }
 
+    /**
+     * The case in a few words, for an editor's inline value: its last changed value (most calcs end
+     * on their result) with the ratio, and how its checks came out: "M_base 0.8259 kN·m ×1.517,
+     * checks pass".
+     */
+    public static String summary(Row.CaseRow c, int digits) {
+        List<String> parts = new ArrayList<>();
+        if (!c.changed().isEmpty()) {
+            Row.CaseValue last = c.changed().get(c.changed().size() - 1);
+            String ratio = ratio(last, digits);
+            parts.add(last.name() + " " + ValueText.of(last.value(), last.display(), digits) + (ratio.isEmpty() ? "" : " " + ratio));
+        }
+        long failing = c.checks().stream().filter(k -> Boolean.FALSE.equals(k.passed())).count();
+        long unjudged = c.checks().stream().filter(k -> k.passed() == null).count();
+        if (!c.checks().isEmpty()) {
+            parts.add(failing > 0 ? failing + (failing == 1 ? " check fails" : " checks fail")
+                : unjudged > 0 ? unjudged + " not judged" : "checks pass");
+        }
+        return parts.isEmpty() ? "changes nothing" : String.join(", ", parts);
+    }
+
     /** The changed values as aligned lines: name, base → case, ratio. */
     public static List<String> lines(Row.CaseRow c, int digits) {
         int nameWidth = 0;

@@ -79,6 +79,24 @@ public final class SweepText {
         return line.allPass() ? "✓" : "? not judged";
     }
 
+    /**
+     * The sweep in a few words, for an editor's inline value: "7 rows, all checks pass", "7 rows, 2
+     * fail a check, 1 outside a range".
+     */
+    public static String summary(Row.SweepRow s) {
+        int rows = s.lines().size();
+        long failing = s.lines().stream().filter(l -> !"✓".equals(checks(s, l)) && !checks(s, l).startsWith("?")).count();
+        long unjudged = s.lines().stream().filter(l -> checks(s, l).startsWith("?")).count();
+        long outside = s.lines().stream().filter(l -> !l.outside().isEmpty()).count();
+        List<String> parts = new ArrayList<>();
+        parts.add(rows + (rows == 1 ? " row" : " rows"));
+        if (!s.checks().isEmpty()) parts.add(failing == 0 && unjudged == 0 ? "all checks pass" : failing + " fail a check");
+        if (unjudged > 0) parts.add(unjudged + " not judged");
+        if (outside > 0) parts.add(outside + " outside a range");
+        if (s.stopped()) parts.add("stopped by the run's budget");
+        return String.join(", ", parts);
+    }
+
     /** Whether any row lies outside a correlation's range. */
     public static boolean anyOutside(Row.SweepRow s) {
         return s.lines().stream().anyMatch(l -> !l.outside().isEmpty());
