@@ -81,7 +81,7 @@ final class CalcBody {
             List<String> each = new ArrayList<>();
             for (Row.ValueRow v : inputs) {
                 each.add(math.symbol(v.name()) + " = " + math.inlineQuantity(values.shown(v.value(), v.display()))
-                    + ChangesBlock.mark(ChangesBlock.of(changes, v.name())));
+                    + Html.text(ValueText.spread(v)) + ChangesBlock.mark(ChangesBlock.of(changes, v.name())));
             }
             out.append(Html.element("p", "inputs-here", "Inputs: " + String.join(" · ", each)));
             inputs.clear();

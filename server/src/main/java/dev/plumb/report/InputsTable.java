@@ -13,12 +13,12 @@ final class InputsTable {
         StringBuilder rows = new StringBuilder();
         for (Row r : a.rows()) {
             if (r instanceof Row.ValueRow v && v.input()) {
-                rows.append(row(math, v.name(), v.value(), values.shown(v.value(), v.display()), v.note(), v.basis(), null,
-                    ChangesBlock.of(changes, v.name())));
+                rows.append(row(math, v.name(), v.value(), values.shown(v.value(), v.display()),
+                    dev.plumb.present.ValueText.spread(v), v.note(), v.basis(), null, ChangesBlock.of(changes, v.name())));
             }
         }
         for (UsedValues.Used u : UsedValues.of(a)) {
-            rows.append(row(math, u.name(), u.binding().value(), values.shown(u.binding().value(), u.binding().display()),
+            rows.append(row(math, u.name(), u.binding().value(), values.shown(u.binding().value(), u.binding().display()), "",
                 u.binding().note(), u.binding().basis(), UsedValues.relative(a, u.file()), ChangesBlock.of(changes, u.name())));
         }
         if (rows.length() == 0) return "";
@@ -26,12 +26,14 @@ final class InputsTable {
             + "<th>Source</th><th>Tag</th></tr></thead><tbody>" + rows + "</tbody></table></section>";
     }
 
-    private static String row(FormulaMath math, String name, dev.plumb.analysis.Value v, ShownValue value, String note,
-                              String tag, String file, String change) {
+    /** @param spread the input's tolerance as shown beside its value ("" for none) */
+    private static String row(FormulaMath math, String name, dev.plumb.analysis.Value v, ShownValue value, String spread,
+                              String note, String tag, String file, String change) {
         String source = Html.text(note == null ? "" : note)
             + (file == null ? "" : (note == null ? "" : " ") + Html.element("span", "from-file", "from " + Html.text(file)));
         return "<tr" + (change == null ? "" : " class=\"changed\"") + Data.of(name, v, value) + "><td class=\"symbol\">"
-            + math.symbol(name) + "</td><td class=\"value\">" + math.inlineQuantity(value) + ChangesBlock.mark(change)
+            + math.symbol(name) + "</td><td class=\"value\">" + math.inlineQuantity(value) + Html.text(spread)
+            + ChangesBlock.mark(change)
             + "</td><td class=\"source\">" + source + "</td><td class=\"tag\">" + Html.text(tag == null ? "" : tag) + "</td></tr>";
     }
 }

@@ -132,6 +132,17 @@ class CalcReportTest {
     }
 
     @Test
+    void anInputsToleranceIsShownBesideItsValueInTheTableAndInItsSection() {
+        // ± 1 m/s on 20 m/s is ±5 % (1/20, by hand); the reviewer reads the tolerance where the value is.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("t.plumb"),
+            "section \"Wind\"\ninput V = 20 m/s ± 1 m/s \"gust\"\nq = 0.6 kg/m^3 * V^2 in Pa\n");
+        Document page = report(a);
+        assertTrue(page.selectFirst("section.inputs tr[data-name=V] td.value").text().contains("± 1 m/s (±5 %)"),
+            page.selectFirst("section.inputs").outerHtml());
+        assertTrue(page.selectFirst("p.inputs-here").text().contains("± 1 m/s (±5 %)"), page.selectFirst("p.inputs-here").outerHtml());
+    }
+
+    @Test
     void aDefinitionShowsItsFormulaTheValuesPutInAndTheResult() {
         Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("q.plumb"),
             "input ρ = 1.2 kg/m^3\ninput V_w = 30 m/s\nq = 0.5 * ρ * V_w^2 / sqrt(4)\n");
