@@ -25,7 +25,10 @@ final class Analyzer {
     private final String text;
     /** An earlier parse of this document, to reparse from; null for none. */
     private final ParsedSource earlier;
-    /** What an earlier run of this document left for this one to take over. */
+    /**
+     * What an earlier run of this document left for this one to take over ({@link ReusableValues#NONE}
+     * for a first editor run); null for a run that keeps nothing for a next one (the command line).
+     */
     private final ReusableValues reusable;
     private final List<Path> chain;
     private final Settings settings;
@@ -62,10 +65,13 @@ final class Analyzer {
         bindBlocks(scope, plan);
 
         Budget budget = Budget.standard(superseded);
-        boolean fits = reusable.fits(file, settings, transition, workspace.library().names(), imports.names());
-        EvaluationPass.Evaluated evaluated = new EvaluationPass(plan, scope, text, reporter, units, budget)
-            .reusing(fits ? reusable : ReusableValues.NONE, resolved.uses())
-            .run(declared.duplicates());
+        EvaluationPass pass = new EvaluationPass(plan, scope, text, reporter, units, budget);
+        // Only an editor's run keeps what the next run may take over: a `plumb check` never reuses it.
+        if (reusable != null) {
+            boolean fits = reusable.fits(file, settings, transition, workspace.library().names(), imports.names());
+            pass.reusing(fits ? reusable : ReusableValues.NONE, resolved.uses());
+        }
+        EvaluationPass.Evaluated evaluated = pass.run(declared.duplicates());
         Map<Statement, Row> checkRows = new java.util.IdentityHashMap<>();
         CheckRunner checks = new CheckRunner(scope, evaluated.values(), reporter, text, settings, units, budget);
         for (Statement s : statements) {
@@ -107,8 +113,8 @@ final class Analyzer {
         return new Analysis(file, text, parsed, headers, inOrder, findings, scope,
             resolved.importedUses(), imports.files(), resolved.references(), reporter.calls(), settings,
             new DefinitionGraph(file, resolved.uses(), findingsByDefinition(declared.own(), findings),
-                new ReusableValues(file, text, settings, transition, workspace.library().names(), imports.names(), evaluated.reusable(),
-                    evaluated.takenOver())));
+                reusable == null ? ReusableValues.NONE : new ReusableValues(file, text, settings, transition,
+                    workspace.library().names(), imports.names(), evaluated.reusable(), evaluated.takenOver())));
     }
 
     /**

@@ -39,6 +39,8 @@ final class EvaluationPass {
     private ReusableValues earlier = ReusableValues.NONE;
     /** For each own name, the own names its statement uses. */
     private Map<String, java.util.Set<String>> uses = Map.of();
+    /** Whether this run keeps what a next run may take over (an editor's run; see {@link #reusing}). */
+    private boolean keeps;
     /** The values a several-unknown solve gave its later unknowns, waiting for their turn in the plan. */
     private final Map<String, Binding.ValueBinding> solvedAhead = new java.util.HashMap<>();
     private final Map<String, Solution> solvedAheadHow = new java.util.HashMap<>();
@@ -62,6 +64,7 @@ final class EvaluationPass {
     EvaluationPass reusing(ReusableValues earlier, Map<String, java.util.Set<String>> uses) {
         this.earlier = earlier;
         this.uses = uses;
+        this.keeps = true;
         return this;
     }
 
@@ -70,6 +73,15 @@ final class EvaluationPass {
         // Sized for every statement at once (a re-run for a study keeps no rows and skips this).
         rows = new IdentityHashMap<>(plan.own().size() * 2);
         Environment.Builder values = new Environment.Builder(scope);
+        if (!keeps) {
+            for (String name : plan.order()) {
+                Binding.ValueBinding bound = withinBudget(plan.own().get(name), values.now(), plan.inCycle().contains(name));
+                if (bound != null) values.put(name, bound);
+            }
+            Environment done = values.build();
+            for (Statement s : duplicates) withinBudget(s, done, false);
+            return new Evaluated(done, rows, Map.of(), 0);
+        }
         Map<String, ReusableValues.Entry> reusable = new java.util.HashMap<>();
         // The own names whose values (or, for a function or a table, whose statements) are as in the earlier run.
         java.util.Set<String> same = new java.util.HashSet<>();

@@ -99,10 +99,7 @@ final class HandConversions {
 
     private void judge(Expr.Quantity literal, Expr other, Value value, boolean divide) {
         if (!value.known() || value.dimensionless() || plainNumber(other) != null) return;
-        // The number as already read: most products are no conversion, and are told so without reading its digits again.
-        List<Factor> ofKind = BY_KIND.get(value.dimension());
-        if (ofKind == null || !nearAny(literal.number(), ofKind)) return;
-        Factor f = match(literal.numberText(), value.dimension(), divide);
+        Factor f = match(literal.number(), literal.numberText(), value.dimension(), divide);
         if (f == null) return;
         String n = literal.numberText();
         String target = divide ? f.overUnit() : f.timesUnit();
@@ -127,9 +124,21 @@ final class HandConversions {
      * least three significant digits unless it is the exact factor (3.6 and 12, not 2.2).
      */
     static Factor match(String numberText, Dimension kind, boolean divide) {
-        // Most products are of a kind no factor has: answered without reading the number.
+        double number;
+        try {
+            number = Double.parseDouble(numberText);
+        } catch (NumberFormatException e) {
+            return null;
+        }
+        return match(number, numberText, kind, divide);
+    }
+
+    /** As {@link #match(String, Dimension, boolean)}, for a number already read ({@code number}, written {@code numberText}). */
+    private static Factor match(double number, String numberText, Dimension kind, boolean divide) {
+        // Most products are of a kind no factor has, or far from every factor of it: answered
+        // without reading the number's digits.
         List<Factor> ofKind = BY_KIND.get(kind);
-        if (ofKind == null || !nearAny(numberText, ofKind)) return null;
+        if (ofKind == null || !nearAny(number, ofKind)) return null;
         BigDecimal x;
         try {
             x = new BigDecimal(numberText);
@@ -153,14 +162,6 @@ final class HandConversions {
      * admits a number within half a unit of its third significant digit (0.5 %) of a factor of
      * its kind, so one more than 1 % from all of them matches none.
      */
-    private static boolean nearAny(String numberText, List<Factor> ofKind) {
-        try {
-            return nearAny(Double.parseDouble(numberText), ofKind);
-        } catch (NumberFormatException e) {
-            return true;
-        }
-    }
-
     private static boolean nearAny(double x, List<Factor> ofKind) {
         for (double v : VALUES.get(ofKind.get(0).kind())) {
             if (Math.abs(x - v) <= 0.01 * v) return true;

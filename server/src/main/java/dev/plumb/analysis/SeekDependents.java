@@ -24,19 +24,16 @@ final class SeekDependents {
     /** Adjusts {@code uses} in place and returns, for each seek, the names re-evaluated with it. */
     static Map<String, Set<String>> adjust(Map<String, Statement> own, Map<String, Set<String>> uses) {
         Map<String, Set<String>> out = new LinkedHashMap<>();
-        // Most calcs solve nothing: the reverse graph is made only for one that does.
-        if (own.values().stream().noneMatch(s -> s instanceof Statement.Seek || s instanceof Statement.SeekSystem
-            || s instanceof Statement.Evolve)) {
-            return out;
-        }
-        Map<String, Set<String>> usedBy = reverse(uses);
+        // Most calcs solve nothing: the reverse graph is made at the first solve or motion, not before
+        // (from the graph as given, as every solve's closure reads it).
+        UsedBy usedBy = new UsedBy(uses);
         for (var entry : own.entrySet()) {
             String unknown = entry.getKey();
             Set<String> dependsOnUnknown;
             Set<String> fromEquation = new LinkedHashSet<>();
             Set<String> unknowns = new LinkedHashSet<>(List.of(unknown));
             if (entry.getValue() instanceof Statement.Seek f) {
-                dependsOnUnknown = closure(unknown, usedBy);
+                dependsOnUnknown = closure(unknown, usedBy.get());
                 References.each(f.lhs(), (n, span) -> fromEquation.add(n));
                 References.each(f.rhs(), (n, span) -> fromEquation.add(n));
             } else if (entry.getValue() instanceof Statement.SeekSystem k && k.index() == 0) {
@@ -44,7 +41,7 @@ final class SeekDependents {
                 // system's statement comes after everything else its equations use.
                 unknowns.addAll(SeekSystems.unknowns(k));
                 dependsOnUnknown = new HashSet<>();
-                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy));
+                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy.get()));
                 for (Statement.Equation q : k.system().equations()) {
                     References.each(q.lhs(), (n, span) -> fromEquation.add(n));
                     References.each(q.rhs(), (n, span) -> fromEquation.add(n));
@@ -54,7 +51,7 @@ final class SeekDependents {
                 // condition is re-evaluated at every evaluation of the rates.
                 unknowns.addAll(Motions.names(k));
                 dependsOnUnknown = new HashSet<>();
-                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy));
+                for (String u : unknowns) dependsOnUnknown.addAll(closure(u, usedBy.get()));
                 List<dev.plumb.syntax.Expr> read = new java.util.ArrayList<>(k.motion().rates());
                 read.add(k.motion().stopLeft());
                 read.add(k.motion().stopRight());
@@ -78,6 +75,21 @@ final class SeekDependents {
             out.put(unknown, dependents);
         }
         return out;
+    }
+
+    /** The reverse of the graph as given, made when first asked for. */
+    private static final class UsedBy {
+        private final Map<String, Set<String>> uses;
+        private Map<String, Set<String>> graph;
+
+        UsedBy(Map<String, Set<String>> uses) {
+            this.uses = uses;
+        }
+
+        Map<String, Set<String>> get() {
+            if (graph == null) graph = reverse(uses);
+            return graph;
+        }
     }
 
     private static Map<String, Set<String>> reverse(Map<String, Set<String>> uses) {

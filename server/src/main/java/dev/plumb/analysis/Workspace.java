@@ -79,7 +79,7 @@ public final class Workspace {
 
     /** Analyses text that is not (or not yet) saved under its path, e.g. an editor buffer. */
     public Analysis analyzeText(Path file, String text) {
-        return guarded(file.toAbsolutePath().normalize(), text, null, ReusableValues.NONE, List.of(), NEVER);
+        return guarded(file.toAbsolutePath().normalize(), text, null, null, List.of(), NEVER);
     }
 
     /** For runs nobody abandons. */
@@ -93,7 +93,7 @@ public final class Workspace {
      */
     public Analysis analyzeText(Path file, String text, ParsedSource earlier, java.util.function.BooleanSupplier superseded) {
         try {
-            return guarded(file.toAbsolutePath().normalize(), text, earlier, ReusableValues.NONE, List.of(), superseded);
+            return guarded(file.toAbsolutePath().normalize(), text, earlier, null, List.of(), superseded);
         } catch (Superseded e) {
             return null;
         }
@@ -142,7 +142,7 @@ public final class Workspace {
         Sources.Loaded loaded = sources.load(file, root);
         Imported fresh;
         if (loaded instanceof Sources.Text t) {
-            fresh = new Imported(guarded(file, t.text(), uses.parsed(file), ReusableValues.NONE, chain, superseded), null);
+            fresh = new Imported(guarded(file, t.text(), uses.parsed(file), null, chain, superseded), null);
         } else if (loaded instanceof Sources.NotText n) {
             fresh = new Imported(failure(file, "", Code.FILE_NOT_TEXT,
                 "this is not a calc file: " + n.reason() + " (first bad byte at offset " + n.offset() + ")", 0), null);
