@@ -68,6 +68,10 @@ class StudiesCliTest {
         assertEquals(2, none.exitCode());
         assertTrue(none.err().contains("has no sweep of W"), none.err());
         assertEquals(2, Cli.run("eval", "--sweep", "V", calc.toString()).exitCode(), "--sweep wants --format csv");
+        // One CSV table at a time: a sweep's or a motion's, not both.
+        Cli both = Cli.run("eval", "--format", "csv", "--sweep", "V", "--trajectory", "t", calc.toString());
+        assertEquals(2, both.exitCode());
+        assertTrue(both.err().contains("--trajectory and --sweep each choose the one table"), both.err());
     }
 
     @Test
