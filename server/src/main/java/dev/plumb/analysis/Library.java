@@ -12,12 +12,12 @@ import java.util.function.Function;
  * @param names the library's names; null for none
  * @param families the library's members of a family; none while the library itself loads
  */
-record Library(Scope names, Function<String, List<Binding>> families) {
+record Library(LibraryNames names, Function<String, List<Binding>> families) {
     /** No library at all. */
     static final Library NONE = new Library(null, family -> List.of());
 
     /** The names read so far, with no families: what the library's own files see while it loads. */
-    static Library loading(Scope soFar) {
+    static Library loading(LibraryNames soFar) {
         return new Library(soFar, family -> List.of());
     }
 }

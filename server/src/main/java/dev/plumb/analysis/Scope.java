@@ -8,7 +8,7 @@ import java.util.Map;
  * The names visible in one document: built-ins, then imported names, then its own.
  * Filled while the document is analysed, read-only afterwards.
  */
-public final class Scope {
+public final class Scope implements LibraryNames {
     private final Map<String, Binding> names = new HashMap<>();
     private final String text;
     /** The standard library (or, while it loads, its files read so far). */
@@ -32,6 +32,7 @@ public final class Scope {
     }
 
     /** A document's own and imported names first (they shadow the library), then the library, then built-ins. */
+    @Override
     public Binding lookup(String name) {
         Binding own = names.get(name);
         if (own != null) return own;
@@ -67,6 +68,7 @@ public final class Scope {
     }
 
     /** Every name a document can use, for suggestions. */
+    @Override
     public Collection<String> visibleNames() {
         var all = new java.util.TreeSet<>(names.keySet());
         if (library.names() != null) all.addAll(library.names().visibleNames());

@@ -20,9 +20,9 @@ public final class LspMain {
         PrintStream err = new PrintStream(new FileOutputStream(FileDescriptor.err), true, java.nio.charset.StandardCharsets.UTF_8);
         System.setOut(err);
         System.setErr(err);
-        // Read and check the standard library while editor and server shake hands, so that the
-        // first document's diagnostics need not wait for it.
-        Thread library = new Thread(dev.plumb.analysis.Stdlib::get, "plumb-library");
+        // Read and check the whole standard library while editor and server shake hands, so that
+        // neither the first document's diagnostics nor the first completion waits for a file.
+        Thread library = new Thread(() -> dev.plumb.analysis.Stdlib.get().files(), "plumb-library");
         library.setDaemon(true);
         library.start();
         PlumbLanguageServer server = new PlumbLanguageServer(version);
