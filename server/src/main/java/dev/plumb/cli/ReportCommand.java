@@ -74,12 +74,14 @@ final class ReportCommand implements Callable<Integer> {
         String made = LocalDate.now().toString();
         List<ContentsPage.Entry> entries = new ArrayList<>();
         Path contents = oneFile ? null : contentsPage();
+        // One status per repository for all the calcs, not one per calc.
+        dev.plumb.revisions.HeadState.Reader heads = new dev.plumb.revisions.HeadState.Reader();
         try {
             for (Batch.Checked c : results) {
                 Path target = target(c.analysis().file(), oneFile);
                 String shownPath = Location.path(c.analysis().file());
                 write(target, CalcReport.html(c.analysis(), c.diagnostics(), new CalcReport.Context(shownPath, made,
-                    dev.plumb.revisions.HeadState.of(c.analysis().file()).map(dev.plumb.revisions.HeadState::words).orElse(null),
+                    heads.of(c.analysis().file()).map(dev.plumb.revisions.HeadState::words).orElse(null),
                     ReportChanges.of(changes, c.analysis().file(), against))));
                 out.println("wrote " + Printable.line(target.toString()));
                 if (contents != null) {

@@ -27,25 +27,65 @@ public record HeadState(String shortId, String fullId, boolean fileChanged, bool
      * working tree, the repository has no commit yet, or it cannot be read.
      */
     public static Optional<HeadState> of(Path calc) {
-        Repository repo = GitRepo.find(calc.toAbsolutePath().normalize().getParent() == null
-            ? calc : calc.toAbsolutePath().normalize().getParent());
-        if (repo == null) return Optional.empty();
-        try (repo; Git git = new Git(repo); ObjectReader reader = repo.newObjectReader()) {
-            Path top = repo.getWorkTree().toPath().toRealPath();
-            Path file = GitRepo.realish(calc);
+        return new Reader().of(calc);
+    }
+
+    /**
+     * Reads the head state of many calcs with one status of each repository they lie in: a
+     * folder's reports need not walk the whole working tree once per calc.
+     */
+    public static final class Reader {
+        /** Each repository's state by its git folder; empty for one that cannot be read. */
+        private final java.util.Map<Path, Optional<Snapshot>> byRepository = new java.util.HashMap<>();
+
+        /** As {@link HeadState#of(Path)}. */
+        public Optional<HeadState> of(Path calc) {
+            Path absolute = calc.toAbsolutePath().normalize();
+            Repository repo = GitRepo.find(absolute.getParent() == null ? absolute : absolute.getParent());
+            if (repo == null) return Optional.empty();
+            Optional<Snapshot> snapshot;
+            try (repo) {
+                snapshot = byRepository.computeIfAbsent(repo.getDirectory().toPath().toAbsolutePath().normalize(),
+                    dir -> Snapshot.of(repo));
+            }
+            return snapshot.flatMap(s -> s.stateOf(calc));
+        }
+    }
+
+    /** One repository's HEAD and working-tree status, read once. */
+    private record Snapshot(Path top, String shortId, String fullId, java.util.Set<String> changed, boolean treeChanged) {
+        static Optional<Snapshot> of(Repository repo) {
+            try (Git git = new Git(repo); ObjectReader reader = repo.newObjectReader()) {
+                Path top = repo.getWorkTree().toPath().toRealPath();
+                ObjectId head = repo.resolve(Constants.HEAD + "^{commit}");
+                if (head == null) return Optional.empty();
+                Status status = git.status().call();
+                java.util.Set<String> changed = new java.util.HashSet<>();
+                changed.addAll(status.getModified());
+                changed.addAll(status.getChanged());
+                changed.addAll(status.getAdded());
+                changed.addAll(status.getRemoved());
+                changed.addAll(status.getMissing());
+                changed.addAll(status.getUntracked());
+                changed.addAll(status.getConflicting());
+                return Optional.of(new Snapshot(top, reader.abbreviate(head, 7).name(), head.name(), changed,
+                    status.hasUncommittedChanges()));
+            } catch (Exception e) {
+                // A repository that cannot be read gives no revision line rather than a wrong one.
+                return Optional.empty();
+            }
+        }
+
+        Optional<HeadState> stateOf(Path calc) {
+            Path file;
+            try {
+                file = GitRepo.realish(calc);
+            } catch (Exception e) {
+                return Optional.empty();
+            }
             if (!file.startsWith(top)) return Optional.empty();
-            ObjectId head = repo.resolve(Constants.HEAD + "^{commit}");
-            if (head == null) return Optional.empty();
             String rel = top.relativize(file).toString().replace(java.io.File.separatorChar, '/');
-            Status status = git.status().call();
-            boolean fileChanged = status.getModified().contains(rel) || status.getChanged().contains(rel)
-                || status.getAdded().contains(rel) || status.getRemoved().contains(rel) || status.getMissing().contains(rel)
-                || status.getUntracked().contains(rel) || status.getConflicting().contains(rel);
-            return Optional.of(new HeadState(reader.abbreviate(head, 7).name(), head.name(), fileChanged,
-                status.hasUncommittedChanges()));
-        } catch (Exception e) {
-            // A repository that cannot be read gives no revision line rather than a wrong one.
-            return Optional.empty();
+            return Optional.of(new HeadState(shortId, fullId, changed.contains(rel), treeChanged));
         }
     }
 

@@ -135,6 +135,29 @@ class GitRepoTest {
     }
 
     @Test
+    void oneReaderForManyCalcsGivesEachCalcItsOwnState() throws Exception {
+        Path loose = Files.createDirectories(dir.resolve("loose"));
+        try (GitFixture git = GitFixture.init(dir.resolve("repo"))) {
+            Path kept = git.write("kept.plumb", "x = 1\n");
+            Path edited = git.write("sub/edited.plumb", "y = 1\n");
+            String id = git.commit("two calcs");
+            git.write("sub/edited.plumb", "y = 2\n");
+            Path fresh = git.write("fresh.plumb", "z = 1\n");
+            Path outside = Files.writeString(loose.resolve("calc.plumb"), "w = 1\n");
+            HeadState.Reader reader = new HeadState.Reader();
+            for (Path calc : List.of(kept, edited, fresh, outside)) {
+                assertEquals(HeadState.of(calc), reader.of(calc), calc.toString());
+            }
+            assertFalse(reader.of(kept).orElseThrow().fileChanged());
+            assertTrue(reader.of(kept).orElseThrow().treeChanged(), "sub/edited.plumb differs from HEAD");
+            assertTrue(reader.of(edited).orElseThrow().fileChanged());
+            assertTrue(reader.of(fresh).orElseThrow().fileChanged());
+            assertEquals(id, reader.of(edited).orElseThrow().fullId());
+            assertEquals(Optional.empty(), reader.of(outside));
+        }
+    }
+
+    @Test
     void headStateIsEmptyOutsideARepositoryOrBeforeTheFirstCommit() throws Exception {
         Path loose = Files.createDirectories(dir.resolve("loose"));
         assertEquals(Optional.empty(), HeadState.of(loose.resolve("calc.plumb")));
