@@ -158,8 +158,9 @@ class InclinedPlateTest {
     @CsvSource({"10, 1", "30, 2", "45, 4", "70, 6", "90, 3"})
     void liftAndDragAreTheNormalForceResolvedIntoTheWindsAxes(double deg, double ar) {
         // Derivation: the force on the plate is N = CN*q*S along the plate's normal (Ortiz, Rival
-        // and Wood 2015, Energies 8(4), abstract: drag over lift follows the angle, the forces are
-        // pressure, not shear). The normal makes the angle alpha with the wind's cross direction
+        // and Wood 2015, Energies 8(4), abstract: the forces "are due largely to the instantaneous
+        // pressure distribution around the plate and are not significantly influenced by shear
+        // stresses"). The normal makes the angle alpha with the wind's cross direction
         // and 90 deg - alpha with the wind, so D = N*sin(alpha) and L = N*cos(alpha), hence
         // CD = CN*sin(alpha), CL = CN*cos(alpha); CL^2 + CD^2 = CN^2 and CD/CL = tan(alpha).
         String args = "(" + deg + " deg, " + ar + ")";
