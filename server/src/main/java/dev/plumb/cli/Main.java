@@ -27,9 +27,6 @@ public final class Main implements Runnable {
     }
 
     /** Runs the command line with the given streams; returns the exit code. */
-    /** The commands that analyse calcs, and so need the standard library. */
-    private static final java.util.Set<String> LOADS_LIBRARY = java.util.Set.of("check", "eval", "report", "diff");
-
     public static int run(String[] args, PrintStream out, PrintStream err) {
         return run(args, out, err, java.util.Map.of());
     }
@@ -42,14 +39,6 @@ public final class Main implements Runnable {
     /** As above, with the launcher's `--version` text (the build's version and commit); null keeps this class's. */
     public static int run(String[] args, PrintStream out, PrintStream err, java.util.Map<String, Object> more,
             CommandLine.IVersionProvider version) {
-        if (args.length > 0 && LOADS_LIBRARY.contains(args[0])) {
-            // Read and check the standard library on the second core while the options are parsed
-            // and the calcs are found and read: a fresh `plumb check` starts sooner (the editor's
-            // server does the same while it shakes hands).
-            Thread library = new Thread(dev.plumb.analysis.Stdlib::get, "plumb-library");
-            library.setDaemon(true);
-            library.start();
-        }
         CommandLine cli = new CommandLine(new Main());
         if (version != null) {
             cli.getCommandSpec().versionProvider(version);
