@@ -18,7 +18,8 @@ import org.junit.jupiter.params.provider.CsvSource;
  * publishes, against the smooth-cylinder entries of cylinder.plumb, and against what the
  * measurements show: the critical Reynolds number falls, and the drag past it rises, as the
  * roughness grows. The admissible roughness is checked as the inverse of the critical Reynolds
- * number, and the range edges warn exactly at their limits.
+ * number; the smooth entry that takes the roughness warns from exactly that limit and offers the
+ * rough one; and the range edges warn exactly at their limits.
  */
 class RoughBodiesTest {
 
@@ -219,6 +220,43 @@ class RoughBodiesTest {
             crisis.diagnostics()::toString);
         Analysis subcritical = StdlibCheck.analyze(calc.replace("RE", "1.5e5"));
         assertTrue(subcritical.diagnostics().isEmpty(), subcritical.diagnostics()::toString);
+    }
+
+    // ---------------------------------------------------------------- the smooth entry that knows the roughness
+
+    @ParameterizedTest(name = "Re = {0}")
+    @CsvSource({"1e5", "2e5", "3e5", "1e6", "1e7"})
+    void theSmoothEntryGivesTheSmoothCylindersDrag(double re) {
+        assertEquals(si("cd_cylinder(" + re + ")"), si("cd_cylinder_smooth(" + re + ", 0)"), 1e-15);
+    }
+
+    @ParameterizedTest(name = "Re = {0}")
+    @CsvSource({"2.2e5", "2.85e5", "3.5e5", "5e5"})
+    void aTubeRougherThanAdmissibleWarnsFromExactlyTheLimitAndIsOfferedTheRoughEntry(double re) {
+        // At the admissible roughness itself the call is quiet; 1 % above it, it warns, says how
+        // far (1 % above the limit) and offers cd_cylinder_rough, which covers it.
+        double adm = si("cylinder_ks_admissible(" + re + ")");
+        assertClean("cd_cylinder_smooth(" + re + ", " + adm + ")");
+        Diagnostic w = RangeAssertions.assertOutsideShowing("cd_cylinder_smooth(" + re + ", " + 1.01 * adm + ")",
+            "cd_cylinder_smooth", RangeAssertions.n(1.01 * adm));
+        assertTrue(w.message().contains("1% above the upper limit"), w::message);
+        assertTrue(w.message().contains("within range: cd_cylinder_rough"), w::message);
+    }
+
+    @Test
+    void aTubeSmootherThanTheFiguresSmoothestCurveIsOfferedTheSmoothEntry() {
+        // ks/d = 1e-6 at Re = 2e5 is below the rough entry's range and far below the admissible
+        // roughness there (0.1 * 10^((1.0474 - 1.2)*0.7204/0.18) = 0.0244): the smooth entry covers it.
+        assertOutside(call(2e5, 1e-6), "cd_cylinder_rough", 1e-6, 1e-5, "cd_cylinder_smooth");
+    }
+
+    @Test
+    void theSmoothEntrysReynoldsRangeIsTheFigures() {
+        assertClean("cd_cylinder_smooth(1e5, 1e-3)");
+        assertClean("cd_cylinder_smooth(1e7, 0)");
+        assertOutside("cd_cylinder_smooth(9.9e4, 1e-3)", "cd_cylinder_smooth", 9.9e4, 1e5);
+        StdlibDomainTest.assertOutsideDomain("cd_cylinder_smooth(-1e5, 0)", "Re > 0");
+        StdlibDomainTest.assertOutsideDomain("cd_cylinder_smooth(1e5, -1e-3)", "ks_over_D >= 0");
     }
 
     // ---------------------------------------------------------------- ranges
