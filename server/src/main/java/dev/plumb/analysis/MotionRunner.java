@@ -35,7 +35,7 @@ import org.apache.commons.math3.ode.sampling.StepInterpolator;
  * {@link Budget} through each evaluation, by {@value #MAX_STEPS} accepted steps, and by
  * {@value #MAX_REJECTED} evaluations without an accepted step (a collapsing step size).
  */
-final class MotionRunner {
+final class MotionRunner extends SolvingRunner {
     static final int MAX_STEPS = 20_000;
     static final int MAX_REJECTED = 3_000;
     static final double RELATIVE_TOLERANCE = 1e-9;
@@ -71,14 +71,6 @@ final class MotionRunner {
         }
     }
 
-    private final Plan plan;
-    private final Scope scope;
-    private final Environment env;
-    private final Reporter reporter;
-    private final String text;
-    private final UnitRegistry units;
-    private final Budget budget;
-
     private Statement.Motion motion;
     private List<String> names;
     private Value[] start;
@@ -88,13 +80,7 @@ final class MotionRunner {
     private List<Integer> drawn;
 
     MotionRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units, Budget budget) {
-        this.plan = plan;
-        this.scope = scope;
-        this.env = env;
-        this.reporter = reporter;
-        this.text = text;
-        this.units = units;
-        this.budget = budget;
+        super(plan, scope, env, reporter, text, units, budget);
     }
 
     Outcome run(Statement.Evolve k) {
@@ -425,10 +411,6 @@ final class MotionRunner {
             return false;
         }
         return true;
-    }
-
-    private Evaluator evaluator(Environment at, Reporter r) {
-        return new Evaluator(scope, at, Map.of(), r, text, units, budget);
     }
 
     // ---- results ----------------------------------------------------------------------------

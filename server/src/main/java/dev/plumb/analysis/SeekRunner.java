@@ -20,28 +20,13 @@ import java.util.function.DoubleUnaryOperator;
  * evaluated once more for real, so range warnings speak of the solution, never of an
  * intermediate trial, and errors in the equation are reported once.
  */
-final class SeekRunner {
+final class SeekRunner extends SolvingRunner {
     /** What solving gave: the value (UNKNOWN on failure) and, when solved, how. */
     record Outcome(Value value, Solution solution) {
     }
 
-    private final Plan plan;
-    private final Scope scope;
-    /** The values computed before the solve: what the trials are evaluated over. */
-    private final Environment env;
-    private final Reporter reporter;
-    private final String text;
-    private final UnitRegistry units;
-    private final Budget budget;
-
     SeekRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units, Budget budget) {
-        this.budget = budget;
-        this.plan = plan;
-        this.scope = scope;
-        this.env = env;
-        this.reporter = reporter;
-        this.text = text;
-        this.units = units;
+        super(plan, scope, env, reporter, text, units, budget);
     }
 
     Outcome run(Statement.Seek f) {
@@ -148,10 +133,6 @@ final class SeekRunner {
         Value lhs = e.eval(f.lhs());
         Value rhs = e.eval(f.rhs());
         return lhs.known() && rhs.known() ? new Value[] {lhs, rhs} : null;
-    }
-
-    private Evaluator evaluator(Environment at, Reporter r) {
-        return new Evaluator(scope, at, java.util.Map.of(), r, text, units, budget);
     }
 
     /**

@@ -22,28 +22,14 @@ import java.util.Map;
  * once more for real, so their findings describe the solution. Counts, dimensions, dependent
  * equations, a solve that does not converge and a solution outside the brackets are findings.
  */
-final class SeekSystemRunner {
+final class SeekSystemRunner extends SolvingRunner {
     /** The unknowns' values (UNKNOWN each on failure), the units they are shown in, and how they were solved. */
     record Outcome(List<Value> values, List<Unit> units, Solution solution) {
     }
 
-    private final Plan plan;
-    private final Scope scope;
-    private final Environment env;
-    private final Reporter reporter;
-    private final String text;
-    private final UnitRegistry units;
-    private final Budget budget;
-
     SeekSystemRunner(Plan plan, Scope scope, Environment env, Reporter reporter, String text, UnitRegistry units,
                      Budget budget) {
-        this.plan = plan;
-        this.scope = scope;
-        this.env = env;
-        this.reporter = reporter;
-        this.text = text;
-        this.units = units;
-        this.budget = budget;
+        super(plan, scope, env, reporter, text, units, budget);
     }
 
     Outcome run(Statement.SeekSystem k) {
@@ -221,10 +207,6 @@ final class SeekSystemRunner {
             out[i] = new Value[] {lhs, rhs};
         }
         return known ? out : null;
-    }
-
-    private Evaluator evaluator(Environment at, Reporter r) {
-        return new Evaluator(scope, at, Map.of(), r, text, units, budget);
     }
 
     private static Outcome failed(int n) {

@@ -23,12 +23,49 @@ final class FormulaKey {
             return (d.input() ? "input " : "") + written(text, d.expr(), rename);
         }
         if (s instanceof Statement.Seek k) {
-            // A solve is its search and its equation: the text from after the name to the equation's end.
+            // A solve is its search and its equation: the text from after the name to the equation's
+            // end, the unknown itself written as a placeholder (its equation uses it by name).
             List<Expr> parts = new ArrayList<>();
             for (Expr e : new Expr[] {k.low(), k.high(), k.start(), k.lhs(), k.rhs()}) if (e != null) parts.add(e);
-            return "seek" + spaceless(substituted(text, new Span(k.name().span().end(), k.equation().end()), parts, rename));
+            Map<String, String> own = placeholders(rename, List.of(k.name().text()));
+            return "seek" + spaceless(substituted(text, new Span(k.name().span().end(), k.equation().end()), parts, own));
+        }
+        if (s instanceof Statement.SeekSystem k) {
+            // Each unknown of a system is its place among the unknowns and the whole system as written.
+            Statement.Equations q = k.system();
+            Map<String, String> own = placeholders(rename, q.unknowns().stream().map(u -> u.text()).toList());
+            StringBuilder out = new StringBuilder("seek#" + k.index());
+            for (List<Expr> group : List.of(q.starts(), q.lows(), q.highs())) {
+                for (Expr e : group) out.append(',').append(written(text, e, own));
+            }
+            for (Statement.Equation e : q.equations()) {
+                out.append(';').append(written(text, e.lhs(), own)).append('=').append(written(text, e.rhs(), own));
+            }
+            return out.toString();
+        }
+        if (s instanceof Statement.Evolve k) {
+            // The time and each state: its place, the starts, the rates and when the motion stops.
+            Statement.Motion m = k.motion();
+            List<String> names = new ArrayList<>(List.of(m.time().text()));
+            m.states().forEach(state -> names.add(state.text()));
+            Map<String, String> own = placeholders(rename, names);
+            StringBuilder out = new StringBuilder("evolve#" + k.index());
+            for (List<Expr> group : List.of(m.starts(), m.rates())) {
+                for (Expr e : group) out.append(',').append(written(text, e, own));
+            }
+            out.append(";until").append(written(text, m.stopLeft(), own)).append(m.stop().symbol())
+                .append(written(text, m.stopRight(), own));
+            if (m.every() != null) out.append(";every").append(written(text, m.every(), own));
+            return out.toString();
         }
         return null;
+    }
+
+    /** {@code rename} with the statement's own names written as their places: #0, #1, … */
+    private static Map<String, String> placeholders(Map<String, String> rename, List<String> own) {
+        Map<String, String> out = new java.util.HashMap<>(rename);
+        for (int i = 0; i < own.size(); i++) out.put(own.get(i), "#" + i);
+        return out;
     }
 
     /** The key of a check: its sides and comparisons, names renamed by {@code rename}. */

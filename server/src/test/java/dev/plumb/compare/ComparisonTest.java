@@ -117,6 +117,48 @@ class ComparisonTest {
     }
 
     @Test
+    void aRenamedUnknownIsPairedThoughItsEquationUsesItsName() {
+        String before = """
+            input W = 400 N
+            input k = 2 N*s^2/m^2
+            seek V in 1 m/s .. 100 m/s where k * V^2 = W
+            P = W * V in W
+            """;
+        String after = before.replace("seek V in", "seek U in").replace("k * V^2", "k * U^2").replace("W * V in", "W * U in");
+        FileDiff d = diff(before, after);
+        assertEquals(List.of(new Rename("V", "U")), d.renames());
+        assertEquals(List.of(), d.added());
+        assertEquals(List.of(), d.results(), "same values: nothing moved");
+    }
+
+    @Test
+    void renamedUnknownsOfASystemAndStatesOfAMotionArePaired() {
+        String system = """
+            input T = 500 N
+            input W = 400 N
+            input c = 2 N*s^2/m^2
+            seek V, theta from 1 m/s, 20 deg
+                where T * sin(theta) = c * V^2, T * cos(theta) = W
+            """;
+        FileDiff s = diff(system, system.replace("V, theta", "V, phi").replace("sin(theta)", "sin(phi)")
+            .replace("cos(theta)", "cos(phi)"));
+        assertEquals(List.of(new Rename("theta", "phi")), s.renames());
+        assertEquals(List.of(), s.added());
+
+        String motion = """
+            input m = 0.12 kg
+            input k = 0.004 kg/m
+            evolve v, y from 0 m/s, 0 m over t
+                rates g_n - k / m * v^2, v
+                until y >= 5 m
+            """;
+        FileDiff m = diff(motion, motion.replace("evolve v, y", "evolve v, z").replace("until y >=", "until z >="));
+        assertEquals(List.of(new Rename("y", "z")), m.renames());
+        assertEquals(List.of(), m.added());
+        assertEquals(List.of(), m.results(), "same motion: nothing moved");
+    }
+
+    @Test
     void aRenameIsNotGuessedWhenTwoValuesShareAFormula() {
         String before = "input a = 2 m\ninput b = 2 m\n";
         FileDiff d = diff(before, "input c = 2 m\ninput e = 2 m\n");
