@@ -61,7 +61,9 @@ final class Analyzer {
         imports.names().forEach(scope::put);
         DeclarationPass.Declarations declared = new DeclarationPass(file, text, scope, reporter, units).run(statements);
         ResolutionPass.Resolution resolved = new ResolutionPass(scope, declared.own(), reporter, units).run(statements);
-        Plan plan = new Planner(reporter).run(declared.own(), resolved.uses(), new Definitions(file, text, scope, units));
+        Planner planner = new Planner(reporter);
+        Plan plan = planner.run(declared.own(), resolved.uses(), new Definitions(file, text, scope, units),
+            reusable == null ? null : reusable.order());
         bindBlocks(scope, plan);
 
         Budget budget = Budget.standard(superseded);
@@ -98,12 +100,16 @@ final class Analyzer {
         }
         Map<Statement, Row> shown = new java.util.IdentityHashMap<>(evaluated.rows());
         shown.putAll(studyRows);
-        shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && spreads.containsKey(v.name())
-            && declared.own().get(v.name()) == st ? v.withSpread(spreads.get(v.name())) : row);
+        if (!spreads.isEmpty()) {
+            shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && spreads.containsKey(v.name())
+                && declared.own().get(v.name()) == st ? v.withSpread(spreads.get(v.name())) : row);
+        }
         Map<String, ModelForm> modelForms = ModelForms.of(statements, declared.own(), evaluated.values(), scope, text, units,
             budget);
-        shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && modelForms.containsKey(v.name())
-            && declared.own().get(v.name()) == st ? v.withModelForm(modelForms.get(v.name())) : row);
+        if (!modelForms.isEmpty()) {
+            shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && modelForms.containsKey(v.name())
+                && declared.own().get(v.name()) == st ? v.withModelForm(modelForms.get(v.name())) : row);
+        }
         List<Row> inOrder = rowsInOrder(statements, shown, checkRows);
         List<Diagnostic> diagnostics = Acceptances.apply(statements, declared.own(),
             reporter.all(request -> resolve(request, declared.own(), inOrder)));
@@ -114,7 +120,8 @@ final class Analyzer {
             resolved.importedUses(), imports.files(), resolved.references(), reporter.calls(), settings,
             new DefinitionGraph(file, resolved.uses(), findingsByDefinition(declared.own(), findings),
                 reusable == null ? ReusableValues.NONE : new ReusableValues(file, text, settings, transition,
-                    workspace.library().names(), imports.names(), evaluated.reusable(), evaluated.takenOver())));
+                    workspace.library().names(), imports.names(), evaluated.reusable(), evaluated.takenOver(),
+                    planner.ordered())));
     }
 
     /**

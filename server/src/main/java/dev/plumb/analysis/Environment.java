@@ -43,14 +43,26 @@ final class Environment {
         return changed.isEmpty() ? this : new Environment(owner, this, Map.copyOf(changed));
     }
 
+    /** A hash map's initial capacity that holds {@code n} entries without growing. */
+    static int capacityFor(int n) {
+        return (int) (n / 0.75f) + 1;
+    }
+
     /** Builds the environment of one evaluation run, definition by definition, then freezes it. */
     static final class Builder {
         private final Scope owner;
         private final Environment below;
-        private final Map<String, Binding.ValueBinding> values = new HashMap<>();
+        private final Map<String, Binding.ValueBinding> values;
 
         Builder(Scope owner) {
             this(owner, null);
+        }
+
+        /** A builder for about {@code expected} values: a document's whole run, made without growing. */
+        Builder(Scope owner, int expected) {
+            this.owner = owner;
+            this.below = null;
+            this.values = new HashMap<>(capacityFor(expected));
         }
 
         /** A builder whose values lie over {@code below}'s (a trial run over the real one). */
@@ -61,6 +73,7 @@ final class Environment {
         private Builder(Scope owner, Environment below) {
             this.owner = owner;
             this.below = below;
+            this.values = new HashMap<>();
         }
 
         void put(String name, Binding.ValueBinding v) {

@@ -72,7 +72,7 @@ final class EvaluationPass {
     Evaluated run(Iterable<Statement> duplicates) {
         // Sized for every statement at once (a re-run for a study keeps no rows and skips this).
         rows = new IdentityHashMap<>(plan.own().size() * 2);
-        Environment.Builder values = new Environment.Builder(scope);
+        Environment.Builder values = new Environment.Builder(scope, plan.order().size());
         if (!keeps) {
             for (String name : plan.order()) {
                 Binding.ValueBinding bound = withinBudget(plan.own().get(name), values.now(), plan.inCycle().contains(name));
@@ -82,9 +82,9 @@ final class EvaluationPass {
             for (Statement s : duplicates) withinBudget(s, done, false);
             return new Evaluated(done, rows, Map.of(), 0);
         }
-        Map<String, ReusableValues.Entry> reusable = new java.util.HashMap<>();
+        Map<String, ReusableValues.Entry> reusable = new java.util.HashMap<>(Environment.capacityFor(plan.order().size()));
         // The own names whose values (or, for a function or a table, whose statements) are as in the earlier run.
-        java.util.Set<String> same = new java.util.HashSet<>();
+        java.util.Set<String> same = new java.util.HashSet<>(Environment.capacityFor(plan.order().size()));
         int takenOver = 0;
         ReusableValues.Moves moves = new ReusableValues.Moves();
         for (String name : plan.order()) {

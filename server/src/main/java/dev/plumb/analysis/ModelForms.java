@@ -25,8 +25,8 @@ final class ModelForms {
         Evaluator quiet = new Evaluator(scope, base, Map.of(), Reporter.discarding(), text, units, budget);
         RangeAdvice advice = new RangeAdvice(quiet, Reporter.discarding(), units);
         for (Statement s : statements) {
-            if (!(s instanceof Statement.Definition d) || own.get(d.name().text()) != d) continue;
-            if (!(Expr.inner(d.expr()) instanceof Expr.Call call)) continue;
+            if (!(s instanceof Statement.Definition d) || !(Expr.inner(d.expr()) instanceof Expr.Call call)) continue;
+            if (own.get(d.name().text()) != d) continue;
             Binding callee = scope.lookup(call.callee().text());
             if (!(callee instanceof Binding.CorrelationBinding || callee instanceof Binding.TableBinding)) continue;
             Binding.ValueBinding here = base.get(d.name().text());

@@ -16,17 +16,26 @@ import java.util.Set;
  */
 final class Planner {
     private final Reporter reporter;
+    /** The graph ordered by the last run, with its order, for the next run of the document to take over. */
+    private DependencyOrder.Memo ordered;
 
     Planner(Reporter reporter) {
         this.reporter = reporter;
     }
 
     Plan run(Map<String, Statement> own, Map<String, Set<String>> graph, Definitions definitions) {
+        return run(own, graph, definitions, null);
+    }
+
+    /** As above, taking the order over from {@code earlier} (an earlier run's {@link #ordered()}) where the graph is the same. */
+    Plan run(Map<String, Statement> own, Map<String, Set<String>> graph, Definitions definitions,
+             DependencyOrder.Memo earlier) {
         // SeekDependents replaces the entries of solved names with sets of its own; the others are
         // only read, so a shallow copy of the graph is enough.
         Map<String, Set<String>> uses = new LinkedHashMap<>(graph);
         Map<String, Set<String>> solvedWith = SeekDependents.adjust(own, uses);
-        DependencyOrder.Result order = DependencyOrder.of(uses);
+        DependencyOrder.Result order = DependencyOrder.of(uses, earlier);
+        ordered = new DependencyOrder.Memo(uses, order);
         Map<String, List<Statement.Definition>> dependents = new LinkedHashMap<>();
         for (var entry : solvedWith.entrySet()) {
             List<Statement.Definition> inOrder = new ArrayList<>();
@@ -36,6 +45,11 @@ final class Planner {
             dependents.put(entry.getKey(), inOrder);
         }
         return new Plan(own, order.order(), reportCycles(own, order.cycles()), dependents, definitions);
+    }
+
+    /** What {@link #run} ordered, for the next run of the same document. */
+    DependencyOrder.Memo ordered() {
+        return ordered;
     }
 
     private Set<String> reportCycles(Map<String, Statement> own, List<List<String>> cycles) {

@@ -102,7 +102,11 @@ final class Propagation {
         List<Source> out = new ArrayList<>();
         Evaluator amounts = new Evaluator(scope, study.base(), Map.of(), reporter, text, units, budget);
         for (Statement st : statements) {
-            if (!(st instanceof Statement.Definition d) || own.get(d.name().text()) != d) continue;
+            if (!(st instanceof Statement.Definition d)) continue;
+            // Only a tolerance or a correlation's result (whose origin may state an accuracy) is a
+            // source: most definitions are neither, and need no lookups.
+            if (d.tolerance() == null && !(Expr.inner(d.expr()) instanceof Expr.Call)) continue;
+            if (own.get(d.name().text()) != d) continue;
             Binding.ValueBinding b = study.base().get(d.name().text());
             if (b == null || !b.value().known()) continue;
             Value nominal = b.value();

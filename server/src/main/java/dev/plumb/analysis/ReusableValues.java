@@ -26,7 +26,7 @@ import java.util.Set;
  */
 final class ReusableValues {
     /** Nothing to reuse: a first run. */
-    static final ReusableValues NONE = new ReusableValues(null, null, null, null, null, null, Map.of(), 0);
+    static final ReusableValues NONE = new ReusableValues(null, null, null, null, null, null, Map.of(), 0, null);
 
     /**
      * One own name as the run left it.
@@ -49,14 +49,18 @@ final class ReusableValues {
     private final Map<String, Binding> imported;
     private final Map<String, Entry> entries;
     private final int takenOver;
+    /** The run's dependency order and the graph it ordered; null for none. */
+    private final DependencyOrder.Memo order;
 
     /**
      * @param library the library's names (the same object for the same library)
      * @param takenOver how many values the run that made these took over from the one before it
+     * @param order the run's dependency order, which depends on nothing but the graph it orders
      */
     ReusableValues(Path file, String text, Settings settings, Double transition, Object library,
-                   Map<String, Binding> imported, Map<String, Entry> entries, int takenOver) {
+                   Map<String, Binding> imported, Map<String, Entry> entries, int takenOver, DependencyOrder.Memo order) {
         this.takenOver = takenOver;
+        this.order = order;
         this.file = file;
         this.text = text;
         this.settings = settings;
@@ -71,6 +75,11 @@ final class ReusableValues {
     boolean fits(Path file, Settings settings, Double transition, Object library, Map<String, Binding> imported) {
         return this.file != null && this.file.equals(file) && this.settings.equals(settings)
             && Objects.equals(this.transition, transition) && this.library == library && this.imported.equals(imported);
+    }
+
+    /** The run's dependency order with its graph, for the planner of the next run; null for none. */
+    DependencyOrder.Memo order() {
+        return order;
     }
 
     /** How many values the run that made these took over from the run before it (for tests and benchmarks). */
