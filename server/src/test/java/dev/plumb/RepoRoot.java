@@ -20,6 +20,15 @@ public final class RepoRoot {
         throw new IllegalStateException("cannot find the repository root (a folder with samples/ and grammar/)");
     }
 
+    /** Every calc of the samples and of the diagnostics fixtures, in path order: what whole-engine tests run over. */
+    public static java.util.List<Path> calcs() throws java.io.IOException {
+        Path root = get();
+        try (java.util.stream.Stream<Path> s = java.util.stream.Stream.concat(Files.walk(root.resolve("samples")),
+            Files.walk(root.resolve("server/src/test/resources/diagnostics")))) {
+            return s.filter(p -> p.toString().endsWith(".plumb")).sorted().collect(java.util.stream.Collectors.toList());
+        }
+    }
+
     private static boolean isRoot(Path p) {
         return Files.isDirectory(p.resolve("samples")) && Files.isDirectory(p.resolve("grammar"));
     }

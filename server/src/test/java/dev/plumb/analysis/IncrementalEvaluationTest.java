@@ -14,7 +14,6 @@ import java.util.List;
 import java.util.Random;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -38,12 +37,7 @@ class IncrementalEvaluationTest {
 
     @Test
     void editsThenReuseEqualAFreshAnalysis() throws IOException {
-        List<Path> calcs = new ArrayList<>();
-        Path root = dev.plumb.RepoRoot.get();
-        try (Stream<Path> s = Stream.concat(Files.walk(root.resolve("samples")),
-            Files.walk(root.resolve("server/src/test/resources/diagnostics")))) {
-            s.filter(p -> p.toString().endsWith(".plumb")).sorted().forEach(calcs::add);
-        }
+        List<Path> calcs = new ArrayList<>(dev.plumb.RepoRoot.calcs());
         Path generated = dir.resolve("generated.plumb");
         Files.writeString(generated, GeneratedCalc.of(200));
         calcs.add(generated);

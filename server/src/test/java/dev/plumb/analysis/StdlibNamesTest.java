@@ -4,12 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -23,13 +19,7 @@ class StdlibNamesTest {
 
     @Test
     void theNameListSaysWhatTheFilesDefine() throws IOException {
-        String live = Stdlib.indexing().namesText();
-        if (Boolean.getBoolean("update.golden")) {
-            Files.writeString(LIST, live, StandardCharsets.UTF_8);
-            return;
-        }
-        assertEquals(live, Files.readString(LIST, StandardCharsets.UTF_8),
-            "the standard library's name list is stale: refresh it with -Dupdate.golden=true");
+        dev.plumb.GeneratedFile.matches(LIST, Stdlib.indexing().namesText(), "the standard library's name list");
     }
 
     @Test
@@ -48,12 +38,7 @@ class StdlibNamesTest {
 
     @Test
     void everyCalcAnalysesAsWithTheWholeLibraryLoadedFirst() throws IOException {
-        List<Path> calcs = new ArrayList<>();
-        Path root = dev.plumb.RepoRoot.get();
-        try (Stream<Path> s = Stream.concat(Files.walk(root.resolve("samples")),
-            Files.walk(root.resolve("server/src/test/resources/diagnostics")))) {
-            s.filter(p -> p.toString().endsWith(".plumb")).sorted().forEach(calcs::add);
-        }
+        List<Path> calcs = dev.plumb.RepoRoot.calcs();
         Stdlib whole = Stdlib.indexing();
         for (Path calc : calcs) {
             // A fresh library per calc: each loads what that calc (and the files it uses) needs.
