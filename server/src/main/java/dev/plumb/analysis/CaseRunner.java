@@ -93,7 +93,7 @@ final class CaseRunner {
             reporter.report(Code.CASE_NO_CHANGE, c.name().span(), "case " + label + " changes nothing: "
                 + String.join(", ", each) + " already; give it the values the case is about, or remove it");
         }
-        StudyRun.Outcome o = study.run(given, true);
+        StudyRun.Outcome o = study.withSpreads(study.run(given, true), statements);
         for (Diagnostic d : o.findings()) {
             if (d.code() == Code.INPUT_UNUSED || baseFindings.contains(List.of(d.code(), d.span()))) continue;
             List<Related> related = new ArrayList<>();

@@ -41,7 +41,7 @@ final class Studies {
             }
             if (!(s instanceof Statement.Sweep w)) continue;
             if (sweeps == null) {
-                sweeps = new SweepRunner(study, own, scope, base, reporter, text, units, budget, digits);
+                sweeps = new SweepRunner(study, own, statements, scope, base, reporter, text, units, budget, digits);
             }
             try {
                 budget.nextStatement();

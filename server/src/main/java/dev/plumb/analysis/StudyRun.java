@@ -82,6 +82,50 @@ final class StudyRun {
         }
     }
 
+    /** The same document studied around {@code o}'s values (a case's, a sweep row's), sharing this run's graph and budget. */
+    private StudyRun(StudyRun from, Outcome o) {
+        this(from.plan, from.scope, o.values(), from.uses, rowsOf(from.checks, o.checks()), from.text, from.settings,
+            from.units, from.budget);
+        from.prepare();
+        usedBy.putAll(from.usedBy);
+        checkReads.putAll(from.checkReads);
+        prepared = true;
+    }
+
+    /** The checks in order with another run's rows (an outcome lists them in the same order). */
+    private static Map<Statement.Check, Row.CheckRow> rowsOf(Map<Statement.Check, Row.CheckRow> checks,
+                                                            List<Row.CheckRow> rows) {
+        Map<Statement.Check, Row.CheckRow> out = new java.util.LinkedHashMap<>();
+        int i = 0;
+        for (Statement.Check c : checks.keySet()) out.put(c, rows.get(i++));
+        return out;
+    }
+
+    /**
+     * {@code o} (a case's or a sweep row's run) with its checks {@code with spread} judged at their
+     * bounds, the tolerances carried to the values of that run rather than the real run's (a
+     * tolerance in percent is a percent of the run's own value); the findings of that judgement
+     * join the outcome's. {@code o} itself when no check asks for its spread. Throws
+     * {@link Budget.Exhausted} when the budget does not stretch to it: such a check is then not
+     * judged, never judged on the values alone.
+     */
+    Outcome withSpreads(Outcome o, List<Statement> statements) {
+        if (checks.keySet().stream().noneMatch(Statement.Check::withSpread) || o.stopped()) return o;
+        StudyRun here = new StudyRun(this, o);
+        Reporter margins = new Reporter();
+        Propagation propagation = new Propagation(here, plan, scope, margins, text, units, budget);
+        propagation.run(statements);
+        List<Row.CheckRow> rows = new ArrayList<>(o.checks().size());
+        int i = 0;
+        for (Statement.Check c : checks.keySet()) {
+            Row.CheckRow row = o.checks().get(i++);
+            rows.add(c.withSpread() ? MarginCheck.judge(c, row, propagation, margins, text, settings) : row);
+        }
+        List<Diagnostic> findings = new ArrayList<>(o.findings());
+        findings.addAll(margins.all());
+        return new Outcome(o.values(), rows, findings, o.outOfTime());
+    }
+
     /** The real run's values: what a study's own expressions (a sweep's ends, a case's right sides) are evaluated over. */
     Environment base() {
         return base;

@@ -29,6 +29,8 @@ final class SweepRunner {
 
     private final StudyRun study;
     private final Map<String, Statement> own;
+    /** The document's statements: a row's checks `with spread` are judged at the row's own spreads. */
+    private final List<Statement> statements;
     private final Scope scope;
     private final Reporter reporter;
     private final String text;
@@ -38,10 +40,11 @@ final class SweepRunner {
     /** The real run's findings, by code and place: a row that only repeats one of them adds nothing. */
     private final Set<List<Object>> baseFindings = new java.util.HashSet<>();
 
-    SweepRunner(StudyRun study, Map<String, Statement> own, Scope scope, List<Diagnostic> base, Reporter reporter,
-                String text, UnitRegistry units, Budget budget, int digits) {
+    SweepRunner(StudyRun study, Map<String, Statement> own, List<Statement> statements, Scope scope, List<Diagnostic> base,
+                Reporter reporter, String text, UnitRegistry units, Budget budget, int digits) {
         this.study = study;
         this.own = own;
+        this.statements = statements;
         this.scope = scope;
         this.reporter = reporter;
         this.text = text;
@@ -74,7 +77,7 @@ final class SweepRunner {
         Set<String> failingChecks = new LinkedHashSet<>();
         boolean stopped = false;
         for (Value x : values.given()) {
-            StudyRun.Outcome o = study.run(Map.of(name, x), true);
+            StudyRun.Outcome o = study.withSpreads(study.run(Map.of(name, x), true), statements);
             if (o.stopped()) {
                 stopped = true;
                 break;
@@ -91,6 +94,7 @@ final class SweepRunner {
                     if (!outsideHere.contains(where)) outsideHere.add(where);
                     if (firstOutside == null) firstOutside = d.message();
                 } else if (d.code() != Code.CHECK_FAILED && d.code() != Code.CHECK_NOT_EVALUATED
+                    && d.code() != Code.CHECK_FAILS_AT_BOUND
                     && d.severity() != dev.plumb.diagnostics.Severity.HINT
                     && !baseFindings.contains(List.of(d.code(), d.span())) && trouble == null) {
                     trouble = definedAt(d.span()) + ": " + d.message();
@@ -102,7 +106,10 @@ final class SweepRunner {
                 troubled.add(row);
                 if (firstTrouble == null) firstTrouble = trouble;
             }
-            for (Row.CheckRow c : o.checks()) if (c.verdict() == Row.Verdict.FAILED) failingChecks.add(c.source());
+            for (Row.CheckRow c : o.checks()) {
+                if (c.verdict() == Row.Verdict.FAILED) failingChecks.add(c.source());
+                if (c.verdict() == Row.Verdict.FAILS_AT_BOUND) failingChecks.add(c.source() + " at its bounds");
+            }
             Row.SweepLine line = new Row.SweepLine(x, results, verdicts, outsideHere, trouble);
             if (line.anyFails()) failing.add(row);
             lines.add(line);

@@ -105,7 +105,8 @@ final class EvalReport {
                 out.println(Printable.line("  " + CaseText.title(k, digits)));
                 for (String line : CaseText.lines(k, digits)) out.println(Printable.line("      " + line));
                 for (Row.CheckRow c : k.checks()) {
-                    String mark = c.passed() == null ? style.bad("?") : c.passed() ? style.good("✓") : style.bad("✗ FAIL");
+                    String mark = c.passed() == null ? style.bad("?") : c.passed() ? style.good("✓")
+                        : c.verdict() == Row.Verdict.FAILS_AT_BOUND ? style.bad("✗ FAIL at its bound") : style.bad("✗ FAIL");
                     out.println("      " + mark + Printable.line("  check " + c.source() + "   [" + CheckText.detail(c) + "]"));
                 }
             } else if (r instanceof Row.SweepRow w) {

@@ -69,11 +69,16 @@ public final class SweepText {
         return out;
     }
 
-    /** "✓" when every check passes, "✗ F_D <= 400 N" naming the failing ones, "?" when one could not be judged. */
+    /**
+     * "✓" when every check passes, "✗ F_D <= 400 N" naming the failing ones ("✗ F_D <= 400 N at its
+     * bounds" for one that holds for the values but not within their spreads), "?" when one could not
+     * be judged.
+     */
     public static String checks(Row.SweepRow s, Row.SweepLine line) {
         List<String> failing = new ArrayList<>();
         for (int i = 0; i < line.verdicts().size(); i++) {
             if (line.verdicts().get(i) == Row.Verdict.FAILED) failing.add(s.checks().get(i));
+            if (line.verdicts().get(i) == Row.Verdict.FAILS_AT_BOUND) failing.add(s.checks().get(i) + " at its bounds");
         }
         if (!failing.isEmpty()) return "✗ " + String.join("; ", failing);
         return line.allPass() ? "✓" : "? not judged";

@@ -108,7 +108,7 @@ final class CalcBody {
             }
             StringBuilder checks = new StringBuilder();
             for (Row.CheckRow c : k.checks()) {
-                String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.verdict() == Row.Verdict.FAILED ? "fail" : "unjudged";
+                String kind = c.verdict() == Row.Verdict.PASSED ? "pass" : c.passed() == Boolean.FALSE ? "fail" : "unjudged";
                 checks.append(Html.element("p", "case-check " + kind, Html.text(CheckText.mark(c) + " check " + c.source()
                     + " — " + CheckText.detail(c))));
             }

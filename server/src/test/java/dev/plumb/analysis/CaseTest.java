@@ -68,6 +68,42 @@ class CaseTest {
     }
 
     @Test
+    void aCheckWithSpreadIsJudgedAtTheCasesOwnBoundsAndInEachSweepRow() {
+        // A hoarding frame of our own. F = 1.2 · A · ½ · 1.2 kg/m³ · V² = 1.44 kg/m · V² with A = 2 m², and
+        // to first order u(F) = |dF/dV| · u(V) = 2.88 kg/m · V · 3 m/s (GUM, JCGM 100:2008, eq. 10).
+        // Case V = 31 m/s: F = 1383.84 N, u(F) = 267.84 N, F at its upper bound 1651.68 N > 1500 N: the
+        // check holds for the values but fails at its bounds. Case V = 25 m/s: F = 900 N, u(F) = 216 N,
+        // 1116 N <= 1500 N: it holds at its bounds too.
+        // Sweep rows: 28 m/s gives 1128.96 N + 241.92 N = 1370.88 N (holds); 32 m/s gives 1474.56 N,
+        // below 1500 N, but 1474.56 N + 276.48 N = 1751.04 N (fails at its bounds).
+        Analysis a = Fixture.analyze("""
+            input V = 30 m/s ± 3 m/s
+            input A = 2 m^2
+            q = 0.5 * 1.2 kg/m^3 * V^2
+            F = 1.2 * A * q in N
+            check F <= 1500 N with spread "frame capacity"
+            case storm: V = 31 m/s
+            case breeze: V = 25 m/s
+            sweep V over 28 m/s .. 32 m/s by 4 m/s
+                show F
+            """);
+        Row.CheckRow storm = variation(a, "storm").checks().get(0);
+        assertEquals(Row.Verdict.FAILS_AT_BOUND, storm.verdict());
+        assertEquals(267.84, storm.spreads().get(0), 1e-3);
+        assertEquals(Row.Verdict.PASSED, variation(a, "breeze").checks().get(0).verdict());
+        assertEquals(216.0, variation(a, "breeze").checks().get(0).spreads().get(0), 1e-3);
+        assertTrue(a.diagnostics().stream().anyMatch(d -> d.code() == Code.CHECK_FAILS_AT_BOUND
+            && d.message().startsWith("in case storm:") && d.message().contains("1652 N")), a.diagnostics().toString());
+        Row.SweepRow sweep = a.rows().stream().filter(r -> r instanceof Row.SweepRow).map(r -> (Row.SweepRow) r)
+            .findFirst().orElseThrow();
+        assertEquals(List.of(Row.Verdict.PASSED), sweep.lines().get(0).verdicts());
+        assertEquals(List.of(Row.Verdict.FAILS_AT_BOUND), sweep.lines().get(1).verdicts());
+        assertTrue(a.diagnostics().stream().anyMatch(d -> d.code() == Code.SWEEP_CHECK_FAILED
+            && d.message().contains("at its bounds")), a.diagnostics().toString());
+        assertTrue(a.diagnostics().stream().noneMatch(d -> d.code() == Code.SWEEP_ROW_FINDINGS), a.diagnostics().toString());
+    }
+
+    @Test
     void aSolvedValueIsSolvedAgainUnderACase() {
         // Terminal speed with constant Cd: V = sqrt(4 ρp g d / (3 ρ Cd)) ∝ sqrt(d): four times d, twice V.
         Analysis a = Fixture.analyze("""
