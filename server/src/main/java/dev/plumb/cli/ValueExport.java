@@ -300,26 +300,48 @@ final class ValueExport {
         out.print(line.append("\r\n"));
     }
 
-    /** One row per value, RFC 4180 quoting (the spread last, empty for a value without one); an unknown value has empty number cells and "?" as shown. */
+    /**
+     * One row per value, RFC 4180 quoting (the spread after the value, empty for a value without
+     * one), then two columns per case, in the order the cases are written: the value under that
+     * case in SI and as shown (a value the case does not change is its base value there). An
+     * unknown value has empty number cells and "?" as shown.
+     */
     static void csv(Analysis a, PrintWriter out) {
-        out.print("name,line,input,value_si,si_unit,shown,unit,dimension,note,spread_si,spread\r\n");
+        List<Row.CaseRow> cases = a.rows().stream().filter(r -> r instanceof Row.CaseRow).map(r -> (Row.CaseRow) r).toList();
+        StringBuilder head = new StringBuilder("name,line,input,value_si,si_unit,shown,unit,dimension,note,spread_si,spread");
+        for (Row.CaseRow k : cases) head.append(",case_").append(k.name()).append("_si,case_").append(k.name());
+        out.print(head.append("\r\n"));
+        int digits = a.settings().significantFigures();
         for (Row r : a.rows()) {
             if (!(r instanceof Row.ValueRow v)) continue;
             boolean known = v.value().known();
-            String[] cells = {
+            List<String> cells = new java.util.ArrayList<>(List.of(
                 v.name(), String.valueOf(a.lines().line(v.span().start())), String.valueOf(v.input()),
                 known ? String.valueOf(v.value().si()) : "", known ? DisplayUnits.defaultFor(v.value().dimension()).symbol() : "",
                 ValueText.of(a, v), v.display() == null ? "" : v.display().symbol(), known ? v.value().dimension().describe() : "",
                 v.note() == null ? "" : v.note(), v.spread() == null ? "" : String.valueOf(v.spread().si()),
-                ValueText.spread(v).strip()};
+                ValueText.spread(v).strip()));
+            for (Row.CaseRow k : cases) {
+                dev.plumb.analysis.Value there = underCase(k, v);
+                cells.add(there.known() ? String.valueOf(there.si()) : "");
+                cells.add(ValueText.of(there, v.display(), digits));
+            }
             StringBuilder line = new StringBuilder();
-            for (int i = 0; i < cells.length; i++) {
+            for (int i = 0; i < cells.size(); i++) {
                 if (i > 0) line.append(',');
                 // A calc's own text may hold control characters: written escaped, never raw.
-                line.append(quoted(dev.plumb.diagnostics.Printable.line(cells[i])));
+                line.append(quoted(dev.plumb.diagnostics.Printable.line(cells.get(i))));
             }
             out.print(line.append("\r\n"));
         }
+    }
+
+    /** A value under a case: as the case set or changed it, else its base value. */
+    private static dev.plumb.analysis.Value underCase(Row.CaseRow k, Row.ValueRow v) {
+        for (List<Row.CaseValue> values : List.of(k.given(), k.changed())) {
+            for (Row.CaseValue c : values) if (c.name().equals(v.name())) return c.value();
+        }
+        return v.value();
     }
 
     /** A cell quoted when it holds a comma, a quote or a line break (RFC 4180), quotes doubled. */

@@ -60,6 +60,16 @@ class StudiesCliTest {
     }
 
     @Test
+    void csvOfTheValuesHasEachCaseInTwoColumns() throws IOException {
+        // The storm: V = 30 m/s, F = 0.6 kg/m · (30 m/s)² = 540 N.
+        Path calc = Cli.write(dir, "w.plumb", CALC);
+        List<String> rows = Cli.run("eval", "--format", "csv", calc.toString()).out().lines().toList();
+        assertTrue(rows.get(0).endsWith(",spread_si,spread,case_storm_si,case_storm"), rows.get(0));
+        assertTrue(rows.get(1).startsWith("V,1,true,20.0,") && rows.get(1).endsWith(",30.0,30 m/s"), rows.get(1));
+        assertTrue(rows.get(2).startsWith("F,2,false,240.0,") && rows.get(2).endsWith(",540.0,540 N"), rows.get(2));
+    }
+
+    @Test
     void csvWritesOneSweepsTableOnRequest() throws IOException {
         Path calc = Cli.write(dir, "w.plumb", CALC);
         List<String> rows = Cli.run("eval", "--format", "csv", "--sweep", "V", calc.toString()).out().lines().toList();
