@@ -179,7 +179,7 @@ final class ValueExport {
                 row.add("results", results);
                 JsonArray verdicts = new JsonArray();
                 l.verdicts().forEach(v -> verdicts.add(v == Row.Verdict.PASSED ? "pass" : v == Row.Verdict.FAILED ? "fail"
-                    : "not evaluated"));
+                    : v == Row.Verdict.FAILS_AT_BOUND ? "fail at bound" : "not evaluated"));
                 row.add("verdicts", verdicts);
                 JsonArray outside = new JsonArray();
                 l.outside().forEach(outside::add);

@@ -70,6 +70,23 @@ class StudiesCliTest {
     }
 
     @Test
+    void jsonNamesARowThatFailsOnlyAtItsBounds() throws IOException {
+        // F = 0.6 kg/m · V², u(F) = 1.2 kg/m · V · 1 m/s: at 20 m/s 240 N + 24 N = 264 N <= 250 N fails at its
+        // bounds though 240 N passes; at 10 m/s 60 N + 12 N passes.
+        Path calc = Cli.write(dir, "m.plumb", """
+            input V = 20 m/s ± 1 m/s
+            F = 0.6 kg/m * V^2 in N
+            check F <= 250 N with spread
+            sweep V over 10 m/s .. 20 m/s by 10 m/s
+                show F
+            """);
+        JsonObject root = JsonParser.parseString(Cli.run("eval", "--format", "json", calc.toString()).out()).getAsJsonObject();
+        JsonArray rows = root.getAsJsonArray("sweeps").get(0).getAsJsonObject().getAsJsonArray("rows");
+        assertEquals("pass", rows.get(0).getAsJsonObject().getAsJsonArray("verdicts").get(0).getAsString());
+        assertEquals("fail at bound", rows.get(1).getAsJsonObject().getAsJsonArray("verdicts").get(0).getAsString());
+    }
+
+    @Test
     void csvWritesOneSweepsTableOnRequest() throws IOException {
         Path calc = Cli.write(dir, "w.plumb", CALC);
         List<String> rows = Cli.run("eval", "--format", "csv", "--sweep", "V", calc.toString()).out().lines().toList();
