@@ -104,8 +104,9 @@ final class Analyzer {
             shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && spreads.containsKey(v.name())
                 && declared.own().get(v.name()) == st ? v.withSpread(spreads.get(v.name())) : row);
         }
-        Map<String, ModelForm> modelForms = ModelForms.of(statements, declared.own(), evaluated.values(), scope, text, units,
-            budget);
+        Map<String, ModelForm> modelForms = new LinkedHashMap<>(ModelForms.of(statements, declared.own(), evaluated.values(),
+            scope, text, units, budget));
+        ModelForms.downstream(modelForms, study).forEach(modelForms::putIfAbsent);
         if (!modelForms.isEmpty()) {
             shown.replaceAll((st, row) -> row instanceof Row.ValueRow v && modelForms.containsKey(v.name())
                 && declared.own().get(v.name()) == st ? v.withModelForm(modelForms.get(v.name())) : row);

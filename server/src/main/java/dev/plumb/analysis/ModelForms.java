@@ -43,6 +43,57 @@ final class ModelForms {
         return out;
     }
 
+    /**
+     * The model forms {@code direct} (each at its call) carried on to the own values computed from
+     * those calls: the document evaluated again with each other entry's value in place of the one
+     * called. A value that several choices reach keeps the widest range and counts the others; a
+     * value with a model form of its own keeps that. Within the budget: a choice whose runs cost
+     * more than it allows is carried nowhere.
+     */
+    static Map<String, ModelForm> downstream(Map<String, ModelForm> direct, StudyRun study) {
+        Map<String, ModelForm> out = new LinkedHashMap<>();
+        Map<String, Integer> reached = new LinkedHashMap<>();
+        for (var source : direct.entrySet()) {
+            Binding.ValueBinding at = study.base().get(source.getKey());
+            if (at == null || !at.value().known()) continue;
+            List<ModelForm.Entry> choices = source.getValue().entries();
+            List<Environment> runs = new ArrayList<>();
+            try {
+                for (ModelForm.Entry e : choices.subList(1, choices.size())) {
+                    Value v = at.value();
+                    StudyRun.Outcome o = study.run(Map.of(source.getKey(), new Value(e.si(), v.dimension(), v.temperature(),
+                        v.notes(), v.angle())), false);
+                    if (o.stopped()) throw new Budget.Exhausted(Budget.Limit.TIME);
+                    runs.add(o.values());
+                }
+            } catch (Budget.Exhausted e) {
+                continue;
+            }
+            for (String name : study.dependentsOf(source.getKey())) {
+                Binding.ValueBinding base = study.base().get(name);
+                if (base == null || !base.value().known() || direct.containsKey(name)) continue;
+                List<ModelForm.Entry> values = new ArrayList<>();
+                values.add(new ModelForm.Entry(choices.get(0).name(), base.value().si()));
+                for (int i = 0; i < runs.size(); i++) {
+                    Binding.ValueBinding there = runs.get(i).get(name);
+                    if (there == null || !there.value().known() || !Double.isFinite(there.value().si())) {
+                        values = null;
+                        break;
+                    }
+                    values.add(new ModelForm.Entry(choices.get(i + 1).name(), there.value().si()));
+                }
+                if (values == null) continue;
+                ModelForm m = ModelForm.of(values, source.getKey());
+                if (m.high() == m.low()) continue;
+                reached.merge(name, 1, Integer::sum);
+                ModelForm kept = out.get(name);
+                if (kept == null || m.relativeWidth() > kept.relativeWidth()) out.put(name, m);
+            }
+        }
+        out.replaceAll((name, m) -> m.withOthers(reached.get(name) - 1));
+        return out;
+    }
+
     /** The model form at one call: the entry called and each valid alternative there; null with fewer than two. */
     private static ModelForm of(Expr.Call call, Binding callee, Binding.ValueBinding here, Evaluator quiet,
                                 RangeAdvice advice) {

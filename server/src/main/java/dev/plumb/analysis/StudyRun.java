@@ -150,6 +150,12 @@ final class StudyRun {
         return new Outcome(values, rows, keep ? reporter.all() : List.of(), pass.outOfTime());
     }
 
+    /** Every own name that depends on {@code name}, directly or not, in no particular order. */
+    Set<String> dependentsOf(String name) {
+        prepare();
+        return downstream.computeIfAbsent(Set.of(name), this::dependents);
+    }
+
     /** Every own name that depends, directly or not, on one of {@code given} (not those themselves). */
     private Set<String> dependents(Set<String> given) {
         Set<String> out = new LinkedHashSet<>();

@@ -53,6 +53,10 @@ final class ValueExport {
                     JsonObject m = new JsonObject();
                     m.addProperty("lowSi", v.modelForm().low());
                     m.addProperty("highSi", v.modelForm().high());
+                    if (v.modelForm().through() != null) {
+                        m.addProperty("through", v.modelForm().through());
+                        m.addProperty("others", v.modelForm().others());
+                    }
                     JsonArray entries = new JsonArray();
                     for (dev.plumb.analysis.ModelForm.Entry e : v.modelForm().entries()) {
                         JsonObject x = new JsonObject();

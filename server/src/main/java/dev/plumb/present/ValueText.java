@@ -66,7 +66,8 @@ public final class ValueText {
 
     /**
      * "model form: 0.39 .. 0.47 over 3 valid entries of the family (cd_a 0.42, cd_b 0.39, cd_c 0.47)":
-     * how much the choice of formula matters here; "" without one.
+     * how much the choice of formula matters here; through another definition's choice, "model form
+     * through Cd: 2.1 kN .. 2.5 kN over 3 valid entries for Cd (cd_a 2.2 kN, …)"; "" without one.
      */
     public static String modelForm(Row.ValueRow row) {
         dev.plumb.analysis.ModelForm m = row.modelForm();
@@ -75,9 +76,13 @@ public final class ValueText {
         for (dev.plumb.analysis.ModelForm.Entry e : m.entries()) {
             each.add(e.name() + " " + of(Value.of(e.si(), row.value().dimension()), row.display(), 3));
         }
-        return "model form: " + of(Value.of(m.low(), row.value().dimension()), row.display(), 3) + " .. "
-            + of(Value.of(m.high(), row.value().dimension()), row.display(), 3) + " over " + m.entries().size()
-            + " valid entries of the family (" + String.join(", ", each) + ")";
+        String range = of(Value.of(m.low(), row.value().dimension()), row.display(), 3) + " .. "
+            + of(Value.of(m.high(), row.value().dimension()), row.display(), 3) + " over " + m.entries().size();
+        if (m.through() == null) return "model form: " + range + " valid entries of the family (" + String.join(", ", each) + ")";
+        String others = m.others() == 0 ? "" : "; " + m.others() + (m.others() == 1 ? " other definition's" : " other definitions'")
+            + " choice of formula reaches it too, with a narrower range";
+        return "model form through " + m.through() + ": " + range + " valid entries for " + m.through() + " ("
+            + String.join(", ", each) + ")" + others;
     }
 
     /** "±11 %": the spread relative to the value, the short form; "" without a spread or for a value of zero or on a scale. */

@@ -38,6 +38,57 @@ class ModelFormTest {
     }
 
     @Test
+    void theChoiceIsCarriedToTheValuesComputedFromIt() {
+        // A float of our own. F = Cd · A · q is linear in Cd, so F with each entry in place of the one called
+        // is F · Cd_entry / Cd, and P = F · V likewise; the range of F is [F·low/Cd, F·high/Cd].
+        // The hull friction is a second choice (the plate-friction family) reaching F_total only, with the
+        // narrower relative range there: F_total keeps the widest and counts the other.
+        Analysis a = Fixture.analyze("""
+            input d = 0.2 m
+            input V = 3 m/s
+            Re = 1.2 kg/m^3 * V * d / 1.8e-5 Pa*s
+            Cd = cd_sphere(Re)
+            A = pi * d^2 / 4 as frontal
+            F = Cd * A * 0.5 * 1.2 kg/m^3 * V^2 in N
+            P = F * V in W
+            Re_h = V * 1.5 m / 1.0e-6 m^2/s
+            Cf = cf_plate_turb_avg(Re_h)
+            S = 0.6 m^2 as wetted
+            D_f = Cf * S * 0.5 * 1000 kg/m^3 * V^2 in N
+            F_total = F + D_f in N
+            """);
+        ModelForm cd = Fixture.value(a, "Cd").modelForm();
+        Row.ValueRow f = Fixture.value(a, "F");
+        ModelForm m = f.modelForm();
+        assertEquals("Cd", m.through());
+        assertEquals(cd.entries().size(), m.entries().size());
+        double ratio = f.value().si() / Fixture.value(a, "Cd").value().si();
+        for (int i = 0; i < cd.entries().size(); i++) {
+            assertEquals(cd.entries().get(i).name(), m.entries().get(i).name());
+            assertEquals(cd.entries().get(i).si() * ratio, m.entries().get(i).si(), 1e-12 * f.value().si());
+        }
+        assertEquals(cd.low() * ratio, m.low(), 1e-12 * f.value().si());
+        assertEquals(cd.high() * ratio, m.high(), 1e-12 * f.value().si());
+        assertEquals(0, m.others());
+        ModelForm p = Fixture.value(a, "P").modelForm();
+        assertEquals(cd.high() * ratio * 3, p.high(), 1e-12 * Fixture.value(a, "P").value().si());
+        assertNull(Fixture.value(a, "Re").modelForm(), "nothing upstream of the call carries it");
+
+        // F_total = F + D_f, both choices reach it: through Cd, F_total ranges over F·Cd_i/Cd + D_f; through Cf,
+        // over F + D_f·Cf_j/Cf. It keeps the wider of the two and counts the other.
+        ModelForm cf = Fixture.value(a, "Cf").modelForm();
+        double fv = f.value().si();
+        double df = Fixture.value(a, "D_f").value().si();
+        double cfv = Fixture.value(a, "Cf").value().si();
+        double widthCd = (cd.high() - cd.low()) * ratio;
+        double widthCf = (cf.high() - cf.low()) * df / cfv;
+        ModelForm total = Fixture.value(a, "F_total").modelForm();
+        assertEquals(widthCd > widthCf ? "Cd" : "Cf", total.through());
+        assertEquals(Math.max(widthCd, widthCf), total.high() - total.low(), 1e-9 * (fv + df));
+        assertEquals(1, total.others());
+    }
+
+    @Test
     void aCorrelationWithoutAFamilyHasNone() {
         Analysis a = Fixture.analyze("""
             correlation cd_strut(Re)
