@@ -48,13 +48,8 @@ final class EvalCommand implements Callable<Integer> {
         description = "list under NAME each tolerance's and stated accuracy's share of its variance, largest first")
     String sensitivity;
 
-    @picocli.CommandLine.Option(names = "--monte-carlo", paramLabel = "N",
-        description = "also estimate every spread from N Monte Carlo samples of the tolerances (at most 1000000)")
-    int samples;
-
-    @picocli.CommandLine.Option(names = "--seed", paramLabel = "SEED", defaultValue = "20261202",
-        description = "the Monte Carlo samples' random seed (default: ${DEFAULT-VALUE}, the same samples every run)")
-    long seed;
+    @picocli.CommandLine.Mixin
+    MonteCarloOptions monteCarlo;
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -87,11 +82,7 @@ final class EvalCommand implements Callable<Integer> {
             err.println("plumb: --trajectory and --sweep each choose the one table --format csv writes: give one of them");
             return Main.USAGE;
         }
-        if (samples < 0 || samples > dev.plumb.analysis.Settings.MAX_SAMPLES) {
-            err.println("plumb: --monte-carlo takes 0 to " + dev.plumb.analysis.Settings.MAX_SAMPLES + " samples, not " + samples);
-            return Main.USAGE;
-        }
-        Workspace workspace = new Workspace(common.sources(), common.settings().withSamples(samples, seed));
+        Workspace workspace = new Workspace(common.sources(), monteCarlo.applied(common.settings()));
         List<Batch.Checked> results = Batch.check(workspace, List.of(file), 1);
         Batch.Checked checked = results.get(0);
         Analysis a = checked.analysis();

@@ -40,6 +40,9 @@ final class ReportCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
+    @Mixin
+    MonteCarloOptions monteCarlo;
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -69,7 +72,7 @@ final class ReportCommand implements Callable<Integer> {
             err.println("plumb: " + e.getMessage());
             return Main.USAGE;
         }
-        Workspace workspace = new Workspace(common.sources(), common.settings());
+        Workspace workspace = new Workspace(common.sources(), monteCarlo.applied(common.settings()));
         List<Batch.Checked> results = Batch.check(workspace, files, Runtime.getRuntime().availableProcessors());
         String made = LocalDate.now().toString();
         List<ContentsPage.Entry> entries = new ArrayList<>();

@@ -70,6 +70,22 @@ class ReportCliTest {
     }
 
     @Test
+    void aReportCarriesTheMonteCarloEstimateAskedFor() throws IOException {
+        // F = 0.6 kg/m · V² with V = 20 ± 1 m/s: 240 N, to first order ± 2·(1/20)·240 N = 24 N; the samples
+        // (2000, the default seed) agree with it to the digits shown, as eval's own test finds.
+        Path calc = Cli.write(dir, "w.plumb", "input V = 20 m/s ± 1 m/s\nF = 0.6 kg/m * V^2 in N\n");
+        Path page = dir.resolve("w.html");
+        assertEquals(0, Cli.run("report", "--monte-carlo", "2000", calc.toString(), "-o", page.toString()).exitCode());
+        Document d = Jsoup.parse(Files.readString(page, StandardCharsets.UTF_8));
+        String spread = d.select("p.spread").text();
+        assertTrue(spread.contains("Monte Carlo: 240 N ± 24 N (mean ± standard deviation, 2000 samples, seed 20261202)"),
+            spread);
+        Cli refused = Cli.run("report", "--monte-carlo", "2000001", calc.toString());
+        assertEquals(2, refused.exitCode());
+        assertTrue(refused.err().contains("--monte-carlo takes 0 to 1000000 samples, not 2000001"), refused.err());
+    }
+
+    @Test
     void oneCalcGoesBesideItOrWhereTheOutputSays() throws IOException {
         Path calc = Cli.write(dir, "mast.plumb", "title \"Mast\"\ninput V = 20 m/s\nq = 0.5 * 1.2 kg/m^3 * V^2\n");
         Cli beside = Cli.run("report", calc.toString());
