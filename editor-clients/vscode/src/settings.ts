@@ -18,6 +18,8 @@ export interface ServerSettings {
   debounceMs?: number;
   diagnosticsOnSaveOnly?: boolean;
   maxFileBytes?: number;
+  monteCarloSamples?: number;
+  monteCarloSeed?: number;
   inlayHints?: boolean;
   codeLens?: boolean;
   valueDiagnostics?: boolean;
@@ -31,6 +33,8 @@ export const SERVER_SETTING_KEYS = [
   'debounceMs',
   'evaluateOnSaveOnly',
   'maxFileBytes',
+  'monteCarloSamples',
+  'monteCarloSeed',
 ] as const;
 
 /** The settings that say how the server is started; a change to one needs a restart. */
@@ -58,6 +62,10 @@ export function serverSettings(settings: SettingsReader): ServerSettings {
   if (typeof onSave === 'boolean') out.diagnosticsOnSaveOnly = onSave;
   const maxBytes = wholeNumber(settings.get('maxFileBytes'));
   if (maxBytes !== undefined) out.maxFileBytes = maxBytes;
+  const samples = wholeNumber(settings.get('monteCarloSamples'));
+  if (samples !== undefined) out.monteCarloSamples = samples;
+  const seed = wholeNumber(settings.get('monteCarloSeed'));
+  if (seed !== undefined) out.monteCarloSeed = seed;
   const display = settings.get<unknown>('showValuesAs');
   switch (display) {
     case 'inlayHints':

@@ -11,13 +11,14 @@ function reader(values: Record<string, unknown>): SettingsReader {
 /** The defaults of package.json, as the editor merges them into every read. */
 const DEFAULTS = {
   significantFigures: 4, criticalReynolds: null, showValuesAs: 'auto', debounceMs: 100,
-  evaluateOnSaveOnly: false, maxFileBytes: 2097152,
+  evaluateOnSaveOnly: false, maxFileBytes: 2097152, monteCarloSamples: 0, monteCarloSeed: 20261202,
 };
 
 describe('server settings', () => {
   it('sends the defaults under the server\'s own keys, with no Reynolds number and no value channel', () => {
     assert.deepEqual(serverSettings(reader(DEFAULTS)), {
       significantFigures: 4, debounceMs: 100, diagnosticsOnSaveOnly: false, maxFileBytes: 2097152,
+      monteCarloSamples: 0, monteCarloSeed: 20261202,
     });
   });
 

@@ -221,7 +221,8 @@ final class Analyses {
     /** The engine's options from the server's settings as they are now. */
     private Settings engineSettings() {
         ServerSettings now = settings.get();
-        return new Settings(now.digits(), Settings.DEFAULT.equalityTolerance(), now.criticalReynolds());
+        return new Settings(now.digits(), Settings.DEFAULT.equalityTolerance(), now.criticalReynolds())
+            .withSamples(now.monteCarloSamples(), now.monteCarloSeed());
     }
 
     /** The engine on a document's text; null when a newer edit made the run pointless on the way. */
