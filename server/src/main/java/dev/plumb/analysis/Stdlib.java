@@ -190,7 +190,8 @@ public final class Stdlib {
                 });
                 all.addAll(Builtins.names());
                 v = Collections.unmodifiableSortedSet(all);
-                visible = v;
+                // While the name list is being made it grows file by file: nothing to keep yet.
+                if (!indexing) visible = v;
             }
             return v;
         }
