@@ -85,9 +85,12 @@ transition  : TRANSITION name ASSIGN NUMBER note?;
  * A study that varies one value over a range and tabulates results: `sweep V over 10 m/s .. 40 m/s
  * by 5 m/s show F_D in kN, Re` (the `show` part usually on an indented line); `in 7 steps` gives
  * seven values from end to end, `in 7 log steps` spaces them evenly in the logarithm (the word
- * before `steps` must be `log`, which the engine checks).
+ * before `steps` must be `log`, which the engine checks). A second value after a comma,
+ * `…, d over 0.1 m .. 0.3 m in 3 steps`, makes a grid: every pair of values.
  */
-sweep       : SWEEP varied=name OVER expr DOTDOT expr ( BY expr | IN NUMBER spacing=name? STEPS ) SHOW shown ( COMMA shown )* note?;
+sweep       : SWEEP axis ( COMMA across=axis )? SHOW shown ( COMMA shown )* note?;
+/** One value a sweep varies and its values: `V over 10 m/s .. 40 m/s by 5 m/s`; a second one, after a comma, makes a grid. */
+axis        : varied=name OVER expr DOTDOT expr ( BY expr | IN NUMBER spacing=name? STEPS );
 shown       : name ( IN UNIT )?;
 /** A named variation of the calc: `case storm: V = 45 m/s, T = -10 degC` (right sides see the base values). */
 caseDef     : CASE label=name COLON setting ( COMMA setting )* note?;

@@ -126,6 +126,7 @@ final class ResolutionPass {
         List<Ident> names = new ArrayList<>();
         if (s instanceof Statement.Sweep w) {
             names.add(w.name());
+            if (w.across() != null) names.add(w.across().name());
             w.shown().forEach(x -> names.add(x.name()));
         }
         if (s instanceof Statement.Case c) c.settings().forEach(x -> names.add(x.name()));

@@ -122,12 +122,14 @@ public sealed interface Row {
     /**
      * A sweep: the calc evaluated again for each value of {@code varied}, shown in {@code unit}.
      * {@code columns} are the results shown, {@code checks} the document's checks (as written), and
-     * each {@link SweepLine} one value of the sweep with its results in column order. The rows
+     * each {@link SweepLine} one value of the sweep with its results in column order; a grid also
+     * varies {@code across} (null for a one-way sweep), each line one pair of values. The rows
      * that ran out of the run's budget are not here: {@code stopped} says the sweep was cut short.
      * The engine does not word it: {@code dev.plumb.present.SweepText} does.
      */
-    record SweepRow(Span span, String varied, dev.plumb.units.Unit unit, java.util.List<SweepColumn> columns,
-                    java.util.List<String> checks, java.util.List<SweepLine> lines, boolean stopped, String note)
+    record SweepRow(Span span, String varied, dev.plumb.units.Unit unit, SweepColumn across,
+                    java.util.List<SweepColumn> columns, java.util.List<String> checks, java.util.List<SweepLine> lines,
+                    boolean stopped, String note)
         implements Row {
         public SweepRow {
             columns = java.util.List.copyOf(columns);
@@ -141,12 +143,12 @@ public sealed interface Row {
     }
 
     /**
-     * One value of a sweep: the value given, each shown result (unknown where it could not be
+     * One value of a sweep: the value given (and, in a grid, the second value, else null), each shown result (unknown where it could not be
      * computed), each check's verdict (in the order of {@link SweepRow#checks}), the definitions
      * whose correlation calls lie outside a stated range here, and the first other finding of
      * this row that the base calc does not have (null when none).
      */
-    record SweepLine(Value given, java.util.List<Value> results, java.util.List<Verdict> verdicts,
+    record SweepLine(Value given, Value across, java.util.List<Value> results, java.util.List<Verdict> verdicts,
                      java.util.List<String> outside, String trouble) {
         public SweepLine {
             results = java.util.List.copyOf(results);

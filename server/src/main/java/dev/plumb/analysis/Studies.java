@@ -50,7 +50,7 @@ final class Studies {
                 reporter.report(Code.LIMIT_BUDGET, w.name().span(), "this sweep was stopped: "
                     + (e.limit == Budget.Limit.TIME ? "the run's " + Budget.SECONDS + " s are up" : "its range needs more work "
                     + "than any calc does") + "; sweep fewer values, or look for a formula that does repeated work");
-                rows.put(s, new Row.SweepRow(w.span(), w.name().text(), null, List.of(), List.of(), List.of(), true,
+                rows.put(s, new Row.SweepRow(w.span(), w.name().text(), null, null, List.of(), List.of(), List.of(), true,
                     w.note()));
             }
         }

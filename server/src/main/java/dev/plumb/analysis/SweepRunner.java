@@ -37,6 +37,9 @@ final class SweepRunner {
     private final UnitRegistry units;
     private final Budget budget;
     private final int digits;
+    /** The second value of the grid being run and its unit, for naming its rows; null in a one-way sweep. */
+    private String acrossName;
+    private Unit acrossUnit;
     /** The real run's findings, by code and place: a row that only repeats one of them adds nothing. */
     private final Set<List<Object>> baseFindings = new java.util.HashSet<>();
 
@@ -66,9 +69,43 @@ final class SweepRunner {
             if (own.containsKey(name) || scope.lookup(name) != null) invalid(s.name().span(), refusal(name));
             return empty(s, null, columns, checkSources);
         }
-        Values values = values(s, ends, swept);
+        Values values = values(s.axis(), ends, swept);
         if (values == null) return empty(s, swept.display(), columns, checkSources);
-        List<Row.SweepLine> lines = new ArrayList<>(values.given().size());
+        // A grid: every value of the first with every value of the second.
+        Statement.SweepAxis second = s.across();
+        String acrossName = second == null ? null : second.name().text();
+        Values across = null;
+        if (second != null) {
+            Binding.ValueBinding other = study.base().get(acrossName);
+            if (!(own.get(acrossName) instanceof Statement.Definition) || other == null) {
+                if (own.containsKey(acrossName) || scope.lookup(acrossName) != null) {
+                    invalid(second.name().span(), refusal(acrossName));
+                }
+                return empty(s, swept.display(), columns, checkSources);
+            }
+            if (acrossName.equals(name)) {
+                invalid(second.name().span(), "a grid varies two different values: " + name + " is varied already");
+                return empty(s, swept.display(), columns, checkSources);
+            }
+            across = values(second, ends, other);
+            if (across == null) return empty(s, swept.display(), columns, checkSources);
+            long cells = (long) values.given().size() * across.given().size();
+            if (cells > MAX_ROWS) {
+                invalid(Span.cover(s.name().span(), second.name().span()), "this grid would have " + String.format(
+                    java.util.Locale.ROOT, "%,d", cells) + " rows (" + values.given().size() + " × " + across.given().size()
+                    + "), more than the " + String.format(java.util.Locale.ROOT, "%,d", MAX_ROWS) + " a sweep may have: "
+                    + "take larger steps or fewer steps");
+                return empty(s, swept.display(), columns, checkSources);
+            }
+        }
+        this.acrossName = across == null ? null : acrossName;
+        this.acrossUnit = across == null ? null : across.unit();
+        List<Value[]> pairs = new ArrayList<>();
+        for (Value x : values.given()) {
+            if (across == null) pairs.add(new Value[] {x, null});
+            else for (Value y : across.given()) pairs.add(new Value[] {x, y});
+        }
+        List<Row.SweepLine> lines = new ArrayList<>(pairs.size());
         List<Integer> outside = new ArrayList<>();
         List<Integer> failing = new ArrayList<>();
         List<Integer> troubled = new ArrayList<>();
@@ -76,8 +113,10 @@ final class SweepRunner {
         String firstTrouble = null;
         Set<String> failingChecks = new LinkedHashSet<>();
         boolean stopped = false;
-        for (Value x : values.given()) {
-            StudyRun.Outcome o = study.withSpreads(study.run(Map.of(name, x), true), statements);
+        for (Value[] pair : pairs) {
+            Value x = pair[0];
+            Map<String, Value> given = pair[1] == null ? Map.of(name, x) : Map.of(name, x, acrossName, pair[1]);
+            StudyRun.Outcome o = study.withSpreads(study.run(given, true), statements);
             if (o.stopped()) {
                 stopped = true;
                 break;
@@ -110,14 +149,14 @@ final class SweepRunner {
                 if (c.verdict() == Row.Verdict.FAILED) failingChecks.add(c.source());
                 if (c.verdict() == Row.Verdict.FAILS_AT_BOUND) failingChecks.add(c.source() + " at its bounds");
             }
-            Row.SweepLine line = new Row.SweepLine(x, results, verdicts, outsideHere, trouble);
+            Row.SweepLine line = new Row.SweepLine(x, pair[1], results, verdicts, outsideHere, trouble);
             if (line.anyFails()) failing.add(row);
             lines.add(line);
         }
         Unit unit = values.unit();
         if (stopped) {
             reporter.report(Code.LIMIT_BUDGET, s.name().span(), "this sweep was stopped after " + lines.size() + " of "
-                + values.given().size() + " rows: the run's " + Budget.SECONDS + " s are up. Sweep fewer values, or "
+                + pairs.size() + " rows: the run's " + Budget.SECONDS + " s are up. Sweep fewer values, or "
                 + "look for a formula that does repeated work");
         }
         if (!outside.isEmpty()) {
@@ -134,8 +173,9 @@ final class SweepRunner {
                 + " a value could not be computed or a finding came up that the base calc does not have; at the first, in "
                 + firstTrouble);
         }
-        return new Row.SweepRow(s.span(), name, unit, columns.stream().map(c -> new Row.SweepColumn(c.name(), c.unit()))
-            .toList(), checkSources, lines, stopped, s.note());
+        Row.SweepColumn acrossColumn = across == null ? null : new Row.SweepColumn(acrossName, across.unit());
+        return new Row.SweepRow(s.span(), name, unit, acrossColumn, columns.stream()
+            .map(c -> new Row.SweepColumn(c.name(), c.unit())).toList(), checkSources, lines, stopped, s.note());
     }
 
     /** A shown result and its unit. */
@@ -147,7 +187,7 @@ final class SweepRunner {
     }
 
     private Row.SweepRow empty(Statement.Sweep s, Unit unit, List<Column> columns, List<String> checks) {
-        return new Row.SweepRow(s.span(), s.name().text(), unit, columns.stream()
+        return new Row.SweepRow(s.span(), s.name().text(), unit, null, columns.stream()
             .map(c -> new Row.SweepColumn(c.name(), c.unit())).toList(), checks, List.of(), false, s.note());
     }
 
@@ -187,7 +227,7 @@ final class SweepRunner {
     }
 
     /** The values to give, from the range; null after a finding when there are none. */
-    private Values values(Statement.Sweep s, Evaluator ends, Binding.ValueBinding swept) {
+    private Values values(Statement.SweepAxis s, Evaluator ends, Binding.ValueBinding swept) {
         Value from = ends.eval(s.from());
         Value to = ends.eval(s.to());
         Value step = s.step() == null ? null : ends.eval(s.step());
@@ -301,10 +341,15 @@ final class SweepRunner {
         List<String> values = new ArrayList<>();
         for (int i = 0; i < rows.size() && i < 6; i++) {
             numbers.add(String.valueOf(rows.get(i)));
-            values.add(Shown.value(lines.get(rows.get(i) - 1).given(), unit, digits));
+            Row.SweepLine line = lines.get(rows.get(i) - 1);
+            String given = Shown.value(line.given(), unit, digits);
+            // In a grid each row is a pair: "V = 32 m/s and d = 0.2 m".
+            values.add(line.across() == null ? given : name + " = " + given + " and " + acrossName + " = "
+                + Shown.value(line.across(), acrossUnit, digits));
         }
         String more = rows.size() > 6 ? " and " + (rows.size() - 6) + " more" : "";
-        return (rows.size() == 1 ? "row " : "rows ") + String.join(", ", numbers) + more + " (" + name + " = "
-            + String.join(", ", values) + (rows.size() > 6 ? ", …" : "") + ")";
+        String listed = acrossName == null ? name + " = " + String.join(", ", values) : String.join("; ", values);
+        return (rows.size() == 1 ? "row " : "rows ") + String.join(", ", numbers) + more + " (" + listed
+            + (rows.size() > 6 ? ", …" : "") + ")";
     }
 }

@@ -162,6 +162,14 @@ final class ValueExport {
             o.addProperty("varied", w.varied());
             o.addProperty("line", a.lines().line(w.span().start()));
             if (units.get(0) != null) o.addProperty("unit", units.get(0).symbol());
+            Unit acrossUnit = SweepText.acrossUnit(w, units);
+            if (w.across() != null) {
+                // A grid: the second value varied, and each row's value of it beside `given`.
+                JsonObject across = new JsonObject();
+                across.addProperty("name", w.across().name());
+                if (acrossUnit != null) across.addProperty("unit", acrossUnit.symbol());
+                o.add("across", across);
+            }
             JsonArray shown = new JsonArray();
             for (int i = 0; i < w.columns().size(); i++) {
                 JsonObject c = new JsonObject();
@@ -178,6 +186,7 @@ final class ValueExport {
             for (Row.SweepLine l : w.lines()) {
                 JsonObject row = new JsonObject();
                 row.add("given", cell(l.given(), units.get(0), digits));
+                if (l.across() != null) row.add("across", cell(l.across(), acrossUnit, digits));
                 JsonArray results = new JsonArray();
                 for (int i = 0; i < l.results().size(); i++) results.add(cell(l.results().get(i), units.get(i + 1), digits));
                 row.add("results", results);

@@ -22,7 +22,8 @@ public final class SweepText {
         String rows = s.lines().size() + (s.lines().size() == 1 ? " row" : " rows");
         String stopped = s.stopped() ? ", stopped by the run's budget (see the finding)" : "";
         String none = s.lines().isEmpty() && !s.stopped() ? " (no values: see the finding)" : "";
-        return "sweep " + s.varied() + ": " + rows + stopped + none + (s.note() == null ? "" : "  " + s.note());
+        String varied = s.across() == null ? s.varied() : s.varied() + " × " + s.across().name();
+        return "sweep " + varied + ": " + rows + stopped + none + (s.note() == null ? "" : "  " + s.note());
     }
 
     /** The unit a column's numbers are in: its own, else the SI unit of the first known value's dimension; null when none is known. */
@@ -37,7 +38,10 @@ public final class SweepText {
         return unit == null || unit.symbol().isEmpty() ? name : name + " [" + unit.symbol() + "]";
     }
 
-    /** Each column's unit: the swept value's first, then each shown result's. */
+    /**
+     * Each column's unit: the swept value's first, then each shown result's, and last, in a grid,
+     * the second swept value's (see {@link #acrossUnit}).
+     */
     public static List<Unit> units(Row.SweepRow s) {
         List<Unit> out = new ArrayList<>();
         out.add(unitOf(s.unit(), s.lines().stream().map(Row.SweepLine::given).toList()));
@@ -45,14 +49,21 @@ public final class SweepText {
             int k = i;
             out.add(unitOf(s.columns().get(i).unit(), s.lines().stream().map(l -> l.results().get(k)).toList()));
         }
+        if (s.across() != null) out.add(unitOf(s.across().unit(), s.lines().stream().map(Row.SweepLine::across).toList()));
         return out;
     }
 
-    /** The header cells: the swept value, the results, then "checks" (when the calc has any) and "range". */
+    /** The unit of a grid's second value, from {@link #units}; null in a one-way sweep. */
+    public static Unit acrossUnit(Row.SweepRow s, List<Unit> units) {
+        return s.across() == null ? null : units.get(units.size() - 1);
+    }
+
+    /** The header cells: the swept value (both, in a grid), the results, then "checks" (when the calc has any) and "range". */
     public static List<String> header(Row.SweepRow s) {
         List<Unit> units = units(s);
         List<String> out = new ArrayList<>();
         out.add(heading(s.varied(), units.get(0)));
+        if (s.across() != null) out.add(heading(s.across().name(), acrossUnit(s, units)));
         for (int i = 0; i < s.columns().size(); i++) out.add(heading(s.columns().get(i).name(), units.get(i + 1)));
         if (!s.checks().isEmpty()) out.add("checks");
         if (anyOutside(s)) out.add("range");
@@ -63,6 +74,7 @@ public final class SweepText {
     public static List<String> cells(Row.SweepRow s, Row.SweepLine line, List<Unit> units, int digits) {
         List<String> out = new ArrayList<>();
         out.add(number(line.given(), units.get(0), digits));
+        if (s.across() != null) out.add(number(line.across(), acrossUnit(s, units), digits));
         for (int i = 0; i < line.results().size(); i++) out.add(number(line.results().get(i), units.get(i + 1), digits));
         if (!s.checks().isEmpty()) out.add(checks(s, line));
         if (anyOutside(s)) out.add(line.outside().isEmpty() ? "" : "outside: " + String.join(", ", line.outside()));

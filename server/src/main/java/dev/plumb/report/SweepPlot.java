@@ -9,7 +9,7 @@ import java.util.List;
 
 /**
  * A sweep in the report: its table, and for each shown result an inline SVG plot against the
- * swept value. Each row is a point: filled where every check passes and every correlation is in
+ * swept value (in a grid, one line per value of the second, each named at its end). Each row is a point: filled where every check passes and every correlation is in
  * its range, an open ring where a correlation lies outside its range, a cross where a check fails
  * (shapes, not colours, so the marks survive black-and-white printing). Log axes where the values
  * span decades.
@@ -21,6 +21,8 @@ final class SweepPlot {
     private static final int RIGHT = 14;
     private static final int TOP = 12;
     private static final int BOTTOM = 40;
+    /** The dash patterns of a grid's lines, in turn: solid, dashed, dotted, dash-dot. */
+    private static final String[] DASHES = {"", "6 3", "1.5 2.5", "6 2 1.5 2"};
 
     private SweepPlot() {
     }
@@ -105,10 +107,33 @@ final class SweepPlot {
         s.append("<text x=\"12\" y=\"").append(CurvePlot.fmt((TOP + HEIGHT - BOTTOM) / 2.0)).append("\" text-anchor=\"middle\" "
             + "transform=\"rotate(-90 12 ").append(CurvePlot.fmt((TOP + HEIGHT - BOTTOM) / 2.0)).append(")\">")
             .append(Html.text(label(yName, yUnit))).append("</text>");
-        List<String> run = new ArrayList<>();
-        for (double[] p : points) run.add(CurvePlot.fmt(xa.at(p[0])) + "," + CurvePlot.fmt(ya.at(p[1])));
-        s.append("<polyline class=\"result\" fill=\"none\" stroke=\"#1b1b1b\" stroke-width=\"1.4\" points=\"")
-            .append(String.join(" ", run)).append("\"/>");
+        // One line per value of a grid's second value (one line in all for a one-way sweep), told
+        // apart by its dashes and named at its end: shapes, not colours, survive printing.
+        java.util.Map<Double, List<double[]>> runs = new java.util.LinkedHashMap<>();
+        java.util.Map<Double, Value> acrossOf = new java.util.HashMap<>();
+        for (int i = 0; i < points.size(); i++) {
+            Value a = lines.get(i).across();
+            double key = a == null ? Double.NaN : a.si();
+            runs.computeIfAbsent(key, k -> new ArrayList<>()).add(points.get(i));
+            if (a != null) acrossOf.put(key, a);
+        }
+        Unit acrossUnit = SweepText.acrossUnit(w, units);
+        int k = 0;
+        for (var e : runs.entrySet()) {
+            List<String> run = new ArrayList<>();
+            for (double[] p : e.getValue()) run.add(CurvePlot.fmt(xa.at(p[0])) + "," + CurvePlot.fmt(ya.at(p[1])));
+            String dashes = DASHES[k++ % DASHES.length];
+            s.append("<polyline class=\"result\" fill=\"none\" stroke=\"#1b1b1b\" stroke-width=\"1.4\"")
+                .append(dashes.isEmpty() ? "" : " stroke-dasharray=\"" + dashes + "\"").append(" points=\"")
+                .append(String.join(" ", run)).append("\"/>");
+            Value a = acrossOf.get(e.getKey());
+            if (a != null) {
+                double[] last = e.getValue().get(e.getValue().size() - 1);
+                s.append(CurvePlot.text(xa.at(last[0]) - 4, ya.at(last[1]) - 5, "end", w.across().name() + " = "
+                    + SweepText.number(a, acrossUnit, 3) + (acrossUnit == null || acrossUnit.symbol().isEmpty() ? ""
+                    : " " + acrossUnit.symbol())));
+            }
+        }
         for (int i = 0; i < points.size(); i++) s.append(mark(lines.get(i), xa.at(points.get(i)[0]), ya.at(points.get(i)[1])));
         return s.append("</svg>").toString();
     }

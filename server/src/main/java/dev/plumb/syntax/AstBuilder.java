@@ -252,6 +252,17 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
 
     @Override
     public Object visitSweep(PlumbParser.SweepContext ctx) {
+        Statement.SweepAxis first = axis(ctx.axis(0));
+        Statement.SweepAxis across = ctx.across == null ? null : axis(ctx.across);
+        List<Statement.Shown> shown = new ArrayList<>();
+        for (PlumbParser.ShownContext s : ctx.shown()) {
+            shown.add(new Statement.Shown(ident(s.name()), s.UNIT() == null ? null : unitText(s.UNIT().getSymbol())));
+        }
+        return new Statement.Sweep(span(ctx), first.name(), first.from(), first.to(), first.step(), first.count(),
+            first.countSpan(), first.spacing(), across, shown, note(ctx.note()));
+    }
+
+    private Statement.SweepAxis axis(PlumbParser.AxisContext ctx) {
         List<PlumbParser.ExprContext> e = ctx.expr();
         Expr step = ctx.BY() != null ? expr(e.get(2)) : null;
         Integer count = null;
@@ -263,12 +274,8 @@ final class AstBuilder extends PlumbParserBaseVisitor<Object> {
             // A count is a whole number of values; anything else is the engine's to refuse with its words.
             count = written == Math.rint(written) && written <= Integer.MAX_VALUE ? (int) written : -1;
         }
-        List<Statement.Shown> shown = new ArrayList<>();
-        for (PlumbParser.ShownContext s : ctx.shown()) {
-            shown.add(new Statement.Shown(ident(s.name()), s.UNIT() == null ? null : unitText(s.UNIT().getSymbol())));
-        }
-        return new Statement.Sweep(span(ctx), ident(ctx.varied), expr(e.get(0)), expr(e.get(1)), step, count, countSpan,
-            ctx.spacing == null ? null : ident(ctx.spacing), shown, note(ctx.note()));
+        return new Statement.SweepAxis(ident(ctx.varied), expr(e.get(0)), expr(e.get(1)), step, count, countSpan,
+            ctx.spacing == null ? null : ident(ctx.spacing));
     }
 
     @Override

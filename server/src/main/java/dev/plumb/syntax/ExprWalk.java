@@ -66,6 +66,9 @@ public final class ExprWalk {
         }
         if (s instanceof Statement.Sweep w) {
             for (Expr e : new Expr[] {w.from(), w.to(), w.step()}) if (e != null) out.add(e);
+            if (w.across() != null) {
+                for (Expr e : new Expr[] {w.across().from(), w.across().to(), w.across().step()}) if (e != null) out.add(e);
+            }
         }
         if (s instanceof Statement.Case c) c.settings().forEach(x -> out.add(x.expr()));
         return out;

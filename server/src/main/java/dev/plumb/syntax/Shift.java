@@ -143,8 +143,11 @@ final class Shift {
                 columns, rows, ident(t.flow()), bounds(t.domain()));
         }
         if (s instanceof Statement.Sweep w) {
+            Statement.SweepAxis a = w.across();
+            Statement.SweepAxis across = a == null ? null : new Statement.SweepAxis(ident(a.name()), expr(a.from()),
+                expr(a.to()), expr(a.step()), a.count(), span(a.countSpan()), ident(a.spacing()));
             return new Statement.Sweep(span(w.span()), ident(w.name()), expr(w.from()), expr(w.to()), expr(w.step()),
-                w.count(), span(w.countSpan()), ident(w.spacing()),
+                w.count(), span(w.countSpan()), ident(w.spacing()), across,
                 each(w.shown(), x -> new Statement.Shown(ident(x.name()), unit(x.unit()))), w.note());
         }
         if (s instanceof Statement.Case c) {

@@ -224,10 +224,23 @@ public sealed interface Statement {
      * before {@code steps} (it must be {@code log}), null when none is written.
      */
     record Sweep(Span span, Ident name, Expr from, Expr to, Expr step, Integer count, Span countSpan, Ident spacing,
-                 List<Shown> shown, String note) implements Statement {
+                 SweepAxis across, List<Shown> shown, String note) implements Statement {
         public Sweep {
             shown = List.copyOf(shown);
         }
+
+        /** The value varied first (the rows of a one-way sweep), as an axis. */
+        public SweepAxis axis() {
+            return new SweepAxis(name, from, to, step, count, countSpan, spacing);
+        }
+    }
+
+    /**
+     * One value a sweep varies and how: from, to, and a step ({@code by}) or a count of values
+     * ({@code in N [log] steps}: count, where it is written, and the spacing word); {@code across}
+     * of a {@link Sweep} is the second value of a grid (null for none).
+     */
+    record SweepAxis(Ident name, Expr from, Expr to, Expr step, Integer count, Span countSpan, Ident spacing) {
     }
 
     /** A result a study shows, with the unit to show it in (null: its own display unit). */

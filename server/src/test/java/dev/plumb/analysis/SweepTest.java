@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.plumb.diagnostics.Code;
+import dev.plumb.diagnostics.Diagnostic;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
@@ -20,6 +21,62 @@ class SweepTest {
     /** The exponent n of y ∝ x^n between two rows: ln(y2/y1) / ln(x2/x1). */
     private static double slope(Row.SweepLine a, Row.SweepLine b, int column) {
         return Math.log(b.results().get(column).si() / a.results().get(column).si()) / Math.log(b.given().si() / a.given().si());
+    }
+
+    @Test
+    void aGridGivesEveryPairOfValuesItsOwnRow() {
+        // A pole of our own: F = ½ρ Cd d L V² with ρ = 1.2 kg/m³, Cd = 1.0, L = 1 m, so F = 0.6 kg/m³ · V² · d · 1 m:
+        // 6 N at V = 10 m/s, d = 0.1 m, scaling with V² and with d: the grid's rows are V-major.
+        Analysis a = Fixture.analyze("""
+            input V = 20 m/s
+            input d = 0.2 m
+            F = 0.6 kg/m^3 * V^2 * d * 1 m in N
+            check F <= 60 N
+            sweep V over 10 m/s .. 30 m/s by 10 m/s, d over 0.1 m .. 0.3 m in 3 steps
+                show F
+            """);
+        Row.SweepRow w = sweep(a);
+        assertEquals("d", w.across().name());
+        assertEquals(9, w.lines().size());
+        double[] vs = {10, 20, 30};
+        double[] ds = {0.1, 0.2, 0.3};
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                Row.SweepLine l = w.lines().get(3 * i + j);
+                assertEquals(vs[i], l.given().si(), 1e-12);
+                assertEquals(ds[j], l.across().si(), 1e-12);
+                assertEquals(0.6 * vs[i] * vs[i] * ds[j], l.results().get(0).si(), 1e-9);
+                boolean holds = 0.6 * vs[i] * vs[i] * ds[j] <= 60;
+                assertEquals(holds ? Row.Verdict.PASSED : Row.Verdict.FAILED, l.verdicts().get(0), "V " + vs[i] + ", d " + ds[j]);
+            }
+        }
+        // 72 N, 108 N and 162 N fail: rows 6, 8 and 9, each named by its pair.
+        Diagnostic failed = a.diagnostics().stream().filter(d -> d.code() == Code.SWEEP_CHECK_FAILED).findFirst().orElseThrow();
+        assertTrue(failed.message().contains("rows 6, 8, 9 (V = 20 m/s and d = 0.3 m; V = 30 m/s and d = 0.2 m; "
+            + "V = 30 m/s and d = 0.3 m)"), failed.message());
+    }
+
+    @Test
+    void aGridOfOneValueTwiceOrOfTooManyRowsIsRefused() {
+        Analysis twice = Fixture.analyze("""
+            input V = 20 m/s
+            F = 0.6 kg/m * V^2 in N
+            sweep V over 10 m/s .. 30 m/s by 10 m/s, V over 1 m/s .. 2 m/s by 1 m/s
+                show F
+            """);
+        assertTrue(twice.diagnostics().stream().anyMatch(d -> d.code() == Code.SWEEP_INVALID
+            && d.message().contains("a grid varies two different values")), twice.diagnostics().toString());
+        // 200 × 100 = 20,000 rows, over the 10,000 a sweep may have.
+        Analysis many = Fixture.analyze("""
+            input V = 20 m/s
+            input d = 0.2 m
+            F = 0.6 kg/m^3 * V^2 * d * 1 m in N
+            sweep V over 1 m/s .. 200 m/s by 1 m/s, d over 0.01 m .. 1 m in 100 steps
+                show F
+            """);
+        assertTrue(many.diagnostics().stream().anyMatch(d -> d.code() == Code.SWEEP_INVALID
+            && d.message().contains("20,000 rows (200 × 100)")), many.diagnostics().toString());
+        assertEquals(0, sweep(many).lines().size());
     }
 
     @Test

@@ -87,6 +87,28 @@ class StudiesCliTest {
     }
 
     @Test
+    void jsonOfAGridNamesItsSecondValueAndGivesItInEveryRow() throws IOException {
+        // F = 0.6 kg/m³ · V² · d · 1 m: at V = 20 m/s and d = 0.3 m, 72 N.
+        Path calc = Cli.write(dir, "g.plumb", """
+            input V = 20 m/s
+            input d = 0.2 m
+            F = 0.6 kg/m^3 * V^2 * d * 1 m in N
+            sweep V over 10 m/s .. 20 m/s by 10 m/s, d over 0.1 m .. 0.3 m in 3 steps
+                show F
+            """);
+        JsonObject grid = JsonParser.parseString(Cli.run("eval", "--format", "json", calc.toString()).out()).getAsJsonObject()
+            .getAsJsonArray("sweeps").get(0).getAsJsonObject();
+        assertEquals("d", grid.getAsJsonObject("across").get("name").getAsString());
+        assertEquals("m", grid.getAsJsonObject("across").get("unit").getAsString());
+        JsonArray rows = grid.getAsJsonArray("rows");
+        assertEquals(6, rows.size());
+        JsonObject last = rows.get(5).getAsJsonObject();
+        assertEquals(20.0, last.getAsJsonObject("given").get("valueSi").getAsDouble(), 1e-12);
+        assertEquals(0.3, last.getAsJsonObject("across").get("valueSi").getAsDouble(), 1e-12);
+        assertEquals(72.0, last.getAsJsonArray("results").get(0).getAsJsonObject().get("valueSi").getAsDouble(), 1e-9);
+    }
+
+    @Test
     void csvWritesOneSweepsTableOnRequest() throws IOException {
         Path calc = Cli.write(dir, "w.plumb", CALC);
         List<String> rows = Cli.run("eval", "--format", "csv", "--sweep", "V", calc.toString()).out().lines().toList();

@@ -226,6 +226,29 @@ class CalcReportTest {
     }
 
     @Test
+    void aGridIsPlottedAsOneNamedLinePerValueOfItsSecondValue() {
+        // F = 0.6 kg/m³ · V² · d · 1 m over V 10, 20, 30 m/s and d 0.1, 0.2 m: six rows, two lines of three points,
+        // the second dashed, each named at its end.
+        Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("grid.plumb"), """
+            input V = 20 m/s
+            input d = 0.2 m
+            F = 0.6 kg/m^3 * V^2 * d * 1 m in N
+            sweep V over 10 m/s .. 30 m/s by 10 m/s, d over 0.1 m .. 0.2 m by 0.1 m
+                show F
+            """);
+        Document page = report(a);
+        assertEquals(List.of("V [m/s]", "d [m]", "F [N]"), page.select("div.sweep table.sweep-table tr").get(0).select("th").eachText());
+        assertEquals(7, page.select("div.sweep table.sweep-table tr").size(), "a header and six rows");
+        Element plot = page.selectFirst("div.sweep svg.sweep-plot");
+        assertEquals(2, plot.select("polyline.result").size());
+        assertEquals(3, plot.select("polyline.result").get(0).attr("points").split(" ").length);
+        assertFalse(plot.select("polyline.result").get(0).hasAttr("stroke-dasharray"));
+        assertTrue(plot.select("polyline.result").get(1).hasAttr("stroke-dasharray"));
+        assertEquals(List.of("d = 0.1 m", "d = 0.2 m"), plot.select("text").eachText().stream().filter(t -> t.startsWith("d = "))
+            .toList());
+    }
+
+    @Test
     void aValueShowsItsSpreadAndACaseItsRatios() {
         // F = 0.6 kg/m · V²: 240 N ± 24 N at V = 20 ± 1 m/s (2 · 5 %); doubled V, four times F.
         Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("t.plumb"), """
