@@ -9,7 +9,7 @@ import java.util.List;
 
 /**
  * A sweep in the report: its table, and for each shown result an inline SVG plot against the
- * swept value (in a grid, one line per value of the second, each named at its end). Each row is a point: filled where every check passes and every correlation is in
+ * swept value (in a grid, one line per value of the second, named in a legend beside the plot). Each row is a point: filled where every check passes and every correlation is in
  * its range, an open ring where a correlation lies outside its range, a cross where a check fails
  * (shapes, not colours, so the marks survive black-and-white printing). Log axes where the values
  * span decades.
@@ -21,6 +21,8 @@ final class SweepPlot {
     private static final int RIGHT = 14;
     private static final int TOP = 12;
     private static final int BOTTOM = 40;
+    /** The width a grid's legend adds on the right. */
+    private static final int LEGEND = 130;
     /** The dash patterns of a grid's lines, in turn: solid, dashed, dotted, dash-dot. */
     private static final String[] DASHES = {"", "6 3", "1.5 2.5", "6 2 1.5 2"};
 
@@ -90,8 +92,10 @@ final class SweepPlot {
         Unit yUnit = units.get(column + 1);
         String yName = w.columns().get(column).name();
         StringBuilder s = new StringBuilder();
-        s.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"sweep-plot\" viewBox=\"0 0 ").append(WIDTH).append(' ')
-            .append(HEIGHT).append("\" width=\"").append(WIDTH).append("\" height=\"").append(HEIGHT)
+        // A grid's legend stands to the right of the plot, where no line can run under it.
+        int width = WIDTH + (w.across() == null ? 0 : LEGEND);
+        s.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"sweep-plot\" viewBox=\"0 0 ").append(width).append(' ')
+            .append(HEIGHT).append("\" width=\"").append(width).append("\" height=\"").append(HEIGHT)
             .append("\" role=\"img\" aria-label=\"").append(Html.text(yName + " against " + w.varied())).append("\">");
         s.append("<rect x=\"").append(LEFT).append("\" y=\"").append(TOP).append("\" width=\"").append(WIDTH - LEFT - RIGHT)
             .append("\" height=\"").append(HEIGHT - BOTTOM - TOP).append("\" fill=\"none\" stroke=\"#1b1b1b\" stroke-width=\"0.8\"/>");
@@ -128,8 +132,13 @@ final class SweepPlot {
                 .append(String.join(" ", run)).append("\"/>");
             Value a = acrossOf.get(e.getKey());
             if (a != null) {
-                double[] last = e.getValue().get(e.getValue().size() - 1);
-                s.append(CurvePlot.text(xa.at(last[0]) - 4, ya.at(last[1]) - 5, "end", w.across().name() + " = "
+                double y = TOP + 8 + 14 * (k - 1);
+                double x = WIDTH - RIGHT + 10;
+                s.append("<line class=\"legend\" x1=\"").append(CurvePlot.fmt(x)).append("\" y1=\"").append(CurvePlot.fmt(y))
+                    .append("\" x2=\"").append(CurvePlot.fmt(x + 22)).append("\" y2=\"").append(CurvePlot.fmt(y))
+                    .append("\" stroke=\"#1b1b1b\" stroke-width=\"1.4\"")
+                    .append(dashes.isEmpty() ? "" : " stroke-dasharray=\"" + dashes + "\"").append("/>");
+                s.append(CurvePlot.text(x + 26, y + 3.5, "start", w.across().name() + " = "
                     + SweepText.number(a, acrossUnit, 3) + (acrossUnit == null || acrossUnit.symbol().isEmpty() ? ""
                     : " " + acrossUnit.symbol())));
             }

@@ -228,7 +228,7 @@ class CalcReportTest {
     @Test
     void aGridIsPlottedAsOneNamedLinePerValueOfItsSecondValue() {
         // F = 0.6 kg/m³ · V² · d · 1 m over V 10, 20, 30 m/s and d 0.1, 0.2 m: six rows, two lines of three points,
-        // the second dashed, each named at its end.
+        // the second dashed, each named in the legend beside the plot.
         Analysis a = new Workspace(new FileSources(), Settings.DEFAULT).analyzeText(Path.of("grid.plumb"), """
             input V = 20 m/s
             input d = 0.2 m
@@ -246,6 +246,8 @@ class CalcReportTest {
         assertTrue(plot.select("polyline.result").get(1).hasAttr("stroke-dasharray"));
         assertEquals(List.of("d = 0.1 m", "d = 0.2 m"), plot.select("text").eachText().stream().filter(t -> t.startsWith("d = "))
             .toList());
+        assertEquals(2, plot.select("line.legend").size());
+        assertTrue(plot.select("line.legend").get(1).hasAttr("stroke-dasharray"), "the legend shows each line's dashes");
     }
 
     @Test
