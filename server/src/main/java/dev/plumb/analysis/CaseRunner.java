@@ -7,11 +7,9 @@ import dev.plumb.diagnostics.Span;
 import dev.plumb.syntax.Statement;
 import dev.plumb.units.UnitRegistry;
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 /**
  * Runs one {@code case}: evaluates its right sides over the base values, evaluates the document
@@ -20,38 +18,18 @@ import java.util.Set;
  * and severity and the words "in case NAME:", pointing to where it arose; a case that changes
  * nothing is {@code case.no-change}.
  */
-final class CaseRunner {
-    private final StudyRun study;
-    private final Map<String, Statement> own;
-    private final List<Statement> statements;
-    private final Scope scope;
-    private final Reporter reporter;
-    private final String text;
-    private final UnitRegistry units;
-    private final Budget budget;
-    private final int digits;
+final class CaseRunner extends StudyRunner {
     private final java.nio.file.Path file;
-    /** The real run's findings, by code and place. */
-    private final Set<List<Object>> baseFindings = new HashSet<>();
 
     CaseRunner(StudyRun study, Map<String, Statement> own, List<Statement> statements, Scope scope, List<Diagnostic> base,
                Reporter reporter, String text, UnitRegistry units, Budget budget, int digits, java.nio.file.Path file) {
-        this.study = study;
-        this.own = own;
-        this.statements = statements;
-        this.scope = scope;
-        this.reporter = reporter;
-        this.text = text;
-        this.units = units;
-        this.budget = budget;
-        this.digits = digits;
+        super(study, own, statements, scope, base, reporter, text, units, budget, digits);
         this.file = file;
-        for (Diagnostic d : base) baseFindings.add(List.of(d.code(), d.span()));
     }
 
     Row.CaseRow run(Statement.Case c) {
         String label = c.name().text();
-        Evaluator sides = new Evaluator(scope, study.base(), Map.of(), reporter, text, units, budget);
+        Evaluator sides = overBase();
         Map<String, Value> given = new LinkedHashMap<>();
         boolean usable = true;
         for (Statement.Setting s : c.settings()) {
@@ -95,7 +73,7 @@ final class CaseRunner {
         }
         StudyRun.Outcome o = study.withSpreads(study.run(given, true), statements);
         for (Diagnostic d : o.findings()) {
-            if (d.code() == Code.INPUT_UNUSED || baseFindings.contains(List.of(d.code(), d.span()))) continue;
+            if (d.code() == Code.INPUT_UNUSED || inBase(d)) continue;
             List<Related> related = new ArrayList<>();
             related.add(new Related(file == null ? null : file.toString(), d.span(), "where it arises"));
             related.addAll(d.related());

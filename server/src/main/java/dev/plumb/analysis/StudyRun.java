@@ -40,19 +40,32 @@ final class StudyRun {
     private final Settings settings;
     private final Budget budget;
     private final Environment base;
-    /** Each own name → the own names that use it (the plan's dependencies, solve statements adjusted). */
-    private final Map<String, Set<String>> usedBy = new HashMap<>();
     /** The document's checks with the real run's rows, in order. */
     private final Map<Statement.Check, Row.CheckRow> checks;
-    /** The names each check reads. */
-    private final Map<Statement.Check, Set<String>> checkReads = new HashMap<>();
     private final Map<String, Set<String>> uses;
-    private boolean prepared;
-    /** What each set of given names makes evaluate again (a sweep asks the same set for every row). */
-    private final Map<Set<String>, Set<String>> downstream = new HashMap<>();
+    /** The reverse graph, made at the first run; shared with the runs around a case's or a row's values. */
+    private final Graph graph;
+
+    /** What the studies read of the document's dependencies: the same for every run of one analysis. */
+    private static final class Graph {
+        /** Each own name → the own names that use it (the plan's dependencies, solve statements adjusted). */
+        final Map<String, Set<String>> usedBy = new HashMap<>();
+        /** The names each check reads. */
+        final Map<Statement.Check, Set<String>> checkReads = new HashMap<>();
+        /** What each set of given names makes evaluate again (a sweep asks the same set for every row). */
+        final Map<Set<String>, Set<String>> downstream = new HashMap<>();
+        boolean prepared;
+    }
 
     StudyRun(Plan plan, Scope scope, Environment base, Map<String, Set<String>> uses,
              Map<Statement.Check, Row.CheckRow> checks, String text, Settings settings, UnitRegistry units, Budget budget) {
+        this(plan, scope, base, uses, checks, text, settings, units, budget, new Graph());
+    }
+
+    private StudyRun(Plan plan, Scope scope, Environment base, Map<String, Set<String>> uses,
+                     Map<Statement.Check, Row.CheckRow> checks, String text, Settings settings, UnitRegistry units,
+                     Budget budget, Graph graph) {
+        this.graph = graph;
         this.plan = plan;
         this.scope = scope;
         this.base = base;
@@ -69,27 +82,23 @@ final class StudyRun {
      * one costs an editor's keystroke a good part of its time.
      */
     private void prepare() {
-        if (prepared) return;
-        prepared = true;
+        if (graph.prepared) return;
+        graph.prepared = true;
         // The same adjustment the planner made: a solve statement depends on what its equation's definitions use.
         Map<String, Set<String>> adjusted = new HashMap<>(uses);
         SeekDependents.adjust(plan.own(), adjusted);
-        adjusted.forEach((name, deps) -> deps.forEach(d -> usedBy.computeIfAbsent(d, k -> new HashSet<>()).add(name)));
+        adjusted.forEach((name, deps) -> deps.forEach(d -> graph.usedBy.computeIfAbsent(d, k -> new HashSet<>()).add(name)));
         for (Statement.Check c : checks.keySet()) {
             Set<String> reads = new HashSet<>();
             for (Expr e : c.operands()) References.each(e, (n, span) -> reads.add(n));
-            checkReads.put(c, reads);
+            graph.checkReads.put(c, reads);
         }
     }
 
     /** The same document studied around {@code o}'s values (a case's, a sweep row's), sharing this run's graph and budget. */
     private StudyRun(StudyRun from, Outcome o) {
         this(from.plan, from.scope, o.values(), from.uses, rowsOf(from.checks, o.checks()), from.text, from.settings,
-            from.units, from.budget);
-        from.prepare();
-        usedBy.putAll(from.usedBy);
-        checkReads.putAll(from.checkReads);
-        prepared = true;
+            from.units, from.budget, from.graph);
     }
 
     /** The checks in order with another run's rows (an outcome lists them in the same order). */
@@ -138,13 +147,13 @@ final class StudyRun {
     Outcome run(Map<String, Value> given, boolean keep) {
         prepare();
         Reporter reporter = keep ? new Reporter() : Reporter.discarding();
-        Set<String> again = downstream.computeIfAbsent(Set.copyOf(given.keySet()), this::dependents);
+        Set<String> again = graph.downstream.computeIfAbsent(Set.copyOf(given.keySet()), this::dependents);
         EvaluationPass pass = new EvaluationPass(plan, scope, text, reporter, units, budget);
         Environment values = pass.rerun(base, given, again).values();
         CheckRunner runner = new CheckRunner(scope, values, reporter, text, settings, units, budget);
         List<Row.CheckRow> rows = new ArrayList<>(checks.size());
         for (var entry : checks.entrySet()) {
-            boolean reads = checkReads.get(entry.getKey()).stream().anyMatch(n -> again.contains(n) || given.containsKey(n));
+            boolean reads = graph.checkReads.get(entry.getKey()).stream().anyMatch(n -> again.contains(n) || given.containsKey(n));
             rows.add(reads ? runner.withinBudget(entry.getKey()) : entry.getValue());
         }
         return new Outcome(values, rows, keep ? reporter.all() : List.of(), pass.outOfTime());
@@ -153,7 +162,7 @@ final class StudyRun {
     /** Every own name that depends on {@code name}, directly or not, in no particular order. */
     Set<String> dependentsOf(String name) {
         prepare();
-        return downstream.computeIfAbsent(Set.of(name), this::dependents);
+        return graph.downstream.computeIfAbsent(Set.of(name), this::dependents);
     }
 
     /** Every own name that depends, directly or not, on one of {@code given} (not those themselves). */
@@ -162,7 +171,7 @@ final class StudyRun {
         List<String> todo = new ArrayList<>(given);
         while (!todo.isEmpty()) {
             String n = todo.remove(todo.size() - 1);
-            for (String user : usedBy.getOrDefault(n, Set.of())) {
+            for (String user : graph.usedBy.getOrDefault(n, Set.of())) {
                 if (!given.contains(user) && out.add(user)) todo.add(user);
             }
         }

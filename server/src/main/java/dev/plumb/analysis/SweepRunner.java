@@ -21,54 +21,29 @@ import java.util.Set;
  * rows where a check fails ({@code sweep.check-failed}) and the rows with any other new finding
  * ({@code sweep.row-findings}), each naming the rows.
  */
-final class SweepRunner {
+final class SweepRunner extends StudyRunner {
     /** The most rows one sweep may have: far more than a table or a plot can show. */
     static final int MAX_ROWS = 10_000;
     /** Relative slack when a whole number of steps reaches the end, so 0.1 steps from 0 reach 1. */
     private static final double REACH = 1e-9;
 
-    private final StudyRun study;
-    private final Map<String, Statement> own;
-    /** The document's statements: a row's checks `with spread` are judged at the row's own spreads. */
-    private final List<Statement> statements;
-    private final Scope scope;
-    private final Reporter reporter;
-    private final String text;
-    private final UnitRegistry units;
-    private final Budget budget;
-    private final int digits;
     /** The second value of the grid being run and its unit, for naming its rows; null in a one-way sweep. */
     private String acrossName;
     private Unit acrossUnit;
-    /** The real run's findings, by code and place: a row that only repeats one of them adds nothing. */
-    private final Set<List<Object>> baseFindings = new java.util.HashSet<>();
 
     SweepRunner(StudyRun study, Map<String, Statement> own, List<Statement> statements, Scope scope, List<Diagnostic> base,
                 Reporter reporter, String text, UnitRegistry units, Budget budget, int digits) {
-        this.study = study;
-        this.own = own;
-        this.statements = statements;
-        this.scope = scope;
-        this.reporter = reporter;
-        this.text = text;
-        this.units = units;
-        this.budget = budget;
-        this.digits = digits;
-        for (Diagnostic d : base) baseFindings.add(List.of(d.code(), d.span()));
+        super(study, own, statements, scope, base, reporter, text, units, budget, digits);
     }
 
     /** The sweep's row; one whose values cannot be made has no lines, and a finding says why. */
     Row.SweepRow run(Statement.Sweep s) {
         String name = s.name().text();
-        Binding.ValueBinding swept = study.base().get(name);
-        Evaluator ends = new Evaluator(scope, study.base(), Map.of(), reporter, text, units, budget);
+        Evaluator ends = overBase();
         List<Column> columns = columns(s, ends);
         List<String> checkSources = new ArrayList<>();
-        if (!(own.get(name) instanceof Statement.Definition) || swept == null) {
-            // A name defined nowhere was reported where it is written (name.unknown): once is enough.
-            if (own.containsKey(name) || scope.lookup(name) != null) invalid(s.name().span(), refusal(name));
-            return empty(s, null, columns, checkSources);
-        }
+        Binding.ValueBinding swept = varied(s.name());
+        if (swept == null) return empty(s, null, columns, checkSources);
         Values values = values(s.axis(), ends, swept);
         if (values == null) return empty(s, swept.display(), columns, checkSources);
         // A grid: every value of the first with every value of the second.
@@ -76,13 +51,8 @@ final class SweepRunner {
         String acrossName = second == null ? null : second.name().text();
         Values across = null;
         if (second != null) {
-            Binding.ValueBinding other = study.base().get(acrossName);
-            if (!(own.get(acrossName) instanceof Statement.Definition) || other == null) {
-                if (own.containsKey(acrossName) || scope.lookup(acrossName) != null) {
-                    invalid(second.name().span(), refusal(acrossName));
-                }
-                return empty(s, swept.display(), columns, checkSources);
-            }
+            Binding.ValueBinding other = varied(second.name());
+            if (other == null) return empty(s, swept.display(), columns, checkSources);
             if (acrossName.equals(name)) {
                 invalid(second.name().span(), "a grid varies two different values: " + name + " is varied already");
                 return empty(s, swept.display(), columns, checkSources);
@@ -135,7 +105,7 @@ final class SweepRunner {
                 } else if (d.code() != Code.CHECK_FAILED && d.code() != Code.CHECK_NOT_EVALUATED
                     && d.code() != Code.CHECK_FAILS_AT_BOUND
                     && d.severity() != dev.plumb.diagnostics.Severity.HINT
-                    && !baseFindings.contains(List.of(d.code(), d.span())) && trouble == null) {
+                    && !inBase(d) && trouble == null) {
                     trouble = definedAt(d.span()) + ": " + d.message();
                 }
             }
@@ -189,6 +159,15 @@ final class SweepRunner {
     private Row.SweepRow empty(Statement.Sweep s, Unit unit, List<Column> columns, List<String> checks) {
         return new Row.SweepRow(s.span(), s.name().text(), unit, null, columns.stream()
             .map(c -> new Row.SweepColumn(c.name(), c.unit())).toList(), checks, List.of(), false, s.note());
+    }
+
+    /** The real run's binding of a value the sweep varies; null, after a finding, when it is not one of the calc's own values. */
+    private Binding.ValueBinding varied(dev.plumb.syntax.Ident name) {
+        Binding.ValueBinding b = study.base().get(name.text());
+        if (own.get(name.text()) instanceof Statement.Definition && b != null) return b;
+        // A name defined nowhere was reported where it is written (name.unknown): once is enough.
+        if (own.containsKey(name.text()) || scope.lookup(name.text()) != null) invalid(name.span(), refusal(name.text()));
+        return null;
     }
 
     private String refusal(String name) {

@@ -16,12 +16,13 @@ import java.util.Locale;
  * range, an open ring with a cross outside it — with log axes where the range spans decades.
  */
 final class CurvePlot {
-    private static final int WIDTH = 420;
+    /** The report's plots share one frame: width, and the margins around the plotting area (in SVG units). */
+    static final int WIDTH = 420;
+    static final int LEFT = 62;
+    static final int RIGHT = 14;
+    static final int TOP = 12;
+    static final int BOTTOM = 40;
     private static final int HEIGHT = 220;
-    private static final int LEFT = 62;
-    private static final int RIGHT = 14;
-    private static final int TOP = 12;
-    private static final int BOTTOM = 40;
 
     private CurvePlot() {
     }

@@ -1,5 +1,11 @@
 package dev.plumb.report;
 
+import static dev.plumb.report.CurvePlot.BOTTOM;
+import static dev.plumb.report.CurvePlot.LEFT;
+import static dev.plumb.report.CurvePlot.RIGHT;
+import static dev.plumb.report.CurvePlot.TOP;
+import static dev.plumb.report.CurvePlot.WIDTH;
+
 import dev.plumb.analysis.Row;
 import dev.plumb.analysis.Value;
 import dev.plumb.present.SweepText;
@@ -15,12 +21,7 @@ import java.util.List;
  * span decades.
  */
 final class SweepPlot {
-    private static final int WIDTH = 420;
     private static final int HEIGHT = 220;
-    private static final int LEFT = 62;
-    private static final int RIGHT = 14;
-    private static final int TOP = 12;
-    private static final int BOTTOM = 40;
     /** The width a grid's legend adds on the right. */
     private static final int LEGEND = 130;
     /** The dash patterns of a grid's lines, in turn: solid, dashed, dotted, dash-dot. */

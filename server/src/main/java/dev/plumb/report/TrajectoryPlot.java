@@ -1,5 +1,11 @@
 package dev.plumb.report;
 
+import static dev.plumb.report.CurvePlot.BOTTOM;
+import static dev.plumb.report.CurvePlot.LEFT;
+import static dev.plumb.report.CurvePlot.RIGHT;
+import static dev.plumb.report.CurvePlot.TOP;
+import static dev.plumb.report.CurvePlot.WIDTH;
+
 import dev.plumb.analysis.Trajectory;
 import dev.plumb.units.QuantityFormat;
 import dev.plumb.units.Unit;
@@ -12,12 +18,7 @@ import java.util.Locale;
  * axes with round ticks in the units the values are shown in, and the stop marked with a dot.
  */
 final class TrajectoryPlot {
-    private static final int WIDTH = 420;
     private static final int HEIGHT = 200;
-    private static final int LEFT = 62;
-    private static final int RIGHT = 14;
-    private static final int TOP = 12;
-    private static final int BOTTOM = 40;
 
     private TrajectoryPlot() {
     }
